@@ -1,0 +1,3 @@
+export type { CitedConstant } from './citedConstant.ts';
+export * from './physical.ts';
+export * from './eddington.ts';
