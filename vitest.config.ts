@@ -1,0 +1,27 @@
+import { defineConfig } from 'vitest/config';
+
+// Two projects: fast unit/published-value/CLI tests, and browser end-to-end tests that build
+// the site and drive the system Chromium. `npm test` runs both.
+export default defineConfig({
+  test: {
+    projects: [
+      {
+        test: {
+          name: 'unit',
+          include: ['test/core/**/*.test.ts', 'test/catalog/**/*.test.ts', 'test/site/**/*.test.ts', 'test/scripts/**/*.test.ts'],
+          testTimeout: 60_000,
+        },
+      },
+      {
+        test: {
+          name: 'e2e',
+          include: ['test/e2e/**/*.test.ts'],
+          globalSetup: ['test/e2e/globalSetup.ts'],
+          testTimeout: 120_000,
+          hookTimeout: 600_000,
+          fileParallelism: false,
+        },
+      },
+    ],
+  },
+});
