@@ -1,0 +1,5 @@
+export * from './virialCalibration.ts';
+export * from './calibrations.ts';
+export * from './powerLawRelation.ts';
+export * from './lineContinuumRelations.ts';
+export * from './halphaHbetaWidth.ts';

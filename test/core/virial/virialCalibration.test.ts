@@ -1,0 +1,23 @@
+import { describe, it, expect } from 'vitest';
+import { inCalibrationRange, virialLogMass, type VirialCalibration } from '../../../src/core/virial/virialCalibration.ts';
+import { expectClose } from '../../helpers/expectClose.ts';
+
+const toy: VirialCalibration = {
+  id: 'toy', line: 'hbeta', label: 'toy', logEps: 0.1, a: 7, b: 0.5, c: 2, luminosity: 'line', logLpivot: 42,
+  scatterDex: 0.3, scatterProvenance: 'common practice', reference: 'none (test fixture)',
+  validity: { logL: [41, 43], fwhmKms: [1000, 5000] },
+};
+
+describe('virialLogMass and inCalibrationRange', () => {
+  it('evaluate logEps + a + b (log L − log Lpivot) + c (log FWHM − 3)', () => {
+    expectClose(virialLogMass(toy, 43, Math.log10(2000)), 0.1 + 7 + 0.5 + 2 * Math.log10(2), { atol: 1e-12, source: 'definition' });
+  });
+
+  it('accept the range edges and reject points outside in L or FWHM', () => {
+    expect(inCalibrationRange(toy, 41, 1000)).toBe(true);
+    expect(inCalibrationRange(toy, 43, 5000)).toBe(true);
+    expect(inCalibrationRange(toy, 43.01, 2000)).toBe(false);
+    expect(inCalibrationRange(toy, 42, 900)).toBe(false);
+    expect(inCalibrationRange(toy, NaN, 2000)).toBe(false);
+  });
+});
