@@ -1,0 +1,10 @@
+export type { CosmologyParams } from './cosmologyParams.ts';
+export type { Cosmology } from './cosmology.ts';
+export { COSMOLOGY_PRESETS } from './presets.ts';
+export { createCosmology } from './createCosmology.ts';
+export { getCosmology } from './getCosmology.ts';
+export { CosmologyError, densityParameters, type DensityParameters } from './densityParameters.ts';
+export { KOMATSU11_NEUTRINO_FIT, neutrinoOverPhotonDensity, type NeutrinoContent } from './neutrinoDensity.ts';
+export { createExpansion, type Expansion } from './expansion.ts';
+export { integrateAdaptive, kronrod15 } from './gaussKronrod.ts';
+export { TABLE_DU, TABLE_Z_MAX } from './cosmologyTables.ts';
