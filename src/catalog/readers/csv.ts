@@ -23,7 +23,7 @@ const MAX_META_COMMENTS = 1000;
  */
 export async function openCsv(path: string, format: 'csv' | 'tsv'): Promise<TableSource> {
   const delimiter = format === 'tsv' ? '\t' : ',';
-  let names: string[] | null = null;
+  let names: string[] | null = null as string[] | null;
   let inference: KindInference[] = [];
   let nRows = 0;
   const comments: string[] = [];
