@@ -1,0 +1,2 @@
+export * from './eddingtonLuminosity.ts';
+export * from './eddingtonAccretionRate.ts';
