@@ -1,0 +1,2 @@
+export * from './localRelation.ts';
+export * from './localRelations.ts';
