@@ -1,0 +1,17 @@
+// The full derived catalog as CSV, written at build time with DuckDB's COPY.
+import type { APIRoute } from 'astro';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { catalogCsv, loadCatalog } from '../../site/build/loadCatalog.ts';
+
+export const GET: APIRoute = async () => {
+  const { files } = await loadCatalog();
+  const dir = mkdtempSync(join(tmpdir(), 'census-csv-'));
+  try {
+    const bytes = await catalogCsv(files.parquet, join(dir, 'catalog.csv'));
+    return new Response(bytes, { headers: { 'content-type': 'text/csv; charset=utf-8' } });
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+};

@@ -1,0 +1,29 @@
+/**
+ * Draws the population charts of a page from the whole catalog (landing and object pages):
+ * asks DuckDB-WASM for the chart columns the catalog has, then hands the rows to the charts.
+ */
+import { queryCensus, TABLE, CensusDbError } from '../db/duckdb.ts';
+import { sqlIdent } from '../db/sqlIdent.ts';
+import { catalogColumns } from './catalogColumns.ts';
+import { CHART_COLUMNS, chartRows, drawPopulation } from './populationCharts.ts';
+
+export async function mountCatalogCharts(root: HTMLElement): Promise<void> {
+  const base = document.body.dataset.base ?? '/';
+  const highlight = root.dataset.highlight;
+  const settings = root.dataset.settings ? (JSON.parse(root.dataset.settings) as Record<string, unknown>) : undefined;
+  try {
+    const have = await catalogColumns();
+    const cols = CHART_COLUMNS.filter((c) => have.includes(c));
+    const rs = await queryCensus(`SELECT ${cols.map(sqlIdent).join(', ')} FROM ${TABLE}`);
+    drawPopulation(root, chartRows(rs), { base, settings, highlightIds: highlight ? [highlight] : undefined });
+  } catch (err) {
+    // The status line above the charts says what went wrong with the database; say it here too.
+    const message = err instanceof CensusDbError ? err.message : `The charts could not be drawn: ${String(err)}`;
+    for (const mount of root.querySelectorAll<HTMLElement>('[data-chart]')) {
+      const p = document.createElement('p');
+      p.className = 'chart-note';
+      p.textContent = message;
+      mount.replaceChildren(p);
+    }
+  }
+}

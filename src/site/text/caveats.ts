@@ -1,0 +1,12 @@
+/**
+ * The caveats of the trade, stated wherever derived numbers are shown. Plain sentences; the
+ * methods page adds the calibration-specific ones.
+ */
+export const CAVEATS: readonly string[] = [
+  'Single-epoch virial black-hole masses carry a systematic uncertainty of 0.3–0.5 dex, and the calibrations behind them were made on local AGN.',
+  'Broad lines in compact, red sources with dense gas may not trace virial motion: widths can be broadened by scattering or outflows, or the line may arise from gas that is not bound to the black hole.',
+  'Lensing magnification and dust corrections carry their own uncertainty, which enters the luminosities and so the masses.',
+];
+
+/** The extra caveat of the methods page. */
+export const EXTRAPOLATION_CAVEAT = 'The calibrations are local and are extrapolated here to z > 4, where nothing tests them directly.';
