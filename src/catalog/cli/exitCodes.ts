@@ -1,0 +1,11 @@
+/** Exit statuses of the `dawn-census` command. */
+export const EXIT = {
+  /** Done (rows with input problems are flagged, not fatal). */
+  ok: 0,
+  /** An unexpected failure (a bug, or the system refused a write); nothing was replaced. */
+  failure: 1,
+  /** The catalog or the config is unusable as a whole; nothing was written. */
+  catalog: 2,
+  /** The command line is wrong (sysexits EX_USAGE). */
+  usage: 64,
+} as const;

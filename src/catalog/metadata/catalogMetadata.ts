@@ -1,0 +1,33 @@
+import type { ColumnDoc } from './columnDoc.ts';
+import type { SettingsProvenance } from './settingsProvenance.ts';
+
+/** Key of the Parquet key/value metadata entry that holds the catalog metadata (JSON). */
+export const METADATA_KEY = 'dawn_census';
+
+/** Version of the layout of {@link CatalogMetadata}; raised when a field changes meaning. */
+export const METADATA_FORMAT = 'dawn-census-catalog/1';
+
+/**
+ * Everything a reader of a derived catalog needs to trust and reproduce it. Stored as JSON in
+ * the Parquet file (key `dawn_census`) and in the `<name>.meta.json` sidecar. Holds no
+ * timestamps or absolute paths, so the same input, config and seed give the same bytes.
+ */
+export interface CatalogMetadata {
+  format: typeof METADATA_FORMAT;
+  tool: { name: 'dawn-census'; version: string };
+  title?: string;
+  group?: string;
+  description?: string;
+  licence?: string;
+  citation?: string;
+  /** The input catalog: file name (no folder), format, SHA-256 of its bytes. */
+  input: { file: string; format: string; sha256: string };
+  /** The config file, or null values when the defaults were used. */
+  config: { file: string | null; sha256: string | null };
+  settings: SettingsProvenance;
+  /** Rows read, rows derived, rows flagged with input problems (listed in the rejection report), and problems found. */
+  counts: { rows: number; derived: number; flagged: number; problems: number };
+  /** File names (same folder) of the catalog, this sidecar and the rejection report. */
+  files: { catalog: string; meta: string; rejections: string };
+  columns: ColumnDoc[];
+}

@@ -1,0 +1,110 @@
+import type { LineId } from '../../core/derive/types.ts';
+import type { PackedField } from '../derive/packedDerived.ts';
+import type { ColumnDoc } from './columnDoc.ts';
+
+/** Which part of the settings a derived column's reference comes from (see derivedReference.ts). */
+export type ReferenceTopic =
+  | 'cosmology'
+  | 'lineLuminosity'
+  | 'continuum'
+  | 'virial'
+  | 'bolometric'
+  | 'eddington'
+  | 'growth'
+  | 'local';
+
+/** A derived output column: its documentation and the field of `DerivedObject` it holds. */
+export interface DerivedColumnSpec extends Omit<ColumnDoc, 'group' | 'reference'> {
+  source: PackedField | 'mbhMethod' | 'lbolMethod' | 'flags';
+  topic?: ReferenceTopic;
+}
+
+const LINE_LABEL: Record<LineId, { label: string; ucd: string }> = {
+  halpha: { label: 'broad Hα', ucd: 'phys.luminosity;em.line.Halpha' },
+  hbeta: { label: 'broad Hβ', ucd: 'phys.luminosity;em.line.Hbeta' },
+  mgii: { label: 'broad Mg II λ2798', ucd: 'phys.luminosity;em.line' },
+  civ: { label: 'broad C IV λ1549', ucd: 'phys.luminosity;em.line' },
+};
+
+/** The `log_lum_<line>` column of one line. */
+export function lineLuminosityColumn(line: LineId): DerivedColumnSpec {
+  const { label, ucd } = LINE_LABEL[line];
+  return {
+    name: `log_lum_${line}`,
+    kind: 'float',
+    unit: 'log(erg/s)',
+    description: `log10 of the ${label} luminosity after magnification and dust corrections (nominal inputs)`,
+    ucd,
+    source: `logLum.${line}`,
+    topic: 'lineLuminosity',
+  };
+}
+
+const f = (
+  name: string,
+  source: PackedField,
+  unit: string,
+  description: string,
+  ucd: string | undefined,
+  topic: ReferenceTopic | undefined,
+): DerivedColumnSpec => ({ name, kind: 'float', unit, description, source, ...(ucd ? { ucd } : {}), ...(topic ? { topic } : {}) });
+
+/** Derived columns before the per-line luminosities. */
+export const DERIVED_HEAD: readonly DerivedColumnSpec[] = [
+  f('age_gyr', 'ageGyr', 'Gyr', 'Age of the universe at the redshift of the object', 'time.age', 'cosmology'),
+  f('dl_mpc', 'dlMpc', 'Mpc', 'Luminosity distance', 'pos.distance', 'cosmology'),
+];
+
+/** Derived columns after the per-line luminosities, in output order. */
+export const DERIVED_TAIL: readonly DerivedColumnSpec[] = [
+  f('log_l5100', 'logL5100', 'log(erg/s)', 'log10 of the continuum λL_λ at 5100 Å (measured, or from broad Hα), magnification-corrected', 'phys.luminosity;em.opt', 'continuum'),
+  f('log_mbh', 'logMbh', 'log(solMass)', 'log10 of the virial black-hole mass from the first line of the line priority that is measured (nominal inputs)', 'phys.mass', 'virial'),
+  { name: 'mbh_method', kind: 'string', description: 'Line and calibration that gave log_mbh', ucd: 'meta.code', source: 'mbhMethod' },
+  f('log_lbol', 'logLbol', 'log(erg/s)', 'log10 of the bolometric luminosity', 'phys.luminosity', 'bolometric'),
+  { name: 'lbol_method', kind: 'string', description: 'Bolometric correction that gave log_lbol', ucd: 'meta.code', source: 'lbolMethod' },
+  f('log_edd_ratio', 'logEddRatio', '', 'log10 of the Eddington ratio L_bol / L_Edd', 'arith.ratio', 'eddington'),
+  f('p_super_eddington', 'pSuperEddington', '', 'Monte Carlo probability that the Eddington ratio exceeds 1', 'stat.probability', 'eddington'),
+  f('log_mseed', 'logMseed', 'log(solMass)', 'log10 of the seed mass at z_seed that grows to the black-hole mass at the assumed Eddington ratio, efficiency and duty cycle', 'phys.mass', 'growth'),
+  f('lambda_req_light', 'lambdaReqLight', '', 'Constant Eddington ratio a light seed needs to grow into the black hole by the observed redshift', 'arith.ratio', 'growth'),
+  f('lambda_req_heavy', 'lambdaReqHeavy', '', 'Constant Eddington ratio a heavy seed needs to grow into the black hole by the observed redshift', 'arith.ratio', 'growth'),
+  f('delta_log_mbh_local', 'deltaLogMbhLocal', 'dex', 'Offset of log_mbh from the local scaling relation at the host stellar mass or velocity dispersion', 'arith.diff;phys.mass', 'local'),
+  f('local_offset_sigma', 'localOffsetSigma', '', 'delta_log_mbh_local in units of the combined scatter (intrinsic and measurement)', undefined, 'local'),
+  f('p_above_local', 'pAboveLocal', '', 'Monte Carlo probability that the black hole lies above the local relation', 'stat.probability', 'local'),
+  {
+    name: 'flags',
+    kind: 'string',
+    description: "Comma-separated flags ('' when none), e.g. invalid_input, mbh_upper_limit, no_host_mass, calibration_out_of_range, no_dust_correction",
+    ucd: 'meta.code.qual',
+    source: 'flags',
+  },
+];
+
+const PERCENTILE_OF: readonly { base: string; field: 'logMbh' | 'logLbol' | 'logEddRatio' | 'logMseed' | 'deltaLogMbhLocal'; unit: string; ucd: string; what: string; topic: ReferenceTopic }[] = [
+  { base: 'log_mbh', field: 'logMbh', unit: 'log(solMass)', ucd: 'phys.mass', what: 'log_mbh', topic: 'virial' },
+  { base: 'log_lbol', field: 'logLbol', unit: 'log(erg/s)', ucd: 'phys.luminosity', what: 'log_lbol', topic: 'bolometric' },
+  { base: 'log_edd_ratio', field: 'logEddRatio', unit: '', ucd: 'arith.ratio', what: 'log_edd_ratio', topic: 'eddington' },
+  { base: 'log_mseed', field: 'logMseed', unit: 'log(solMass)', ucd: 'phys.mass', what: 'log_mseed', topic: 'growth' },
+  { base: 'delta_log_mbh_local', field: 'deltaLogMbhLocal', unit: 'dex', ucd: 'arith.diff;phys.mass', what: 'delta_log_mbh_local', topic: 'local' },
+];
+
+/**
+ * Monte Carlo percentile columns `<q>_p16`, `<q>_p50`, `<q>_p84`. Only the median has a UCD
+ * (UCD1+ has `stat.median` but no word for other percentiles).
+ */
+export const DERIVED_PERCENTILES: readonly DerivedColumnSpec[] = PERCENTILE_OF.flatMap(({ base, field, unit, ucd, what, topic }) =>
+  (['p16', 'p50', 'p84'] as const).map((p) =>
+    f(
+      `${base}_${p}`,
+      `pct.${field}.${p}`,
+      unit,
+      `${p.slice(1)}th percentile of the Monte Carlo distribution of ${what} (measurement errors and intrinsic scatter)`,
+      p === 'p50' ? `${ucd};stat.median` : undefined,
+      topic,
+    ),
+  ),
+);
+
+/** Every derived column for a catalog that measures `lines`, in output order. */
+export function derivedColumnSpecs(lines: readonly LineId[]): DerivedColumnSpec[] {
+  return [...DERIVED_HEAD, ...lines.map(lineLuminosityColumn), ...DERIVED_TAIL, ...DERIVED_PERCENTILES];
+}

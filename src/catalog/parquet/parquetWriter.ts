@@ -1,0 +1,146 @@
+import { mkdir } from 'node:fs/promises';
+import path from 'node:path';
+import { DuckDBInstance } from '@duckdb/node-api';
+import type { DuckDBAppender, DuckDBConnection } from '@duckdb/node-api';
+import { sqlIdentifier, sqlString } from './sqlLiteral.ts';
+
+/** Storage kind of an output column (the readers' `ColumnInfo.kind`). */
+export type ValueKind = 'float' | 'int' | 'bool' | 'string';
+
+/** One column of the Parquet file: its name and storage kind. */
+export interface ParquetColumn {
+  name: string;
+  kind: ValueKind;
+}
+
+/** A value handed to `appendRow`; `null`/`undefined` (and NaN in a float column) are written as NULL. */
+export type CellValue = number | bigint | string | boolean | null | undefined;
+
+/** Streams rows into a scratch DuckDB table, then writes them to one Parquet file. */
+export interface ParquetWriter {
+  /** Appends one row: `values[i]` belongs to `columns[i]`. The array may be reused by the caller. */
+  appendRow(values: ArrayLike<CellValue>): void;
+  /** Rows appended so far. */
+  readonly rowCount: number;
+  /**
+   * Writes every appended row, in insertion order, to `parquetPath` (zstd, single-threaded so
+   * that the bytes depend only on the rows and the metadata), with `kvMetadata` as Parquet
+   * key/value metadata, then closes the scratch database.
+   */
+  finish(kvMetadata: Readonly<Record<string, string>>): Promise<void>;
+  /** Closes the scratch database without writing; never throws. */
+  abort(): Promise<void>;
+}
+
+/** Options of `openParquetWriter`. */
+export interface ParquetWriterOptions {
+  /** Directory for the scratch DuckDB database (created; the caller removes it). */
+  scratchDir: string;
+  /** DuckDB memory limit, e.g. '512MB': the scratch table spills to disk beyond it. */
+  memoryLimit?: string;
+}
+
+const SQL_TYPE: Record<ValueKind, string> = { float: 'DOUBLE', int: 'BIGINT', bool: 'BOOLEAN', string: 'VARCHAR' };
+
+/**
+ * Opens a writer for `parquetPath` with the given columns. Rows go to a DuckDB database on disk
+ * in `scratchDir`, so a million-row catalog does not sit in memory, and are copied to Parquet by
+ * `finish`.
+ */
+export async function openParquetWriter(
+  parquetPath: string,
+  columns: readonly ParquetColumn[],
+  options: ParquetWriterOptions,
+): Promise<ParquetWriter> {
+  await mkdir(options.scratchDir, { recursive: true });
+  const instance = await DuckDBInstance.create(path.join(options.scratchDir, 'rows.duckdb'), {
+    threads: '1',
+    preserve_insertion_order: 'true',
+    memory_limit: options.memoryLimit ?? '512MB',
+    temp_directory: path.join(options.scratchDir, 'spill'),
+  });
+  let connection: DuckDBConnection | null = null;
+  let appender: DuckDBAppender | null = null;
+  const close = (): void => {
+    try {
+      appender?.closeSync();
+    } catch {
+      // already closed or failed: nothing more to release
+    }
+    appender = null;
+    connection?.closeSync();
+    connection = null;
+    instance.closeSync();
+  };
+  try {
+    connection = await instance.connect();
+    const defs = columns.map((c) => `${sqlIdentifier(c.name)} ${SQL_TYPE[c.kind]}`).join(', ');
+    await connection.run(`CREATE TABLE rows (${defs})`);
+    appender = await connection.createAppender('rows');
+  } catch (error) {
+    close();
+    throw error;
+  }
+  const app = appender;
+  const con = connection;
+  const put = columns.map((c) => appendFunction(app, c.kind));
+  let rowCount = 0;
+
+  return {
+    get rowCount() {
+      return rowCount;
+    },
+    appendRow(values) {
+      for (let i = 0; i < put.length; i++) {
+        const v = values[i];
+        if (v === null || v === undefined) app.appendNull();
+        else put[i]!(v);
+      }
+      app.endRow();
+      rowCount++;
+    },
+    async finish(kvMetadata) {
+      try {
+        app.flushSync();
+        app.closeSync();
+        appender = null;
+        const kv = Object.entries(kvMetadata)
+          .map(([k, v]) => `${sqlString(k)}: ${sqlString(v)}`)
+          .join(', ');
+        const kvClause = kv ? `, KV_METADATA {${kv}}` : '';
+        await con.run(`COPY rows TO ${sqlString(parquetPath)} (FORMAT parquet, COMPRESSION zstd${kvClause})`);
+      } finally {
+        close();
+      }
+    },
+    async abort() {
+      try {
+        close();
+      } catch {
+        // reporting another error: a failing close must not hide it
+      }
+    },
+  };
+}
+
+function appendFunction(app: DuckDBAppender, kind: ValueKind): (v: number | bigint | string | boolean) => void {
+  switch (kind) {
+    case 'float':
+      return (v) => {
+        const x = typeof v === 'number' ? v : Number(v);
+        if (Number.isNaN(x)) app.appendNull();
+        else app.appendDouble(x);
+      };
+    case 'int':
+      return (v) => {
+        if (typeof v === 'bigint') app.appendBigInt(v);
+        else if (typeof v === 'number' && Number.isInteger(v)) app.appendBigInt(BigInt(v));
+        else if (typeof v === 'boolean') app.appendBigInt(v ? 1n : 0n);
+        else app.appendNull();
+      };
+    case 'bool':
+      return (v) => app.appendBoolean(typeof v === 'boolean' ? v : Boolean(v));
+    case 'string':
+      return (v) => app.appendVarchar(typeof v === 'string' ? v : String(v));
+  }
+}

@@ -1,0 +1,91 @@
+import { mkdtemp, readdir, readFile, rm } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { DuckDBInstance } from '@duckdb/node-api';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { openParquetWriter } from '../../../src/catalog/parquet/parquetWriter.ts';
+import type { CellValue, ParquetColumn } from '../../../src/catalog/parquet/parquetWriter.ts';
+
+let dir: string;
+beforeEach(async () => {
+  dir = await mkdtemp(path.join(tmpdir(), 'dc-parquet-'));
+});
+afterEach(async () => {
+  await rm(dir, { recursive: true, force: true });
+});
+
+const COLUMNS: ParquetColumn[] = [
+  { name: 'id', kind: 'string' },
+  { name: 'row', kind: 'int' },
+  { name: 'x', kind: 'float' },
+  { name: 'ok', kind: 'bool' },
+  { name: 'odd "name", with comma', kind: 'float' },
+];
+
+async function writeRows(file: string, rows: CellValue[][], kv: Record<string, string>): Promise<void> {
+  const w = await openParquetWriter(file, COLUMNS, { scratchDir: path.join(dir, `scratch-${path.basename(file)}`) });
+  const buf: CellValue[] = new Array(COLUMNS.length);
+  for (const r of rows) {
+    for (let i = 0; i < r.length; i++) buf[i] = r[i];
+    w.appendRow(buf);
+  }
+  expect(w.rowCount).toBe(rows.length);
+  await w.finish(kv);
+}
+
+async function query(sql: string): Promise<Record<string, unknown>[]> {
+  const db = await DuckDBInstance.create(':memory:');
+  const con = await db.connect();
+  try {
+    return (await con.runAndReadAll(sql)).getRowObjectsJS() as Record<string, unknown>[];
+  } finally {
+    con.closeSync();
+    db.closeSync();
+  }
+}
+
+describe('openParquetWriter', () => {
+  it('writes the rows in insertion order with their kinds, nulls for null, undefined and NaN', async () => {
+    const file = path.join(dir, 'a.parquet');
+    await writeRows(
+      file,
+      [
+        ['b', 2, 1.5, true, -1],
+        ['a', 1, Number.NaN, null, undefined],
+        ['c', 3, null, false, 2.25],
+      ],
+      {},
+    );
+    const rows = await query(`SELECT * FROM '${file}'`);
+    expect(rows).toEqual([
+      { id: 'b', row: 2n, x: 1.5, ok: true, 'odd "name", with comma': -1 },
+      { id: 'a', row: 1n, x: null, ok: null, 'odd "name", with comma': null },
+      { id: 'c', row: 3n, x: null, ok: false, 'odd "name", with comma': 2.25 },
+    ]);
+  });
+
+  it('stores key/value metadata, quotes included, readable with parquet_kv_metadata', async () => {
+    const file = path.join(dir, 'kv.parquet');
+    const json = JSON.stringify({ note: "it's \"quoted\"", n: [1, 2] });
+    await writeRows(file, [['a', 1, 1, true, 1]], { dawn_census: json });
+    const kv = await query(`SELECT decode(key) AS k, decode(value) AS v FROM parquet_kv_metadata('${file}')`);
+    expect(kv).toContainEqual({ k: 'dawn_census', v: json });
+  });
+
+  it('gives byte-identical files for the same rows and metadata', async () => {
+    const rows: CellValue[][] = Array.from({ length: 5000 }, (_, i) => [`o${i}`, i + 1, i / 7, i % 2 === 0, i % 3 ? i : null]);
+    await writeRows(path.join(dir, 'one.parquet'), rows, { k: 'v' });
+    await writeRows(path.join(dir, 'two.parquet'), rows, { k: 'v' });
+    const [a, b] = await Promise.all([readFile(path.join(dir, 'one.parquet')), readFile(path.join(dir, 'two.parquet'))]);
+    expect(a.length).toBeGreaterThan(0);
+    expect(a.equals(b)).toBe(true);
+  });
+
+  it('writes nothing when aborted', async () => {
+    const file = path.join(dir, 'aborted.parquet');
+    const w = await openParquetWriter(file, COLUMNS, { scratchDir: path.join(dir, 'scratch') });
+    w.appendRow(['a', 1, 1, true, 1]);
+    await w.abort();
+    expect(await readdir(dir)).not.toContain('aborted.parquet');
+  });
+});
