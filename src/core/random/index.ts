@@ -1,0 +1,10 @@
+export type { Rng } from './rng.ts';
+export { createRng } from './createRng.ts';
+export { seedFor } from './seedFor.ts';
+export { mix32, splitmix32 } from './splitmix32.ts';
+export { standardNormal } from './standardNormal.ts';
+export { fillNormal } from './fillNormal.ts';
+export { splitNormal } from './splitNormal.ts';
+export { selectInPlace } from './selectInPlace.ts';
+export { quantile, lerp } from './quantile.ts';
+export { percentiles16_50_84 } from './percentiles.ts';

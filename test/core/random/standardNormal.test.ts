@@ -1,0 +1,90 @@
+import { describe, expect, it } from 'vitest';
+import { createRng, fillNormal, standardNormal } from '../../../src/core/random/index.ts';
+import { normalCdf } from './normalCdf.ts';
+
+describe('standardNormal', () => {
+  const n = 1_000_000;
+  const rng = createRng(31415);
+  const x = new Float64Array(n);
+  for (let i = 0; i < n; i++) x[i] = standardNormal(rng);
+
+  it('has mean 0 and variance 1 within 5σ for N = 1e6', () => {
+    let s = 0;
+    let s2 = 0;
+    for (const v of x) {
+      s += v;
+      s2 += v * v;
+    }
+    const mean = s / n;
+    const variance = s2 / n - mean * mean;
+    expect(Math.abs(mean)).toBeLessThan(5 / Math.sqrt(n)); // σ(mean) = 1/√N
+    expect(Math.abs(variance - 1)).toBeLessThan(5 * Math.sqrt(2 / n)); // σ(var) = √(2/N)
+  });
+
+  it('follows the normal CDF (Kolmogorov–Smirnov, N = 1e6, critical distance at α = 0.001)', () => {
+    const sorted = Float64Array.from(x).sort();
+    let d = 0;
+    for (let i = 0; i < n; i += 1) {
+      const f = normalCdf(sorted[i] as number);
+      d = Math.max(d, Math.abs(f - i / n), Math.abs(f - (i + 1) / n));
+    }
+    expect(d).toBeLessThan(1.95 / Math.sqrt(n)); // KS α = 0.001 critical value 1.95/√N
+  });
+
+  it('matches the normal density in 200 narrow bins over [−4, 4] (χ², N = 1e6)', () => {
+    // Narrow bins see the ziggurat's wedge and layer edges, which the KS distance averages out.
+    const nb = 200;
+    const w = 8 / nb;
+    const counts = new Array<number>(nb + 2).fill(0);
+    for (const v of x) {
+      const b = v < -4 ? 0 : v >= 4 ? nb + 1 : 1 + Math.floor((v + 4) / w);
+      counts[b] = (counts[b] as number) + 1;
+    }
+    let chi2 = 0;
+    for (let b = 0; b < nb + 2; b++) {
+      const lo = b === 0 ? -Infinity : -4 + (b - 1) * w;
+      const hi = b === nb + 1 ? Infinity : -4 + b * w;
+      const e = n * ((hi === Infinity ? 1 : normalCdf(hi)) - (lo === -Infinity ? 0 : normalCdf(lo)));
+      chi2 += ((counts[b] as number) - e) ** 2 / e;
+    }
+    // 201 degrees of freedom: mean 201, σ √402 ≈ 20; 5σ above the mean ≈ 301.
+    expect(chi2).toBeLessThan(301);
+  });
+
+  it('puts the right fraction in the tails beyond 1σ and beyond the ziggurat base (3.44σ)', () => {
+    let beyond1 = 0;
+    let beyond35 = 0;
+    for (const v of x) {
+      if (Math.abs(v) > 1) beyond1++;
+      if (Math.abs(v) > 3.5) beyond35++;
+    }
+    // 2(1 − Φ(1)) = 0.31731 and 2(1 − Φ(3.5)) = 4.6526e-4 (computed with scipy 1.10 norm.sf); binomial 5σ.
+    const p1 = 2 * 0.15865525393145707;
+    const p35 = 0.00046525815807105003;
+    expect(Math.abs(beyond1 - n * p1)).toBeLessThan(5 * Math.sqrt(n * p1 * (1 - p1)));
+    expect(Math.abs(beyond35 - n * p35)).toBeLessThan(5 * Math.sqrt(n * p35 * (1 - p35)));
+  });
+
+  it('is symmetric: as many negative as positive deviates within 5σ', () => {
+    let neg = 0;
+    for (const v of x) if (v < 0) neg++;
+    expect(Math.abs(neg - n / 2)).toBeLessThan(5 * Math.sqrt(n / 4));
+  });
+});
+
+describe('fillNormal', () => {
+  it('fills with the given mean and sigma (N = 2e5, 5σ)', () => {
+    const n = 200_000;
+    const out = fillNormal(createRng(3), new Float64Array(n), 10, 2.5);
+    let s = 0;
+    let s2 = 0;
+    for (const v of out) {
+      s += v;
+      s2 += v * v;
+    }
+    const mean = s / n;
+    const sd = Math.sqrt(s2 / n - mean * mean);
+    expect(Math.abs(mean - 10)).toBeLessThan((5 * 2.5) / Math.sqrt(n));
+    expect(Math.abs(sd - 2.5)).toBeLessThan((5 * 2.5) / Math.sqrt(2 * n)); // σ(s) ≈ σ/√(2N)
+  });
+});
