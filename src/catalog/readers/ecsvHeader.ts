@@ -94,7 +94,7 @@ function isRecord(x: unknown): x is Record<string, unknown> {
 }
 
 /** Turns the Maps that YAML 1.1 `!!omap` produces into plain objects, recursively. */
-function toPlain(x: unknown): unknown {
+export function toPlain(x: unknown): unknown {
   if (x instanceof Map) {
     const o: Record<string, unknown> = {};
     for (const [k, v] of x) o[String(k)] = toPlain(v);
