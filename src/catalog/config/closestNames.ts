@@ -1,22 +1,24 @@
 /**
- * Edit distance (Levenshtein: insertions, deletions, substitutions each cost 1) between two
- * strings, compared case-insensitively. Used only for "did you mean" hints, so short inputs.
+ * Edit distance between two strings, compared case-insensitively: insertions, deletions,
+ * substitutions and swaps of two neighbours each cost 1 (optimal string alignment distance).
+ * Used only for "did you mean" hints, so short inputs.
  */
 export function editDistance(a: string, b: string): number {
   const s = a.toLowerCase();
   const t = b.toLowerCase();
-  let prev = new Array<number>(t.length + 1);
-  let cur = new Array<number>(t.length + 1);
-  for (let j = 0; j <= t.length; j++) prev[j] = j;
+  const w = t.length + 1;
+  const d = new Array<number>((s.length + 1) * w);
+  for (let i = 0; i <= s.length; i++) d[i * w] = i;
+  for (let j = 0; j <= t.length; j++) d[j] = j;
   for (let i = 1; i <= s.length; i++) {
-    cur[0] = i;
     for (let j = 1; j <= t.length; j++) {
-      const sub = (prev[j - 1] as number) + (s[i - 1] === t[j - 1] ? 0 : 1);
-      cur[j] = Math.min(sub, (prev[j] as number) + 1, (cur[j - 1] as number) + 1);
+      const cost = s[i - 1] === t[j - 1] ? 0 : 1;
+      let v = Math.min(d[(i - 1) * w + j]! + 1, d[i * w + j - 1]! + 1, d[(i - 1) * w + j - 1]! + cost);
+      if (i > 1 && j > 1 && s[i - 1] === t[j - 2] && s[i - 2] === t[j - 1]) v = Math.min(v, d[(i - 2) * w + j - 2]! + 1);
+      d[i * w + j] = v;
     }
-    [prev, cur] = [cur, prev];
   }
-  return prev[t.length] as number;
+  return d[s.length * w + t.length]!;
 }
 
 /**

@@ -96,6 +96,7 @@ export function normalizeChunk(chunk: TableChunk, plan: ColumnPlan): NormalizedR
   const flags: (boolean | null)[] = new Array<boolean | null>(n).fill(null);
   const res = cellResult();
   const idCells = chunk.columns[cols[idPos]!.sourceIndex]!;
+  const cells = cols.map((c) => chunk.columns[c.sourceIndex]!);
   const passIdx = plan.passthrough.map((p) => p.sourceIndex);
   const out: NormalizedRow[] = new Array<NormalizedRow>(chunk.nRows);
 
@@ -104,48 +105,44 @@ export function normalizeChunk(chunk: TableChunk, plan: ColumnPlan): NormalizedR
     const id = idOf(idCells[r] ?? null);
     const canonical: Record<string, number | string | boolean | null> = {};
     const problems: RowProblem[] = [];
-    const problem = (col: PlannedColumn, value: string, reason: string, withUnit: boolean): void => {
-      problems.push(rowProblem(row, id, col, value, reason, withUnit));
-    };
-
     for (let j = 0; j < n; j++) {
       const col = cols[j]!;
-      const cell = chunk.columns[col.sourceIndex]![r] ?? null;
+      const cell = cells[j]![r] ?? null;
       if (j === idPos) {
         canonical[col.name] = id;
-        if (id === '') problem(col, '', 'is empty', false);
+        if (id === '') problems.push(rowProblem(row, id, col, '', 'is empty', false));
         continue;
       }
       if (col.kind === 'bool') {
         readBool(cell, res);
         flags[j] = res.status === CELL_OK ? res.bool : null;
         canonical[col.name] = flags[j] ?? null;
-        if (res.status === CELL_NOT_BOOLEAN) problem(col, showCell(cell), 'must be true or false', false);
+        if (res.status === CELL_NOT_BOOLEAN) problems.push(rowProblem(row, id, col, showCell(cell), 'must be true or false', false));
         continue;
       }
       readNumber(cell, res);
       values[j] = NaN;
       canonical[col.name] = null;
       if (res.status === CELL_EMPTY) {
-        if (j === zPos) problem(col, '', 'is empty', false);
+        if (j === zPos) problems.push(rowProblem(row, id, col, '', 'is empty', false));
         continue;
       }
       if (res.status === CELL_NOT_A_NUMBER) {
-        problem(col, showCell(cell), 'not a number', false);
+        problems.push(rowProblem(row, id, col, showCell(cell), 'not a number', false));
         continue;
       }
       if (res.status === CELL_NOT_FINITE) {
-        problem(col, showCell(cell), 'must be a finite number', false);
+        problems.push(rowProblem(row, id, col, showCell(cell), 'must be a finite number', false));
         continue;
       }
       const v = col.convert(res.num);
       if (!Number.isFinite(v)) {
-        problem(col, showCell(cell), 'must be a finite number', true);
+        problems.push(rowProblem(row, id, col, showCell(cell), 'must be a finite number', true));
         continue;
       }
       const reason = failedLimit(col, v);
       if (reason !== undefined) {
-        problem(col, showCell(cell), reason, true);
+        problems.push(rowProblem(row, id, col, showCell(cell), reason, true));
         continue;
       }
       values[j] = v;
@@ -155,7 +152,7 @@ export function normalizeChunk(chunk: TableChunk, plan: ColumnPlan): NormalizedR
     if (id !== '') {
       const first = plan.seenIds.get(id);
       if (first === undefined) plan.seenIds.set(id, row);
-      else problem(cols[idPos]!, shorten(id), `duplicate of row ${first}`, false);
+      else problems.push(rowProblem(row, id, cols[idPos]!, shorten(id), `duplicate of row ${first}`, false));
     }
 
     const passthrough: Cell[] = new Array<Cell>(passIdx.length);

@@ -6,6 +6,7 @@ describe('closestNames', () => {
     expect(editDistance('kitten', 'sitting')).toBe(3); // textbook example (common practice, no source)
     expect(editDistance('FWHM', 'fwhm')).toBe(0);
     expect(editDistance('', 'abc')).toBe(3);
+    expect(editDistance('ligth', 'light')).toBe(1); // a swap of neighbours counts once
   });
 
   it('suggests names within a third of their length, nearest first', () => {

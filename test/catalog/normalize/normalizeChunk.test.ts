@@ -116,8 +116,11 @@ describe('normalizeChunk checks each value and reports it in one line', () => {
   it('fills the problem fields: row, id, canonical column, value as given, reason', async () => {
     const rows = await normalize([['id', ['A', 'B']], ['z', [5, 6]], ['FWHM_HALPHA', [1000, '-7']]]);
     expect(rows[1]!.problems).toEqual([
-      { row: 2, id: 'B', column: 'fwhm_halpha', value: '-7', reason: 'must be positive', message: 'row 2 (id B): fwhm_halpha (column FWHM_HALPHA) = -7 km/s: must be positive' },
+      { row: 2, id: 'B', column: 'fwhm_halpha', value: '-7', reason: 'must be positive', message: 'row 2 (id B): fwhm_halpha = -7 km/s: must be positive' },
     ]);
+    // A column whose name differs from the canonical one by more than case is named in the message.
+    const mapped = await normalize([['id', ['A']], ['z', [5]], ['W_HA', [-7]]], cfgWith({ fwhm_halpha: { source: 'W_HA' } }));
+    expect(mapped[0]!.problems[0]?.message).toBe('row 1 (id A): fwhm_halpha (column W_HA) = -7 km/s: must be positive');
   });
 
   it('cuts a very long value or id in the message', async () => {
