@@ -10,7 +10,7 @@ export const GET: APIRoute = async () => {
   const dir = mkdtempSync(join(tmpdir(), 'census-csv-'));
   try {
     const bytes = await catalogCsv(files.parquet, join(dir, 'catalog.csv'));
-    return new Response(bytes, { headers: { 'content-type': 'text/csv; charset=utf-8' } });
+    return new Response(new Uint8Array(bytes), { headers: { 'content-type': 'text/csv; charset=utf-8' } });
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }

@@ -11,6 +11,8 @@ export interface ColumnMeta {
   description: string;
   ucd?: string;
   reference?: string;
+  /** Where the column comes from, when the sidecar says: 'key', 'input', 'passthrough' or 'derived'. */
+  group?: string;
 }
 
 export interface SiteMeta {
@@ -62,6 +64,7 @@ function columnsOf(v: unknown): Record<string, ColumnMeta> {
       description: str(c.description) ?? '',
       ucd: str(c.ucd),
       reference: str(c.reference),
+      group: str(c.group),
     };
   };
   if (Array.isArray(v)) for (const c of v) if (isRecord(c) && str(c.name)) add(c.name as string, c);

@@ -112,8 +112,8 @@ export async function queryCensus(sql: string): Promise<ResultSet> {
   } catch (err) {
     throw new CensusDbError(friendlyQueryError(err));
   }
-  const names = table.schema.fields.map((f) => f.name);
-  const types = table.schema.fields.map((f) => String(f.type));
+  const names = table.schema.fields.map((f: { name: string }) => f.name);
+  const types = table.schema.fields.map((f: { type: unknown }) => String(f.type));
   const columns: unknown[][] = [];
   for (let c = 0; c < names.length; c++) {
     const vec = table.getChildAt(c);

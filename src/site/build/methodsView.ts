@@ -1,0 +1,135 @@
+/**
+ * What the methods page and the object pages' provenance say, read from the catalog's
+ * metadata: the cosmology, each calibration in use with its formula, scatter and reference,
+ * the bolometric method, the constants, the growth assumptions and the Monte Carlo settings.
+ * The sidecar records the settings (DeriveSettings) and, beside them, the records behind each
+ * id (src/catalog/metadata/settingsProvenance.ts); this reads either layout.
+ */
+import type { SiteMeta } from './siteMeta.ts';
+
+type Rec = Record<string, unknown>;
+const isRec = (v: unknown): v is Rec => typeof v === 'object' && v !== null && !Array.isArray(v);
+const str = (v: unknown): string | undefined => (typeof v === 'string' && v !== '' ? v : typeof v === 'number' ? String(v) : undefined);
+
+export interface NamedValue {
+  name: string;
+  value: string;
+  unit?: string;
+  reference?: string;
+}
+
+export interface CalibrationView {
+  line: string;
+  id: string;
+  label?: string;
+  formula?: string;
+  scatter?: string;
+  reference?: string;
+  validity?: string;
+  notes?: string;
+}
+
+export interface MethodsView {
+  cosmology: { id: string; name?: string; params: NamedValue[]; reference?: string };
+  calibrations: CalibrationView[];
+  linePriority: string[];
+  bolometric: { id: string; params: NamedValue[]; reference?: string };
+  eddington: NamedValue[];
+  growth: { params: NamedValue[]; formula?: string; reference?: string };
+  local: { id: string; reference?: string; params: NamedValue[] };
+  dust: { id: string; params: NamedValue[]; reference?: string };
+  monteCarlo: NamedValue[];
+  constants: NamedValue[];
+  /** Every setting as recorded, for the full listing. */
+  allSettings: NamedValue[];
+}
+
+const LINE_NAMES: Record<string, string> = { halpha: 'Broad Hα', hbeta: 'Broad Hβ', mgii: 'Mg II λ2798', civ: 'C IV λ1549' };
+export const lineName = (l: string): string => LINE_NAMES[l] ?? l;
+
+const LUM_SYMBOL: Record<string, string> = { line: 'L_line', l5100: 'λL_5100', l3000: 'λL_3000', l1350: 'λL_1350' };
+
+/** 'log M_BH = a + b log(L/10^p) + c log(FWHM/1000 km/s)' from a calibration record's coefficients. */
+export function calibrationFormula(c: Rec): string | undefined {
+  const a = c.a, b = c.b, cc = c.c, pivot = c.logLpivot;
+  if (typeof a !== 'number' || typeof b !== 'number' || typeof cc !== 'number') return undefined;
+  const eps = typeof c.logEps === 'number' && c.logEps !== 0 ? `${c.logEps.toFixed(3)} + ` : '';
+  const L = LUM_SYMBOL[String(c.luminosity)] ?? 'L';
+  const p = typeof pivot === 'number' ? pivot : 42;
+  return `log(M_BH/M☉) = ${eps}${a.toFixed(3)} + ${b} · log(${L} / 10^${p} erg s⁻¹) + ${cc} · log(FWHM / 1000 km s⁻¹)`;
+}
+
+function values(r: unknown, skip: string[] = []): NamedValue[] {
+  if (!isRec(r)) return [];
+  const out: NamedValue[] = [];
+  for (const [k, v] of Object.entries(r)) {
+    if (skip.includes(k)) continue;
+    if (isRec(v) && 'value' in v) out.push({ name: k, value: String(v.value), unit: str(v.unit), reference: str(v.reference) });
+    else if (typeof v === 'number' || typeof v === 'string' || typeof v === 'boolean') out.push({ name: k, value: String(v) });
+    else if (Array.isArray(v) && v.every((x) => typeof x !== 'object')) out.push({ name: k, value: v.join(', ') });
+  }
+  return out;
+}
+
+export function methodsView(meta: SiteMeta): MethodsView {
+  const raw = meta.raw;
+  const prov: Rec = isRec(raw.provenance) ? raw.provenance : isRec(raw.settings) ? raw.settings : {};
+  const s: Rec = isRec(prov.settings) ? prov.settings : prov;
+  const id = (v: unknown): string => (isRec(v) ? str(v.id) ?? str(v.name) ?? '' : str(v) ?? '');
+
+  const cosmoRec: Rec = isRec(prov.cosmology) ? prov.cosmology : isRec(s.cosmology) ? s.cosmology : {};
+  const cosmology = {
+    id: id(s.cosmology) || id(cosmoRec),
+    name: str(cosmoRec.name),
+    params: values(cosmoRec, ['id', 'name', 'reference', 'notes']),
+    reference: str(cosmoRec.reference),
+  };
+
+  const calibrations: CalibrationView[] = [];
+  const calRecs: Rec = isRec(prov.calibrations) ? prov.calibrations : {};
+  const calIds: Rec = isRec(s.calibrations) ? s.calibrations : {};
+  for (const line of new Set([...Object.keys(calIds), ...Object.keys(calRecs)])) {
+    const r: Rec = isRec(calRecs[line]) ? (calRecs[line] as Rec) : isRec(calIds[line]) ? (calIds[line] as Rec) : { id: calIds[line] };
+    const validity = isRec(r.validity)
+      ? Object.entries(r.validity).map(([k, v]) => `${k} ${Array.isArray(v) ? v.join('–') : String(v)}`).join('; ')
+      : undefined;
+    calibrations.push({
+      line,
+      id: id(r) || id(calIds[line]),
+      label: str(r.label),
+      formula: str(r.formula) ?? calibrationFormula(r),
+      scatter: str(r.scatterDex) ?? str(r.scatter_dex) ?? str(r.scatter),
+      reference: str(r.reference),
+      validity,
+      notes: str(r.notes),
+    });
+  }
+
+  const bolRec: Rec = isRec(prov.bolometric) ? prov.bolometric : isRec(s.bolometric) ? s.bolometric : {};
+  const edd: Rec = isRec(prov.eddington) ? prov.eddington : {};
+  const growthRec: Rec = isRec(prov.growth) ? prov.growth : {};
+  const localRec: Rec = isRec(prov.localRelation) ? prov.localRelation : isRec(s.localRelation) ? s.localRelation : {};
+  const dustRec: Rec = isRec(prov.dustCurve) ? prov.dustCurve : isRec(s.dustCurve) ? s.dustCurve : {};
+  const pick = (...keys: string[]): NamedValue[] =>
+    keys.filter((k) => s[k] !== undefined && !isRec(s[k])).map((k) => ({ name: k, value: Array.isArray(s[k]) ? (s[k] as unknown[]).join(', ') : String(s[k]) }));
+
+  return {
+    cosmology,
+    calibrations,
+    linePriority: Array.isArray(s.linePriority) ? s.linePriority.map(String) : [],
+    bolometric: { id: id(s.bolometric) || id(bolRec), params: [...pick('bc5100'), ...values(bolRec, ['id', 'reference'])], reference: str(bolRec.reference) },
+    eddington: [
+      ...(s.eddingtonPerMsun !== undefined ? [{ name: 'L_Edd per solar mass', value: String(s.eddingtonPerMsun), unit: 'erg/s', reference: str(edd.reference) }] : []),
+    ],
+    growth: {
+      params: [...pick('efficiency', 'zSeed', 'lambdaSeed', 'dutyCycle', 'lightSeedMsun', 'heavySeedMsun'), ...values(growthRec, ['formula', 'reference'])],
+      formula: str(growthRec.formula),
+      reference: str(growthRec.reference),
+    },
+    local: { id: id(s.localRelation) || id(localRec), reference: str(localRec.reference), params: values(localRec, ['id', 'reference', 'label']) },
+    dust: { id: id(s.dustCurve) || id(dustRec), params: [...pick('intrinsicBalmer'), ...values(dustRec, ['id', 'reference', 'name', 'label'])], reference: str(dustRec.reference) },
+    monteCarlo: pick('draws', 'seed'),
+    constants: values(prov.constants ?? s.constants),
+    allSettings: values(s),
+  };
+}

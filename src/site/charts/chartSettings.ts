@@ -1,0 +1,38 @@
+import { defaultSettings } from '../../catalog/config/defaultConfig.ts';
+import type { CosmologyId, LocalRelationId } from '../../core/derive/types.ts';
+import type { ChartSettings } from './types.ts';
+
+const isRecord = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
+
+function pick(raw: Record<string, unknown>, ...paths: string[]): unknown {
+  for (const p of paths) {
+    let v: unknown = raw;
+    for (const k of p.split('.')) v = isRecord(v) ? v[k] : undefined;
+    if (v !== undefined && v !== null) return v;
+  }
+  return undefined;
+}
+
+const text = (v: unknown): string | undefined => (typeof v === 'string' && v.trim() !== '' ? v.trim() : undefined);
+
+const finite = (v: unknown): number | undefined => (typeof v === 'number' && Number.isFinite(v) ? v : typeof v === 'string' && v.trim() !== '' && Number.isFinite(Number(v)) ? Number(v) : undefined);
+
+/**
+ * The chart settings from the settings recorded in a catalog's metadata sidecar, read as the
+ * derivation's `DeriveSettings` (camelCase) or the config's spelling (snake_case, `seeds.light`).
+ * A key the record lacks takes the tool's default (src/catalog/config/defaultConfig.ts), which is
+ * what the derivation itself used for it.
+ */
+export function chartSettings(raw: Record<string, unknown> | undefined): ChartSettings {
+  const d = defaultSettings();
+  const r = raw ?? {};
+  return {
+    cosmology: ((text(pick(r, 'cosmology.id')) ?? text(pick(r, 'cosmology'))) as CosmologyId | undefined) ?? d.cosmology,
+    localRelation: ((text(pick(r, 'localRelation.id', 'local_relation.id')) ?? text(pick(r, 'localRelation', 'local_relation'))) as LocalRelationId | undefined) ?? d.localRelation,
+    zSeed: finite(pick(r, 'zSeed', 'z_seed')) ?? d.zSeed,
+    efficiency: finite(pick(r, 'efficiency')) ?? d.efficiency,
+    lightSeedMsun: finite(pick(r, 'lightSeedMsun', 'seeds.light', 'light_seed_msun')) ?? d.lightSeedMsun,
+    heavySeedMsun: finite(pick(r, 'heavySeedMsun', 'seeds.heavy', 'heavy_seed_msun')) ?? d.heavySeedMsun,
+    eddingtonPerMsun: finite(pick(r, 'eddingtonPerMsun', 'eddington_per_msun')) ?? d.eddingtonPerMsun,
+  };
+}

@@ -1,0 +1,123 @@
+import * as Plot from '@observablehq/plot';
+import { CAVEATS } from './captions.ts';
+import type { ChartPoint } from './chartPoint.ts';
+import { attachPoints } from './chartPoints.ts';
+import { stackedBins } from './histogramBins.ts';
+import { LEGEND_BAND, LEGEND_LINE, LEGEND_OFFSET, LEGEND_ROW, legendMarks, legendRows, type LegendItem } from './legend.ts';
+import { LIMIT_LEFT } from './limitSymbols.ts';
+import { PALETTE } from './palette.ts';
+import { pointsFromRows } from './pointsFromRows.ts';
+import { hasFlag, num } from './rowValues.ts';
+import type { CatalogRow, ChartOptions } from './types.ts';
+
+/** Options of {@link eddingtonRatioDistribution}. */
+export interface EddingtonRatioDistributionOptions extends ChartOptions {
+  /** Bin width in dex (default 0.25). */
+  binDex?: number;
+}
+
+interface HoverItem {
+  x: number;
+  y: number;
+  text: string;
+  id?: string;
+  role?: ChartPoint['role'];
+}
+
+/**
+ * Histogram of log λ_Edd (Eddington ratio L_bol/L_Edd) with upper limits ('edd_ratio_upper_limit')
+ * stacked above the detections in an outlined, lighter style. Highlighted and new objects are
+ * drawn as markers above the bars at their value with their 16th–84th percentile bar; a dashed
+ * rule marks λ_Edd = 1. Always aggregated, so large selections cost no more than small ones.
+ */
+export function eddingtonRatioDistribution(rows: readonly CatalogRow[], options: EddingtonRatioDistributionOptions = {}): SVGSVGElement | HTMLElement {
+  const width = options.width ?? 640;
+  const height = options.height ?? 380;
+  const binDex = options.binDex ?? 0.25;
+  const { points, unplaced } = pointsFromRows(rows, options, (r) => {
+    const x = num(r.log_edd_ratio);
+    if (x === null) return null;
+    return { x, y: 0, xLo: num(r.log_edd_ratio_p16), xHi: num(r.log_edd_ratio_p84), yLo: null, yHi: null, xLimit: hasFlag(r, 'edd_ratio_upper_limit'), yLimit: false };
+  });
+  const catalog = points.filter((p) => p.role !== 'extra');
+  const bins = stackedBins(catalog.map((p) => ({ v: p.x, limit: p.xLimit })), binDex);
+  const maxCount = Math.max(1, ...bins.map((b) => b.detections + b.limits));
+  const marked = points.filter((p) => p.role !== 'population');
+  // markers sit in a lane above the tallest bar, one row per marked object
+  const laneY = (i: number) => maxCount * (1.1 + 0.09 * i);
+  const markers = marked.map((p, i) => ({ ...p, y: laneY(i) }));
+  const yMax = markers.length ? laneY(markers.length - 1) * 1.06 : maxCount * 1.08;
+  const xs = [...bins.flatMap((b) => [b.x1, b.x2]), ...markers.flatMap((m) => [m.x, m.xLo ?? m.x, m.xHi ?? m.x]), 0];
+  const xDomain: [number, number] = [Math.min(...xs) - binDex / 2, Math.max(...xs) + binDex / 2];
+  const hasLimits = bins.some((b) => b.limits > 0);
+  const legend: LegendItem[] = [{ label: 'Detections', symbol: LEGEND_BAND, fill: PALETTE.population, fillOpacity: 0.85 }];
+  if (hasLimits) legend.push({ label: 'Upper limits (stacked above)', symbol: LEGEND_BAND, fill: '#dfe9ee', stroke: PALETTE.population, strokeDasharray: '3 2' });
+  legend.push({ label: 'λ_Edd = 1', symbol: LEGEND_LINE, stroke: PALETTE.ink, strokeDasharray: '4 3' });
+  if (markers.some((m) => m.role === 'highlight')) legend.push({ label: 'Highlighted', symbol: 'circle', fill: PALETTE.highlight, stroke: PALETTE.ink, strokeWidth: 1.4, r: 5 });
+  if (markers.some((m) => m.role === 'extra')) legend.push({ label: 'New object', symbol: 'star', fill: PALETTE.extra, stroke: PALETTE.ink, strokeWidth: 1.2, r: 7 });
+  const available = width - 16;
+  const rowsNeeded = legendRows(legend, available);
+  const hover: HoverItem[] = [
+    ...bins.map((b) => ({
+      x: (b.x1 + b.x2) / 2,
+      y: b.detections + b.limits,
+      text: `${b.x1.toFixed(2)} ≤ log λ_Edd < ${b.x2.toFixed(2)}\n${b.detections} detected${b.limits ? `, ${b.limits} upper limits` : ''}`,
+    })),
+    ...markers.map((m) => ({
+      x: m.x,
+      y: m.y,
+      id: m.id,
+      role: m.role,
+      text: `${m.role === 'extra' ? `${m.id} (new object)` : m.id}\nlog λ_Edd: ${m.xLimit ? '< ' : ''}${m.x.toFixed(2)}`,
+    })),
+  ];
+  const shown = catalog.length;
+  const el = Plot.plot({
+    document: options.document,
+    width,
+    height: height + rowsNeeded * LEGEND_ROW,
+    marginLeft: 56,
+    marginRight: 24,
+    marginTop: 20,
+    marginBottom: LEGEND_OFFSET + rowsNeeded * LEGEND_ROW,
+    style: { color: PALETTE.ink, fontSize: '11px', background: 'white' },
+    x: { domain: xDomain, label: 'log λ_Edd (L_bol / L_Edd)', labelAnchor: 'center', labelArrow: 'none', labelOffset: 32 },
+    y: { domain: [0, yMax], label: 'Objects per bin', labelAnchor: 'center', labelArrow: 'none', grid: true },
+    title: options.title,
+    caption: options.noCaption
+      ? undefined
+      : [
+          `Distribution of Eddington ratios in ${binDex}-dex bins; upper limits are stacked above the detections (their true values lie further left).`,
+          'λ_Edd combines the mass and the bolometric-luminosity systematics.',
+          CAVEATS.mass,
+          `${shown} objects shown${unplaced ? `; ${unplaced} without an Eddington ratio not shown` : ''}.`,
+        ].join(' '),
+    ariaDescription: 'Histogram of log Eddington ratio, with upper limits stacked separately.',
+    marks: [
+      Plot.frame({ stroke: PALETTE.ink, strokeOpacity: 0.25 }),
+      Plot.rectY(bins, { x1: 'x1', x2: 'x2', y1: 0, y2: 'detections', fill: PALETTE.population, fillOpacity: 0.85, inset: 0.5, ariaLabel: 'detections bin' }),
+      Plot.rectY(
+        bins.filter((b) => b.limits > 0),
+        { x1: 'x1', x2: 'x2', y1: 'detections', y2: (b: { detections: number; limits: number }) => b.detections + b.limits, fill: '#dfe9ee', stroke: PALETTE.population, strokeDasharray: '3 2', inset: 0.5, ariaLabel: 'upper limits bin' },
+      ),
+      Plot.ruleX([0], { stroke: PALETTE.ink, strokeDasharray: '4 3', ariaLabel: 'Eddington limit' }),
+      Plot.ruleY(markers.filter((m) => m.xLo !== null && m.xHi !== null && !m.xLimit), {
+        y: 'y',
+        x1: 'xLo',
+        x2: 'xHi',
+        stroke: (m: ChartPoint) => (m.role === 'extra' ? PALETTE.extra : PALETTE.ink),
+        strokeWidth: 1.6,
+        ariaLabel: 'marked error bar x',
+      }),
+      Plot.ruleX(markers, { x: 'x', y1: 0, y2: 'y', stroke: (m: ChartPoint) => (m.role === 'extra' ? PALETTE.extra : PALETTE.highlight), strokeWidth: 1.2, strokeOpacity: 0.7, ariaLabel: 'marked value' }),
+      Plot.dot(markers.filter((m) => m.role === 'highlight' && !m.xLimit), { x: 'x', y: 'y', r: 5.5, fill: PALETTE.highlight, stroke: PALETTE.ink, strokeWidth: 1.4, ariaLabel: 'highlighted object' }),
+      Plot.dot(markers.filter((m) => m.role === 'extra' && !m.xLimit), { x: 'x', y: 'y', r: 8, symbol: 'star', fill: PALETTE.extra, stroke: PALETTE.ink, strokeWidth: 1.2, ariaLabel: 'new object' }),
+      Plot.dot(markers.filter((m) => m.role === 'highlight' && m.xLimit), { x: 'x', y: 'y', r: 6, symbol: LIMIT_LEFT, stroke: PALETTE.ink, strokeWidth: 2, fill: 'none', ariaLabel: 'highlighted upper limit' }),
+      Plot.dot(markers.filter((m) => m.role === 'extra' && m.xLimit), { x: 'x', y: 'y', r: 6, symbol: LIMIT_LEFT, stroke: PALETTE.extra, strokeWidth: 2, fill: 'none', ariaLabel: 'new object upper limit' }),
+      ...legendMarks(legend, available, 8 - 56),
+      Plot.tip(hover, Plot.pointer({ x: 'x', y: 'y', title: 'text', ariaLabel: 'hover' })),
+    ],
+  });
+  attachPoints(el, { points: markers, xLabel: 'log λ_Edd', yLabel: 'objects' });
+  return el;
+}

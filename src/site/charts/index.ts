@@ -1,0 +1,10 @@
+export type { CatalogRow, CatalogCell, ChartOptions, ChartSettings, SettingsChartOptions } from './types.ts';
+export type { ChartPoint, PointRole } from './chartPoint.ts';
+export { massVsStellarMass, type MassVsStellarMassOptions } from './massVsStellarMass.ts';
+export { lbolVsMass, type LbolVsMassOptions } from './lbolVsMass.ts';
+export { massVsRedshift, type MassVsRedshiftOptions } from './massVsRedshift.ts';
+export { eddingtonRatioDistribution, type EddingtonRatioDistributionOptions } from './eddingtonRatioDistribution.ts';
+export { fwhmVsLineLuminosity, type FwhmVsLineLuminosityOptions } from './fwhmVsLineLuminosity.ts';
+export { chartPoints, type ChartPointIndex } from './chartPoints.ts';
+export { chartSettings } from './chartSettings.ts';
+export { PALETTE } from './palette.ts';
