@@ -60,10 +60,16 @@ export const NOTES_HALPHA: readonly string[] = [
   'broad Hα; [N II] not resolved',
 ];
 
-/** Notes for objects measured in broad Hβ (z > 7). */
+/** Notes for objects measured in broad Hβ (7 < z ≤ 9.8). */
 export const NOTES_HBETA: readonly string[] = [
   'Hβ only; Hα beyond the red edge',
   'broad Hβ next to [O III] 4959, deblended',
+];
+
+/** Notes for objects measured in Mg II (z > 9.8). */
+export const NOTES_MGII: readonly string[] = [
+  'Mg II only; both Balmer lines beyond the red edge',
+  'broad Mg II, absorption trough on the blue side',
 ];
 
 /** Notes for objects whose broad flux is an upper limit. */

@@ -4,7 +4,7 @@
  */
 import type { Rng } from './demoRandom.ts';
 import type { DemoTruth } from './demoTruth.ts';
-import { NOTES_ANY, NOTES_HALPHA, NOTES_HBETA, NOTES_LENSED, NOTES_LIMIT, NOTE_EMPTY_FRACTION } from './demoNames.ts';
+import { NOTES_ANY, NOTES_HALPHA, NOTES_HBETA, NOTES_LENSED, NOTES_LIMIT, NOTES_MGII, NOTE_EMPTY_FRACTION } from './demoNames.ts';
 
 /**
  * @param rng the row's generator (always consumes two deviates)
@@ -14,7 +14,8 @@ export function pickNote(rng: Rng, truth: Pick<DemoTruth, 'branch' | 'isLimit' |
   const u = rng();
   const v = rng();
   if (u < NOTE_EMPTY_FRACTION) return '';
-  const specific = truth.isLimit ? NOTES_LIMIT : truth.lensed ? NOTES_LENSED : truth.branch === 'halpha' ? NOTES_HALPHA : NOTES_HBETA;
+  const byLine = { halpha: NOTES_HALPHA, hbeta: NOTES_HBETA, mgii: NOTES_MGII } as const;
+  const specific = truth.isLimit ? NOTES_LIMIT : truth.lensed ? NOTES_LENSED : byLine[truth.branch];
   // Limits and lensed objects nearly always say so; the others mostly get a generic note.
   const useSpecific = truth.isLimit || truth.lensed ? u < 0.9 : u < 0.62;
   const list = useSpecific ? specific : NOTES_ANY;

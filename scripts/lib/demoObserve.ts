@@ -7,7 +7,7 @@ import type { DemoModel } from './demoPopulation.ts';
 import type { DemoTruth } from './demoTruth.ts';
 import { type DemoRow, emptyRow } from './demoRow.ts';
 import { type Rng, standardNormal, uniform } from './demoRandom.ts';
-import { fwhmHalphaForMass, fwhmHbetaForMass, fwhmHbetaFromHalpha, intrinsicLuminosities, observeLines } from './demoPhysics.ts';
+import { fwhmForMass, fwhmHbetaFromHalpha, intrinsicLuminosities, observeLines } from './demoPhysics.ts';
 
 const sig = (x: number, digits: number): number => Number(x.toPrecision(digits));
 const dec = (x: number, decimals: number): number => Number(x.toFixed(decimals));
@@ -20,7 +20,7 @@ const dec = (x: number, decimals: number): number => Number(x.toFixed(decimals))
  */
 export function rowFromTruth(model: DemoModel, truth: DemoTruth, rng: Rng, noiseFree: boolean): DemoRow {
   const nz = Array.from({ length: 7 }, () => standardNormal(rng));
-  const uz = Array.from({ length: 3 }, () => rng());
+  const uz = Array.from({ length: 4 }, () => rng());
   const dev = (i: number): number => (noiseFree ? 0 : nz[i] ?? 0);
   // Measured = truth + error × N(0,1); the floor keeps a rare 5σ low draw positive.
   const measure = (value: number, err: number, i: number): number => Math.max(0.1 * value, value + err * dev(i));
@@ -43,7 +43,7 @@ export function rowFromTruth(model: DemoModel, truth: DemoTruth, rng: Rng, noise
   };
 
   if (truth.branch === 'halpha') {
-    const w = fwhmHalphaForMass(truth.logMbh, lum.lHalpha);
+    const w = fwhmForMass('halpha', truth.logMbh, lum);
     const f = obs.fluxHalphaCgs / unit;
     if (truth.isLimit) {
       row.flux_halpha = sig(model.detection.limitSigma * truth.noiseFloor, 4);
@@ -68,8 +68,8 @@ export function rowFromTruth(model: DemoModel, truth: DemoTruth, rng: Rng, noise
         if (truth.hasHbetaFwhm) [row.fwhm_hbeta, row.fwhm_hbeta_err] = setFwhm(fwhmHbetaFromHalpha(w), fb / fbErr, 3);
       }
     }
-  } else {
-    const w = fwhmHbetaForMass(truth.logMbh, lum.l5100);
+  } else if (truth.branch === 'hbeta') {
+    const w = fwhmForMass('hbeta', truth.logMbh, lum);
     const fb = obs.fluxHbetaCgs / unit;
     const fbErr = fluxErr(fb);
     row.flux_hbeta = sig(measure(fb, fbErr, 2), 4);
@@ -78,6 +78,15 @@ export function rowFromTruth(model: DemoModel, truth: DemoTruth, rng: Rng, noise
     const lErr = obs.lamL5100ErgS * uniform(() => uz[0] ?? 0, noise.lamL5100RelMin, noise.lamL5100RelMax);
     row.lam_l_5100 = sig(measure(obs.lamL5100ErgS, lErr, 4), 4);
     row.lam_l_5100_err = sig(lErr, 3);
+  } else {
+    // Mg II: no line flux in the model; the width error is a plain 10–25 %.
+    const w = fwhmForMass('mgii', truth.logMbh, lum);
+    const wErr = w * uniform(() => uz[3] ?? 0, noise.mgiiFwhmRelMin, noise.mgiiFwhmRelMax);
+    row.fwhm_mgii = Math.round(measure(w, wErr, 3));
+    row.fwhm_mgii_err = Math.max(1, Math.round(wErr));
+    const lErr = obs.lamL3000ErgS * uniform(() => uz[0] ?? 0, noise.lamL5100RelMin, noise.lamL5100RelMax);
+    row.lam_l_3000 = sig(measure(obs.lamL3000ErgS, lErr, 4), 4);
+    row.lam_l_3000_err = sig(lErr, 3);
   }
 
   if (truth.lensed) {

@@ -5,6 +5,7 @@
  * noise is added elsewhere.
  */
 import {
+  BC3000,
   BC5100,
   CALZETTI00,
   CASE_B_BALMER,
@@ -14,6 +15,7 @@ import {
   REST_WAVELENGTH_A,
   RV15_AGN_LOCAL,
   RV15_HALPHA,
+  S11_MGII,
   VP06_HBETA,
   calzettiK,
 } from './demoRelations.ts';
@@ -23,13 +25,14 @@ import { fluxFromLuminosity } from './demoCosmology.ts';
 export interface IntrinsicLuminosities {
   lbol: number;
   l5100: number;
+  l3000: number;
   lHalpha: number;
   lHbeta: number;
 }
 
 /**
  * Luminosities implied by a mass and an Eddington ratio: L_bol = λ L_Edd,
- * λL5100 = L_bol / BC5100, L_Hα from Greene & Ho 2005 eq. 1, L_Hβ = L_Hα / 2.86 (case B).
+ * λL5100 = L_bol / BC5100, λL3000 = L_bol / BC3000, L_Hα from Greene & Ho 2005 eq. 1, L_Hβ = L_Hα / 2.86 (case B).
  * @param logMbh log10 black-hole mass, M_sun
  * @param logEddRatio log10 Eddington ratio
  */
@@ -38,7 +41,7 @@ export function intrinsicLuminosities(logMbh: number, logEddRatio: number): Intr
   const l5100 = lbol / BC5100.value;
   const g = GH05_HALPHA_L5100;
   const lHalpha = g.normErgS * (l5100 / g.l5100PivotErgS) ** g.slope;
-  return { lbol, l5100, lHalpha, lHbeta: lHalpha / CASE_B_BALMER.value };
+  return { lbol, l5100, l3000: lbol / BC3000.value, lHalpha, lHbeta: lHalpha / CASE_B_BALMER.value };
 }
 
 /**
@@ -63,6 +66,28 @@ export function fwhmHbetaForMass(logMbh: number, l5100: number): number {
   const c = VP06_HBETA;
   const logW = (logMbh - c.a - c.b * Math.log10(l5100 / c.lumPivotErgS)) / c.c;
   return c.fwhmPivotKms * 10 ** logW;
+}
+
+/**
+ * Mg II FWHM that gives `logMbh` with the Shen et al. 2011 Mg II calibration.
+ * @param logMbh log10 mass, M_sun
+ * @param l3000 intrinsic λL3000, erg s^-1
+ * @returns FWHM, km s^-1
+ */
+export function fwhmMgiiForMass(logMbh: number, l3000: number): number {
+  const c = S11_MGII;
+  const logW = (logMbh - c.a - c.b * Math.log10(l3000 / c.lumPivotErgS)) / c.c;
+  return c.fwhmPivotKms * 10 ** logW;
+}
+
+/**
+ * FWHM of the line an object's mass is measured from, by inverting that line's calibration.
+ * @param line 'halpha' (RV15), 'hbeta' (VP06 with λL5100) or 'mgii' (S11 with λL3000)
+ * @returns km s^-1
+ */
+export function fwhmForMass(line: 'halpha' | 'hbeta' | 'mgii', logMbh: number, lum: IntrinsicLuminosities): number {
+  if (line === 'halpha') return fwhmHalphaForMass(logMbh, lum.lHalpha);
+  return line === 'hbeta' ? fwhmHbetaForMass(logMbh, lum.l5100) : fwhmMgiiForMass(logMbh, lum.l3000);
 }
 
 /**
@@ -101,8 +126,9 @@ export function balmerDecrementForEbv(ebv: number): number {
 export interface ObservedLines {
   fluxHalphaCgs: number;
   fluxHbetaCgs: number;
-  /** Observed λL5100 (before magnification correction), erg s^-1. Dust-free by construction. */
+  /** Observed λL5100 and λL3000 (before magnification correction), erg s^-1. Dust-free by construction. */
   lamL5100ErgS: number;
+  lamL3000ErgS: number;
 }
 
 /**
@@ -119,5 +145,6 @@ export function observeLines(lum: IntrinsicLuminosities, z: number, mu: number, 
     fluxHalphaCgs: mu * fluxFromLuminosity(lum.lHalpha, z) * 10 ** (-0.4 * aHalpha),
     fluxHbetaCgs: mu * fluxFromLuminosity(lum.lHbeta, z) * 10 ** (-0.4 * aHbeta),
     lamL5100ErgS: mu * lum.l5100,
+    lamL3000ErgS: mu * lum.l3000,
   };
 }

@@ -4,33 +4,39 @@
  * Everything here is invented: the "Cinderwake Deep Near-Infrared Spectroscopic Survey"
  * (CINDERWAKE, ids CDW-#####), its fields, programmes and notes (see demoNames.ts). The
  * numbers are drawn from a simple model so that the catalog looks like what a deep
- * near-infrared spectroscopic survey of broad-line AGN candidates at z ≈ 4–10 reports, and
+ * near-infrared spectroscopic survey of broad-line AGN candidates at z ≈ 4–11 reports, and
  * so that the science core can be checked against it: each object's measured quantities are
  * made by INVERTING the same published calibrations the catalog build applies, so a
  * noise-free catalog derives back to the model's masses exactly (up to the rounding of the
  * written values).
  *
  * Per object (row k is drawn from its own generator seeded by (seed, k): rows do not depend on n):
- *  1. Redshift. With probability 1 − tailFraction a normal (mean 5.3, sd 0.9) truncated to
- *     4 ≤ z ≤ 7; otherwise a tail z = 7 + Exp(scale 1.0) truncated at z = 9.8. Rounded to 1e-4.
- *  2. Coverage of the invented spectrograph (0.9–5.3 µm, like the reddest spectrographs in
- *     use). Broad Hα (6563 Å) stays in the band to z ≈ 7.0 with room for its wings: at z ≤ 7
- *     the object is measured in broad Hα. Above z = 7 only Hβ (4861 Å) is covered, up to
- *     z ≈ 9.8, so those objects get fwhm_hbeta, flux_hbeta and lam_l_5100 instead.
- *     Beyond z ≈ 9.8 no Balmer line is covered and the canonical columns have no rest-UV
- *     line, so the catalog's redshift tail stops at 9.8 rather than 11.
+ *  1. Redshift. With probability 1 − tailFraction (0.88) a normal (mean 5.3, sd 0.9)
+ *     truncated to 4 ≤ z ≤ 7; otherwise a tail z = 7 + Exp(scale 1.2) truncated at z = 11.
+ *     Rounded to 1e-4.
+ *  2. Coverage of the invented spectrograph (0.9–5.3 µm, like the reddest near-infrared
+ *     spectrographs in use). Broad Hα (6565 Å vacuum) stays in the band with room for its
+ *     wings to z ≈ 7.0: at z ≤ 7 the mass line is broad Hα. For 7 < z ≤ 9.8 only Hβ
+ *     (4863 Å) is covered: those objects get fwhm_hbeta, flux_hbeta and lam_l_5100 (the
+ *     rest-frame 5100 Å continuum is at 4.6–5.5 µm, taken as measured from the spectrum's red
+ *     end or the photometry) and no Hα. Above z = 9.8 both Balmer lines are gone and the few
+ *     objects there (about 0.8 % of the catalog) are measured in Mg II 2799 Å: fwhm_mgii and
+ *     lam_l_3000 (no line flux). A Balmer decrement needs both lines, so only at z ≤ 7.
  *  3. Black-hole mass: log M_BH normal (mean 7.1, sd 0.5) truncated to 6.0–8.6.
  *  4. Eddington ratio: log λ normal (mean −0.7, sd 0.4) with a super-Eddington component
  *     (8 %, mean +0.25, sd 0.25), truncated to −2.3 ≤ log λ ≤ 1.2.
  *  5. Luminosities: L_bol = λ · 1.26e38 · M_BH (Shen et al. 2011 convention);
  *     λL5100 = L_bol / 10.33 (BC5100, Richards et al. 2006);
+ *     λL3000 = L_bol / 5.15 (BC3000, Richards et al. 2006 as used by Shen et al. 2011);
  *     L_Hα = 5.25e42 (λL5100/1e44)^1.157 (Greene & Ho 2005, ApJ 630, 122, eq. 1);
  *     L_Hβ = L_Hα / 2.86 (case B, Osterbrock & Ferland 2006).
  *  6. Line widths by inverting the virial calibrations named in census.config.yaml:
  *     Hα: log M = log 1.075 + 6.57 + 0.47 log(L_Hα/1e42) + 2.06 log(FWHM/1e3)
  *         (Reines & Volonteri 2015, ApJ 813, 82);
- *     Hβ (z > 7): log M = 6.91 + 0.5 log(λL5100/1e44) + 2 log(FWHM/1e3)
+ *     Hβ (7 < z ≤ 9.8): log M = 6.91 + 0.5 log(λL5100/1e44) + 2 log(FWHM/1e3)
  *         (Vestergaard & Peterson 2006, ApJ 641, 689);
+ *     Mg II (z > 9.8): log M = 6.74 + 0.62 log(λL3000/1e44) + 2 log(FWHM/1e3)
+ *         (Shen et al. 2011, ApJS 194, 45);
  *     Hβ width next to a measured Hα (some of the Balmer-decrement objects):
  *         FWHM_Hβ = 1.07e3 (FWHM_Hα/1e3)^1.03 (Greene & Ho 2005 eq. 3).
  *  7. Host: an offset δ ~ N(+1.0, 0.45) dex ABOVE the local AGN relation of Reines &
@@ -40,21 +46,24 @@
  *     log-uniform in 1.5–10 and a 10–30 % error; observed fluxes and λL5100 are × μ.
  *  9. Dust: the objects with a measured broad Balmer decrement (15 % of the catalog, all at
  *     z ≤ 7 with detected Hα) have E(B−V) = 0.05 + |N(0, 0.35)| ≤ 0.88, so Hα/Hβ runs from
- *     about 3 to 8 with the Calzetti et al. 2000 curve (k_Hα = 3.326, k_Hβ = 4.598);
+ *     about 3 to 8 with the Calzetti et al. 2000 curve (k_Hα = 3.325, k_Hβ = 4.597 at the
+ *     vacuum wavelengths);
  *     their Hα and Hβ fluxes are attenuated. All other objects are dust-free, so that a
  *     derivation that corrects dust only where a decrement is given recovers the model.
  * 10. Fluxes: F = μ · L · 10^(−0.4 A) / (4π D_L²) with the Planck18 luminosity distance
  *     (demoCosmology.ts, matches astropy's Planck18 to 1e-6). Written in 1e-18 erg s^-1 cm^-2.
  *     Each object has a line-flux noise floor σ₀ uniform in 0.15–0.45 (1e-18 cgs).
- *     Selection: (M_BH, λ) are redrawn until the line the mass comes from (Hα at z ≤ 7, Hβ
- *     above) is broad, FWHM ≥ 1000 km/s, and detected, 5 σ₀ ≤ F ≤ 3e-16 cgs (brighter ones
- *     would be known quasars, not candidates); Balmer-decrement objects also need F_Hβ ≥ 5 σ₀.
+ *     Selection: (M_BH, λ) are redrawn until the line the mass comes from is broad,
+ *     FWHM ≥ 1000 km/s, and detected, 5 σ₀ ≤ F ≤ 3e-16 cgs (brighter ones would be known
+ *     quasars, not candidates); Balmer-decrement objects also need F_Hβ ≥ 5 σ₀; Mg II objects
+ *     need an observed λL3000 ≥ 5e43 erg s^-1 instead of a line flux.
  *     For the flux-limit objects (10 % of the catalog, all at z ≤ 7) the condition is
  *     F < 3 σ₀ instead, and the written flux is the 3σ limit 3 σ₀ with
  *     flux_halpha_is_limit = true and no error. The selection shapes the distributions of
  *     steps 3–4 (fainter objects drop out at high z), not the catalog fractions.
  * 11. Noise (off with noiseFree): flux error σ = √(σ₀² + (0.05 F)²); FWHM error
- *     FWHM · (0.04 + 0.6 / SNR); λL5100 error 8–20 %; log M* error 0.15–0.4 dex; μ error
+ *     FWHM · (0.04 + 0.6 / SNR) (Mg II: 10–25 %); λL5100 and λL3000 error 8–20 %;
+ *     log M* error 0.15–0.4 dex; μ error
  *     10–30 %; each measured value = truth + error · N(0, 1) (kept positive). The Balmer
  *     decrement is the ratio of the measured fluxes with the propagated error.
  * 12. No host mass for 20 % of the objects (empty log_mstar).
@@ -75,7 +84,7 @@ export type Row = DemoRow;
 
 /** Parameters of the population model (see the block above). */
 export const DEMO_MODEL = {
-  redshift: { min: 4, bulkMean: 5.3, bulkSd: 0.9, bulkMax: 7.0, tailFraction: 0.12, tailScale: 1.0, max: 9.8 },
+  redshift: { min: 4, bulkMean: 5.3, bulkSd: 0.9, bulkMax: 7.0, tailFraction: 0.12, tailScale: 1.2, hbetaMax: 9.8, max: 11 },
   logMbh: { mean: 7.1, sd: 0.5, min: 6.0, max: 8.6 },
   logEddRatio: { mean: -0.7, sd: 0.4, superFraction: 0.08, superMean: 0.25, superSd: 0.25, min: -2.3, max: 1.2 },
   hostOffset: { mean: 1.0, sd: 0.45, logMstarMin: 7.0, logMstarMax: 11.5 },
@@ -83,8 +92,18 @@ export const DEMO_MODEL = {
   fractions: { limit: 0.1, noHost: 0.2, lensed: 0.08, balmer: 0.15, hbetaFwhmAmongBalmer: 0.5 },
   lensing: { muMin: 1.5, muMax: 10, relErrMin: 0.1, relErrMax: 0.3 },
   dust: { ebvMin: 0.05, ebvScale: 0.35, ebvMax: 0.88 },
-  detection: { noiseFloorMin: 0.15, noiseFloorMax: 0.45, snrMin: 5, limitSigma: 3, fluxMax: 300, fwhmMinKms: 1000, maxRedraws: 5000 },
-  noise: { fluxRel: 0.05, fwhmRelBase: 0.04, fwhmSnrCoeff: 0.6, lamL5100RelMin: 0.08, lamL5100RelMax: 0.2, logMstarErrMin: 0.15, logMstarErrMax: 0.4 },
+  detection: { noiseFloorMin: 0.15, noiseFloorMax: 0.45, snrMin: 5, limitSigma: 3, fluxMax: 300, lamL3000Min: 5e43, fwhmMinKms: 1000, maxRedraws: 5000 },
+  noise: {
+    fluxRel: 0.05,
+    fwhmRelBase: 0.04,
+    fwhmSnrCoeff: 0.6,
+    lamL5100RelMin: 0.08,
+    lamL5100RelMax: 0.2,
+    mgiiFwhmRelMin: 0.1,
+    mgiiFwhmRelMax: 0.25,
+    logMstarErrMin: 0.15,
+    logMstarErrMax: 0.4,
+  },
   /** Unit of the written fluxes, erg s^-1 cm^-2. */
   fluxUnitCgs: 1e-18,
   /** The ids are spaced by up to this step (gaps like a parent photometric catalog's). */

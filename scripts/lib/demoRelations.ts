@@ -26,6 +26,16 @@ export const VP06_HBETA = {
   reference: 'Vestergaard & Peterson 2006, ApJ 641, 689, Hβ + λL5100 single-epoch calibration',
 } as const;
 
+/** Shen et al. 2011 Mg II mass: log M = a + b log(λL3000/1e44) + c log(FWHM/1e3). */
+export const S11_MGII = {
+  a: 6.74,
+  b: 0.62,
+  c: 2,
+  lumPivotErgS: 1e44,
+  fwhmPivotKms: 1e3,
+  reference: 'Shen et al. 2011, ApJS 194, 45, fiducial Mg II + λL3000 calibration',
+} as const;
+
 /** Greene & Ho 2005 eq. 1: L_Hα = norm (λL5100/1e44)^slope, erg s^-1. */
 export const GH05_HALPHA_L5100 = {
   normErgS: 5.25e42,
@@ -46,6 +56,12 @@ export const GH05_FWHM_HBETA = {
 export const BC5100 = {
   value: 10.33,
   reference: 'Richards et al. 2006, ApJS 166, 470 (mean quasar SED), as used for broad-Hα AGN at high redshift',
+} as const;
+
+/** Bolometric correction at 3000 Å. */
+export const BC3000 = {
+  value: 5.15,
+  reference: 'Richards et al. 2006, ApJS 166, 470 (mean quasar SED), as used by Shen et al. 2011, ApJS 194, 45',
 } as const;
 
 /** Eddington luminosity per solar mass (hydrogen), erg s^-1. */
@@ -78,13 +94,14 @@ export const CALZETTI00 = {
 } as const;
 
 /**
- * Rest wavelengths of the broad lines in air, Å (the convention for attenuation curves;
- * vacuum values are 1.8 Å and 1.4 Å longer, irrelevant at the precision used here).
+ * Vacuum rest wavelengths of the broad lines, Å (vacuum, like the science core's dust
+ * correction; the air values move k(λ) by about 1e-3).
  */
 export const REST_WAVELENGTH_A = {
-  halpha: 6562.8,
-  hbeta: 4861.3,
-  reference: 'NIST Atomic Spectra Database, hydrogen Balmer lines (air), rounded to 0.1 Å',
+  halpha: 6564.61,
+  hbeta: 4862.68,
+  mgii: 2798.75,
+  reference: 'Vanden Berk et al. 2001, AJ 122, 549, Table 2 (vacuum laboratory wavelengths; Mg II doublet blended)',
 } as const;
 
 /**

@@ -1,7 +1,7 @@
 /**
  * One row of the invented demo catalog, with the canonical column names of the catalog build
  * and the pass-through columns. `null` is an empty cell. Units: FWHM km s^-1; fluxes
- * 1e-18 erg s^-1 cm^-2 (the config maps this unit); λL5100 erg s^-1, observed (before the
+ * 1e-18 erg s^-1 cm^-2 (the config maps this unit); λL5100, λL3000 erg s^-1, observed (before the
  * magnification correction); log_mstar log10 M_sun (intrinsic); ra/dec degrees (ICRS).
  */
 export interface DemoRow {
@@ -16,8 +16,12 @@ export interface DemoRow {
   fwhm_hbeta_err: number | null;
   flux_hbeta: number | null;
   flux_hbeta_err: number | null;
+  fwhm_mgii: number | null;
+  fwhm_mgii_err: number | null;
   lam_l_5100: number | null;
   lam_l_5100_err: number | null;
+  lam_l_3000: number | null;
+  lam_l_3000_err: number | null;
   mu: number | null;
   mu_err: number | null;
   log_mstar: number | null;
@@ -44,8 +48,12 @@ export const DEMO_COLUMNS = [
   'fwhm_hbeta_err',
   'flux_hbeta',
   'flux_hbeta_err',
+  'fwhm_mgii',
+  'fwhm_mgii_err',
   'lam_l_5100',
   'lam_l_5100_err',
+  'lam_l_3000',
+  'lam_l_3000_err',
   'mu',
   'mu_err',
   'log_mstar',
@@ -73,8 +81,12 @@ export function emptyRow(id: string, z: number): DemoRow {
     fwhm_hbeta_err: null,
     flux_hbeta: null,
     flux_hbeta_err: null,
+    fwhm_mgii: null,
+    fwhm_mgii_err: null,
     lam_l_5100: null,
     lam_l_5100_err: null,
+    lam_l_3000: null,
+    lam_l_3000_err: null,
     mu: null,
     mu_err: null,
     log_mstar: null,

@@ -15,7 +15,7 @@ import {
   truncatedNormal,
   uniform,
 } from './demoRandom.ts';
-import { fwhmHalphaForMass, fwhmHbetaForMass, intrinsicLuminosities, logMstarForOffset, observeLines } from './demoPhysics.ts';
+import { fwhmForMass, intrinsicLuminosities, logMstarForOffset, observeLines } from './demoPhysics.ts';
 import { RV15_AGN_LOCAL } from './demoRelations.ts';
 import { DEMO_FIELDS, DEMO_PROGRAMS, DEMO_SURVEY } from './demoNames.ts';
 import { pickNote } from './demoNotes.ts';
@@ -26,8 +26,8 @@ export interface DemoTruth {
   id: string;
   /** Redshift, rounded to 1e-4 (as written). */
   z: number;
-  /** Line the mass is measured from: Hα at z ≤ 7, Hβ above. */
-  branch: 'halpha' | 'hbeta';
+  /** Line the mass is measured from: Hα at z ≤ 7, Hβ to z = 9.8, Mg II above. */
+  branch: 'halpha' | 'hbeta' | 'mgii';
   logMbh: number;
   logEddRatio: number;
   /** log10 M*, M_sun (rounded to 0.01, as written). */
@@ -85,7 +85,7 @@ export function drawTruth(model: DemoModel, rng: Rng, index: number): DemoTruth 
   const id = `${DEMO_SURVEY.idPrefix}-${String(idNumber).padStart(5, '0')}`;
 
   const z = round(drawRedshift(rng, model.redshift), 4);
-  const branch = z <= model.redshift.bulkMax ? 'halpha' : 'hbeta';
+  const branch = z <= model.redshift.bulkMax ? 'halpha' : z <= model.redshift.hbetaMax ? 'hbeta' : 'mgii';
   // Conditional probabilities chosen so that the catalog-wide fractions equal the targets.
   const lensed = rng() < f.lensed;
   const hasHost = rng() >= f.noHost;
@@ -114,8 +114,12 @@ export function drawTruth(model: DemoModel, rng: Rng, index: number): DemoTruth 
     const lum = intrinsicLuminosities(logMbh, logEddRatio);
     const obs = observeLines(lum, z, mu, ebv);
     const flux = (branch === 'halpha' ? obs.fluxHalphaCgs : obs.fluxHbetaCgs) / model.fluxUnitCgs;
-    const fwhm = branch === 'halpha' ? fwhmHalphaForMass(logMbh, lum.lHalpha) : fwhmHbetaForMass(logMbh, lum.l5100);
-    const seen = flux >= det.snrMin * noiseFloor && flux <= det.fluxMax;
+    const fwhm = fwhmForMass(branch, logMbh, lum);
+    // Mg II objects have no modelled line flux: their continuum must be bright enough instead.
+    const seen =
+      branch === 'mgii'
+        ? obs.lamL3000ErgS >= det.lamL3000Min
+        : flux >= det.snrMin * noiseFloor && flux <= det.fluxMax;
     const hbetaSeen = !hasBalmer || obs.fluxHbetaCgs / model.fluxUnitCgs >= det.snrMin * noiseFloor;
     const accepted = isLimit ? flux < det.limitSigma * noiseFloor : seen && hbetaSeen;
     if (accepted && fwhm >= det.fwhmMinKms) break;
