@@ -17,19 +17,20 @@ const TEXT_TYPES = new Set(['char', 'unicodeChar']);
 
 /**
  * Kind of a VOTable datatype (IVOA VOTable 1.4 §2.1), or an explanation of why it is not read:
- * scalar boolean, unsignedByte, short, int, long, float, double and char/unicodeChar strings of
- * any arraysize are supported; numeric arrays, bit and the complex types are not.
+ * scalar boolean, bit (read as a boolean, as Astropy writes boolean columns), unsignedByte, short,
+ * int, long, float, double and char/unicodeChar strings of any arraysize are supported; numeric
+ * arrays and the complex types are not.
  */
 export function votKind(f: VotField): ColumnKind | string {
   const dt = f.attrs.datatype ?? '';
   const arraysize = f.attrs.arraysize;
   if (TEXT_TYPES.has(dt)) return 'string';
-  const known = dt === 'boolean' || INT_TYPES.has(dt) || FLOAT_TYPES.has(dt);
+  const known = dt === 'boolean' || dt === 'bit' || INT_TYPES.has(dt) || FLOAT_TYPES.has(dt);
   if (!known) return dt === '' ? 'has no datatype' : `has datatype "${dt}", which is not supported`;
   if (arraysize !== undefined && arraysize.trim() !== '1') {
     return `is an array (arraysize="${arraysize}"); only scalar columns are supported (remove the column or split it into scalar columns)`;
   }
-  return dt === 'boolean' ? 'bool' : INT_TYPES.has(dt) ? 'int' : 'float';
+  return dt === 'boolean' || dt === 'bit' ? 'bool' : INT_TYPES.has(dt) ? 'int' : 'float';
 }
 
 /** The column description of a FIELD. */
