@@ -3,10 +3,20 @@
  * mounted. The chart functions themselves belong to src/site/charts/ (pure
  * `(rows, options) => SVG`); this module decides what rows to give them.
  *
- * MOUNT POINT: until src/site/charts/index.ts exports the chart functions, `drawPopulation`
- * shows a note in each mount instead of a chart.
  */
+import {
+  chartSettings,
+  eddingtonRatioDistribution,
+  fwhmVsLineLuminosity,
+  lbolVsMass,
+  massVsRedshift,
+  massVsStellarMass,
+  type CatalogRow,
+  type ChartOptions,
+  type ChartSettings,
+} from '../charts/index.ts';
 import type { ResultSet } from '../db/resultSet.ts';
+import { objectSlug } from '../objectSlug.ts';
 
 /** Columns the population charts read, when the catalog has them. */
 export const CHART_COLUMNS = [
@@ -42,14 +52,48 @@ export function chartRows(rs: ResultSet): ChartRow[] {
   return out;
 }
 
+type ChartFn = (rows: readonly CatalogRow[], options: ChartOptions & { settings: ChartSettings }) => SVGSVGElement | HTMLElement;
+
+/** The chart drawn in each mount, by its `data-chart` key. */
+export const CHART_FUNCTIONS: Record<string, ChartFn> = {
+  'mbh-mstar': (rows, o) => massVsStellarMass(rows, o),
+  'mbh-z': (rows, o) => massVsRedshift(rows, o),
+  'lbol-mbh': (rows, o) => lbolVsMass(rows, o),
+  'fwhm-lum': (rows, o) => fwhmVsLineLuminosity(rows, o),
+  'edd-hist': (rows, o) => eddingtonRatioDistribution(rows, o),
+};
+
 /** Draws every `[data-chart]` mount inside `root` from `rows`. */
 export function drawPopulation(root: HTMLElement, rows: readonly ChartRow[], options: DrawOptions): void {
+  const settings = chartSettings(options.settings);
   for (const mount of root.querySelectorAll<HTMLElement>('[data-chart]')) {
-    const note = document.createElement('p');
-    note.className = 'chart-note';
-    note.textContent = `Chart “${mount.dataset.chart}” of ${rows.length} objects: the chart module is not wired yet.`;
-    mount.replaceChildren(note);
+    const fn = CHART_FUNCTIONS[mount.dataset.chart ?? ''];
+    if (!fn) continue;
+    const width = Math.max(320, Math.min(720, Math.floor(mount.clientWidth || 600)));
+    let el: SVGSVGElement | HTMLElement;
+    try {
+      el = fn(rows as readonly CatalogRow[], { settings, highlightIds: options.highlightIds, width, height: Math.round(width * 0.66) });
+    } catch (err) {
+      const p = document.createElement('p');
+      p.className = 'chart-note';
+      p.textContent = `This chart could not be drawn: ${err instanceof Error ? err.message : String(err)}`;
+      mount.replaceChildren(p);
+      continue;
+    }
+    mount.replaceChildren(el);
     mount.dataset.drawn = String(rows.length);
+    clickThrough(el, options.base);
   }
-  void options;
+}
+
+/**
+ * TEMPORARY stand-in for the charts' mount helper (hover ids, click-to-object-page, downloads),
+ * until src/site/charts exports it: a click on a chart opens the page of the object under the
+ * pointer (Plot's pointer sets the figure's `value` to the hovered point).
+ */
+function clickThrough(el: Element, base: string): void {
+  el.addEventListener('click', () => {
+    const v = (el as Element & { value?: { id?: unknown; role?: string } }).value;
+    if (v && typeof v.id === 'string' && v.role !== 'extra') location.href = `${base}object/${objectSlug(v.id)}/`;
+  });
 }
