@@ -1,0 +1,121 @@
+import type { DeriveSettings, DerivedObject, LineId, ObjectInputs, Percentiles } from './types.ts';
+import type { Rng } from '../random/rng.ts';
+import { percentiles16_50_84 } from '../random/percentiles.ts';
+import { logL5100FromLogLHalpha, logL5100FromLogLHbeta, inCalibrationRange } from '../virial/index.ts';
+import { inLocalRelationRange } from '../local/localRelation.ts';
+import { lambdaRequired } from '../growth/salpeterGrowth.ts';
+import { planObject, type LumSource } from './objectPlan.ts';
+import { createScratch, evaluateChain, OUT, OUT_SIZE } from './evaluateChain.ts';
+
+/** Draw buffers, one per output slot, reused across objects (grown when `draws` grows). */
+let buffers: Float64Array[] = [];
+function drawBuffers(draws: number): Float64Array[] {
+  if ((buffers[0]?.length ?? 0) !== draws) buffers = Array.from({ length: OUT_SIZE }, () => new Float64Array(draws));
+  return buffers;
+}
+
+const finiteOrNull = (x: number): number | null => (Number.isFinite(x) ? x : null);
+
+/**
+ * Derives one object's physical quantities with Monte Carlo uncertainties.
+ *
+ * The plain values are nominal: the chain evaluated at the central inputs with no noise.
+ * The percentiles come from `settings.draws` draws of every measurement (split normals for
+ * asymmetric errors, positive quantities truncated at zero) plus each virial calibration's
+ * intrinsic scatter; upper-limit fluxes stay at their limit and the results are flagged as
+ * limits. P(λ_Edd > 1) and P(above the local relation) are fractions of the draws.
+ * `local_offset_sigma` divides the nominal offset by the local relation's intrinsic scatter
+ * and the draws' half 16–84 width added in quadrature.
+ *
+ * The random stream is the caller's: the catalog build seeds it from (global seed, object
+ * id) so results do not depend on row order or thread count.
+ * @param inputs - validated inputs in canonical units (see types.ts).
+ * @param settings - calibrations, cosmology, constants and Monte Carlo settings.
+ * @param rng - the object's random source.
+ */
+export function deriveObject(inputs: ObjectInputs, settings: DeriveSettings, rng: Rng): DerivedObject {
+  const plan = planObject(inputs, settings);
+  const scratch = createScratch(plan);
+  const nominal = new Float64Array(OUT_SIZE);
+  evaluateChain(plan, settings, null, scratch, nominal, false);
+
+  const logLum: Partial<Record<LineId, number>> = {};
+  for (let i = 0; i < plan.sources.length; i++) {
+    const s = plan.sources[i] as LumSource;
+    if (s.key === 'halpha' || s.key === 'hbeta' || s.key === 'mgii' || s.key === 'civ') logLum[s.key] = scratch.logL[i] as number;
+  }
+  const cont5100 = plan.sources.findIndex((s) => s.key === 'l5100');
+  const logL5100 =
+    cont5100 >= 0
+      ? (scratch.logL[cont5100] as number)
+      : logLum.halpha !== undefined
+        ? logL5100FromLogLHalpha(logLum.halpha)
+        : logLum.hbeta !== undefined
+          ? logL5100FromLogLHbeta(logLum.hbeta)
+          : null;
+
+  const flags = plan.flags;
+  if (plan.mass) {
+    const l = scratch.logL[plan.mass.source] as number;
+    const calL = plan.mass.l5100FromHbeta ? logL5100FromLogLHbeta(l) : l;
+    if (!inCalibrationRange(plan.mass.cal, calL, plan.mass.fwhm.value)) flags.add('calibration_out_of_range');
+  }
+  if (plan.local) {
+    const x = plan.local.xIsSigma ? Math.log10(plan.local.x.value) : plan.local.x.value;
+    if (!inLocalRelationRange(plan.local.rel, x)) flags.add('local_relation_extrapolated');
+  }
+
+  const draws = Math.max(1, Math.floor(settings.draws));
+  const buf = drawBuffers(draws);
+  const one = new Float64Array(OUT_SIZE);
+  let superEdd = 0;
+  let above = 0;
+  for (let k = 0; k < draws; k++) {
+    evaluateChain(plan, settings, rng, scratch, one);
+    for (let j = 0; j < OUT_SIZE; j++) (buf[j] as Float64Array)[k] = one[j] as number;
+    if ((one[OUT.logEddRatio] as number) > 0) superEdd++;
+    if ((one[OUT.deltaLocal] as number) > 0) above++;
+  }
+  const pct = (slot: number): Percentiles | null =>
+    Number.isFinite(nominal[slot]) ? percentiles16_50_84(buf[slot] as Float64Array) : null;
+
+  const logMbh = finiteOrNull(nominal[OUT.logMbh] as number);
+  const logEddRatio = finiteOrNull(nominal[OUT.logEddRatio] as number);
+  const delta = finiteOrNull(nominal[OUT.deltaLocal] as number);
+  const pDelta = pct(OUT.deltaLocal);
+  const seedOk = logMbh !== null && !Number.isNaN(plan.dtSeedGyr);
+  const lamReq = (seedMsun: number): number | null =>
+    seedOk ? finiteOrNull(lambdaRequired(logMbh, Math.log10(seedMsun), plan.dtSeedGyr, settings.efficiency, settings.dutyCycle)) : null;
+  let localOffsetSigma: number | null = null;
+  if (delta !== null && pDelta && plan.local) {
+    const half = (pDelta.p84 - pDelta.p16) / 2;
+    localOffsetSigma = delta / Math.hypot(plan.local.rel.scatterDex, half);
+  }
+
+  return {
+    ageGyr: plan.ageGyr,
+    dlMpc: plan.dlMpc,
+    logLum,
+    logL5100: logL5100 !== null ? finiteOrNull(logL5100) : null,
+    logMbh,
+    mbhMethod: plan.mass ? plan.mass.cal.id : null,
+    logLbol: finiteOrNull(nominal[OUT.logLbol] as number),
+    lbolMethod: plan.lbol ? plan.lbol.label : null,
+    logEddRatio,
+    pSuperEddington: logEddRatio !== null ? superEdd / draws : null,
+    logMseed: finiteOrNull(nominal[OUT.logMseed] as number),
+    lambdaReqLight: lamReq(settings.lightSeedMsun),
+    lambdaReqHeavy: lamReq(settings.heavySeedMsun),
+    deltaLogMbhLocal: delta,
+    localOffsetSigma,
+    pAboveLocal: delta !== null ? above / draws : null,
+    pct: {
+      logMbh: pct(OUT.logMbh),
+      logLbol: pct(OUT.logLbol),
+      logEddRatio: pct(OUT.logEddRatio),
+      logMseed: pct(OUT.logMseed),
+      deltaLogMbhLocal: pDelta,
+    },
+    flags: [...flags].sort(),
+  };
+}

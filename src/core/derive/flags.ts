@@ -1,0 +1,27 @@
+/**
+ * The flags deriveObject (and the catalog build) attach to an object, with the sentence a
+ * reader sees for each. Catalog columns hold the ids, comma-separated; the site explains
+ * them with these words.
+ */
+export const FLAG_DESCRIPTIONS = {
+  invalid_input: 'An input value failed validation; no quantity was derived (see the rejection report).',
+  no_mass: 'No broad line had both a width and the luminosity its calibration needs: no black-hole mass.',
+  no_lbol: 'No luminosity the bolometric methods can use: no bolometric luminosity.',
+  lbol_fallback: 'The configured bolometric method lacked its input; another method was used (see lbol_method).',
+  mbh_upper_limit: 'The black-hole mass is an upper limit: it rests on an upper-limit line flux.',
+  lbol_upper_limit: 'The bolometric luminosity is an upper limit: it rests on an upper-limit flux.',
+  edd_ratio_upper_limit: 'The Eddington ratio is an upper limit.',
+  edd_ratio_lower_limit: 'The Eddington ratio is a lower limit (measured luminosity over an upper-limit mass).',
+  l5100_from_hbeta: 'The 5100 Å luminosity for the Hβ mass was estimated from L(Hβ) (Greene & Ho 2005 eq. 2).',
+  calibration_out_of_range: 'Luminosity or width lies outside the range of the virial calibration sample: the mass is an extrapolation.',
+  no_dust_correction: 'No A_V or Balmer decrement was given: luminosities are not corrected for dust.',
+  balmer_below_intrinsic: 'The Balmer decrement is below its intrinsic value: no dust correction was applied.',
+  lensed: 'The object is gravitationally lensed: luminosities were divided by the magnification.',
+  no_host_mass: 'No host measurement for the local relation: no offset from it.',
+  bulge_mass_from_total: 'The local relation takes a bulge mass; the total stellar mass was used in its place.',
+  local_relation_extrapolated: 'The host quantity lies outside the range of the local relation sample.',
+  z_above_seed_redshift: 'The object lies at or above the seed redshift: no seed mass or growth rate.',
+  low_snr: 'A measurement used has signal-to-noise below 2: its Monte Carlo draws are truncated at zero.',
+} as const;
+
+export type FlagId = keyof typeof FLAG_DESCRIPTIONS;

@@ -1,0 +1,212 @@
+import type { DeriveSettings, LineId, Measured, ObjectInputs } from './types.ts';
+import type { FlagId } from './flags.ts';
+import { getCosmology } from '../cosmology/getCosmology.ts';
+import { MPC_CM } from '../constants/physical.ts';
+import { getDustCurve, kLambda } from '../dust/kLambda.ts';
+import { lineWavelengthAngstrom } from '../dust/lineWavelengths.ts';
+import { getCalibration } from '../virial/calibrations.ts';
+import type { VirialCalibration } from '../virial/virialCalibration.ts';
+import type { ContinuumBand } from '../bolometric/fixedCorrections.ts';
+import type { ContinuumBolometricMethod } from '../bolometric/logLbolFromContinuum.ts';
+import { getLocalRelation } from '../local/localRelations.ts';
+import type { LocalRelation } from '../local/localRelation.ts';
+import { snr } from './drawPositive.ts';
+
+/** Rest wavelengths of the continuum bands, Å (the bands' names). */
+const BAND_ANGSTROM: Readonly<Record<ContinuumBand, number>> = { l5100: 5100, l3000: 3000, l1350: 1350 };
+const BAND_INPUT = { l5100: 'lamL5100', l3000: 'lamL3000', l1350: 'lamL1350' } as const;
+
+/** An observed luminosity the chain uses: a line flux or luminosity, or a continuum λL_λ. */
+export interface LumSource {
+  key: LineId | ContinuumBand;
+  m: Measured;
+  /** True when `m` is a flux (erg s⁻¹ cm⁻²) to be multiplied by 4πD_L²; false for a luminosity (erg s⁻¹). */
+  isFlux: boolean;
+  /** A_λ/E(B−V) of the dust curve at the source's rest wavelength. */
+  dustK: number;
+  isLimit: boolean;
+}
+
+export type DustPlan =
+  | { mode: 'none' }
+  | { mode: 'av'; m: Measured; rv: number }
+  | { mode: 'decrement'; m: Measured };
+
+export interface MassPlan {
+  line: LineId;
+  cal: VirialCalibration;
+  fwhm: Measured;
+  /** Index into ObjectPlan.sources. */
+  source: number;
+  /** The calibration's luminosity is L5100 estimated from L(Hβ) (Greene & Ho 2005 eq. 2). */
+  l5100FromHbeta: boolean;
+}
+
+export interface LbolPlan {
+  /** Recorded in `lbol_method`, e.g. 'halpha_gh05_bc5100', 'bc3000', 'netzer19_l5100'. */
+  label: string;
+  route: 'halpha' | ContinuumBolometricMethod;
+  band?: ContinuumBand;
+  source: number;
+}
+
+export interface LocalPlan {
+  rel: LocalRelation;
+  x: Measured;
+  /** The relation takes log σ*; `x` holds σ* in km/s. */
+  xIsSigma: boolean;
+}
+
+/** Everything fixed for one object before its draws: distances, ages and the route each quantity takes. */
+export interface ObjectPlan {
+  z: number;
+  ageGyr: number;
+  dlMpc: number;
+  /** Time from the seed redshift to z, Gyr (NaN when z ≥ z_seed). */
+  dtSeedGyr: number;
+  /** log10(4π D_L²), D_L in cm. */
+  logFourPiDl2: number;
+  mu: Measured | null;
+  dust: DustPlan;
+  /** Every line and continuum luminosity given, lines first in LINES order. */
+  sources: LumSource[];
+  /** Indices of `sources` the mass and L_bol routes use (the only ones drawn). */
+  used: number[];
+  mass: MassPlan | null;
+  lbol: LbolPlan | null;
+  local: LocalPlan | null;
+  flags: Set<FlagId>;
+}
+
+const CONTINUUM_ORDER: Readonly<Record<string, ContinuumBand[]>> = {
+  bc5100: ['l5100', 'l3000', 'l1350'],
+  bc3000: ['l3000', 'l5100', 'l1350'],
+  bc1350: ['l1350', 'l3000', 'l5100'],
+  netzer19: ['l5100', 'l3000', 'l1350'],
+  halpha_gh05_bc5100: ['l5100', 'l3000', 'l1350'],
+};
+const BAND_METHOD: Readonly<Record<ContinuumBand, ContinuumBolometricMethod>> = { l5100: 'bc5100', l3000: 'bc3000', l1350: 'bc1350' };
+
+/**
+ * Resolves, from one object's central inputs and the settings, which line gives the mass,
+ * which luminosity gives L_bol (falling back through the other methods when the configured
+ * one lacks its input), how dust and lensing are corrected, and which host quantity feeds
+ * the local relation. Pure; throws RangeError for a redshift that is not positive and finite.
+ */
+export function planObject(inputs: ObjectInputs, settings: DeriveSettings): ObjectPlan {
+  const z = inputs.z;
+  if (!(z > 0) || !Number.isFinite(z)) throw new RangeError(`redshift must be positive and finite, got ${z}`);
+  const flags = new Set<FlagId>();
+  const cosmo = getCosmology(settings.cosmology);
+  const ageGyr = cosmo.ageGyr(z);
+  const dlMpc = cosmo.luminosityDistanceMpc(z);
+  const dtSeedGyr = z < settings.zSeed ? ageGyr - cosmo.ageGyr(settings.zSeed) : NaN;
+  if (!(z < settings.zSeed)) flags.add('z_above_seed_redshift');
+  const dlCm = dlMpc * MPC_CM;
+  const logFourPiDl2 = Math.log10(4 * Math.PI) + 2 * Math.log10(dlCm);
+
+  const mu = inputs.mu ?? null;
+  if (mu && mu.value !== 1) flags.add('lensed');
+
+  const curve = settings.dustCurve;
+  let dust: DustPlan = { mode: 'none' };
+  if (inputs.av) dust = { mode: 'av', m: inputs.av, rv: getDustCurve(curve).rv };
+  else if (inputs.balmerDecrement) {
+    dust = { mode: 'decrement', m: inputs.balmerDecrement };
+    if (inputs.balmerDecrement.value < settings.intrinsicBalmer) flags.add('balmer_below_intrinsic');
+  } else flags.add('no_dust_correction');
+
+  const sources: LumSource[] = [];
+  const lineSource = new Map<LineId, number>();
+  for (const line of ['halpha', 'hbeta', 'mgii', 'civ'] as const) {
+    const li = inputs.lines[line];
+    const m = li?.fluxCgs ?? li?.lumErgS;
+    if (!li || !m) continue;
+    lineSource.set(line, sources.length);
+    sources.push({ key: line, m, isFlux: li.fluxCgs !== undefined, dustK: kLambda(curve, lineWavelengthAngstrom(line)), isLimit: li.fluxIsLimit === true });
+  }
+  const bandSource = new Map<ContinuumBand, number>();
+  for (const band of ['l5100', 'l3000', 'l1350'] as const) {
+    const m = inputs[BAND_INPUT[band]];
+    if (!m) continue;
+    bandSource.set(band, sources.length);
+    sources.push({ key: band, m, isFlux: false, dustK: kLambda(curve, BAND_ANGSTROM[band]), isLimit: false });
+  }
+
+  const mass = planMass(inputs, settings, lineSource, bandSource, flags);
+  const lbol = planLbol(settings, lineSource, bandSource, flags);
+  const used = [...new Set([mass?.source, lbol?.source].filter((i): i is number => i !== undefined))];
+  for (const i of used) if (snr((sources[i] as LumSource).m) < 2 && !(sources[i] as LumSource).isLimit) flags.add('low_snr');
+  if (mass && snr(mass.fwhm) < 2) flags.add('low_snr');
+  if (mass && (sources[mass.source] as LumSource).isLimit) flags.add('mbh_upper_limit');
+  const lbolLimit = lbol !== null && (sources[lbol.source] as LumSource).isLimit;
+  if (lbolLimit) flags.add('lbol_upper_limit');
+  if (mass && lbol) {
+    if (lbolLimit) flags.add('edd_ratio_upper_limit');
+    else if ((sources[mass.source] as LumSource).isLimit) flags.add('edd_ratio_lower_limit');
+  }
+
+  return { z, ageGyr, dlMpc, dtSeedGyr, logFourPiDl2, mu, dust, sources, used, mass, lbol, local: planLocal(inputs, settings, flags), flags };
+}
+
+function planMass(
+  inputs: ObjectInputs,
+  settings: DeriveSettings,
+  lineSource: Map<LineId, number>,
+  bandSource: Map<ContinuumBand, number>,
+  flags: Set<FlagId>,
+): MassPlan | null {
+  for (const line of settings.linePriority) {
+    const fwhm = inputs.lines[line]?.fwhmKms;
+    if (!fwhm) continue;
+    const cal = getCalibration(settings.calibrations[line]);
+    const source = cal.luminosity === 'line' ? lineSource.get(line) : bandSource.get(cal.luminosity);
+    if (source !== undefined) return { line, cal, fwhm, source, l5100FromHbeta: false };
+    // Hβ masses calibrated on L5100 with no continuum measured: estimate L5100 from L(Hβ).
+    const hb = lineSource.get('hbeta');
+    if (line === 'hbeta' && cal.luminosity === 'l5100' && hb !== undefined) {
+      flags.add('l5100_from_hbeta');
+      return { line, cal, fwhm, source: hb, l5100FromHbeta: true };
+    }
+  }
+  flags.add('no_mass');
+  return null;
+}
+
+function planLbol(
+  settings: DeriveSettings,
+  lineSource: Map<LineId, number>,
+  bandSource: Map<ContinuumBand, number>,
+  flags: Set<FlagId>,
+): LbolPlan | null {
+  const method = settings.bolometric;
+  const candidates: LbolPlan[] = [];
+  const ha = lineSource.get('halpha');
+  const haPlan: LbolPlan | null = ha !== undefined ? { label: 'halpha_gh05_bc5100', route: 'halpha', source: ha } : null;
+  if (method === 'halpha_gh05_bc5100' && haPlan) candidates.push(haPlan);
+  for (const band of CONTINUUM_ORDER[method] ?? []) {
+    const source = bandSource.get(band);
+    if (source === undefined) continue;
+    candidates.push(
+      method === 'netzer19'
+        ? { label: `netzer19_${band}`, route: 'netzer19', band, source }
+        : { label: BAND_METHOD[band], route: BAND_METHOD[band], band, source },
+    );
+  }
+  if (method !== 'halpha_gh05_bc5100' && haPlan) candidates.push(haPlan);
+  const chosen = candidates[0] ?? null;
+  if (!chosen) flags.add('no_lbol');
+  else if (chosen.route !== (method === 'halpha_gh05_bc5100' ? 'halpha' : method)) flags.add('lbol_fallback');
+  return chosen;
+}
+
+function planLocal(inputs: ObjectInputs, settings: DeriveSettings, flags: Set<FlagId>): LocalPlan | null {
+  const rel = getLocalRelation(settings.localRelation);
+  if (rel.x === 'logSigma') {
+    if (!inputs.sigmaStarKms) return flags.add('no_host_mass'), null;
+    return { rel, x: inputs.sigmaStarKms, xIsSigma: true };
+  }
+  if (!inputs.logMstar) return flags.add('no_host_mass'), null;
+  if (rel.x === 'logMbulge') flags.add('bulge_mass_from_total');
+  return { rel, x: inputs.logMstar, xIsSigma: false };
+}
