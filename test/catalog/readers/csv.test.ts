@@ -1,0 +1,103 @@
+import { writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { afterAll, describe, expect, it } from 'vitest';
+import { openTable } from '../../../src/catalog/readers/openTable.ts';
+import { TEXT_READ_BYTES } from '../../../src/catalog/readers/textChunks.ts';
+import { makeTmpDir, readAll } from './readerTestKit.ts';
+
+const { dir, cleanup } = makeTmpDir('csv');
+afterAll(cleanup);
+
+let n = 0;
+async function read(content: string | Buffer, ext = 'csv', chunkRows?: number) {
+  const path = join(dir, `t${n++}.${ext}`);
+  writeFileSync(path, content);
+  const src = await openTable(path);
+  return { src, ...(await readAll(src, chunkRows)) };
+}
+
+describe('the CSV reader', () => {
+  it('follows RFC 4180 quoting: delimiters, doubled quotes and line breaks inside quotes', async () => {
+    const { src, columns } = await read('"na,me","x"\n"a,b","say ""hi"""\n"two\r\nlines","3"\nplain,4\n');
+    expect(src.columns.map((c) => c.name)).toEqual(['na,me', 'x']);
+    expect(columns).toEqual([['a,b', 'two\r\nlines', 'plain'], ['say "hi"', '3', '4']]);
+    expect(src.columns[1]!.kind).toBe('string');
+  });
+
+  it('skips comment lines at the top and between rows but keeps # inside quoted fields', async () => {
+    const { src, columns } = await read('# produced by hand\n#  second note\na,b\n1,"x\n# not a comment"\n# between rows\n2,y\n#last');
+    expect(src.meta).toEqual({ comments: ['produced by hand', 'second note'] });
+    expect(columns).toEqual([[1, 2], ['x\n# not a comment', 'y']]);
+  });
+
+  it('reads UTF-8 with a byte-order mark and CRLF line ends', async () => {
+    const { src, columns } = await read('\uFEFFname,z\r\nnaïve,1.5\r\n東京,2\r\n');
+    expect(src.columns.map((c) => c.name)).toEqual(['name', 'z']);
+    expect(columns).toEqual([['naïve', '東京'], [1.5, 2]]);
+  });
+
+  it('reads a 100 kB quoted field holding commas, quotes and newlines intact', async () => {
+    const big = 'x,y "q" z\n'.repeat(10_000) + 'end';
+    expect(big.length).toBeGreaterThan(100_000);
+    const quoted = `"${big.replace(/"/g, '""')}"`;
+    const { columns } = await read(`id,blob,after\n1,${quoted},ok\n2,short,ok\n`);
+    expect(columns[1]![0]).toBe(big);
+    expect(columns).toEqual([[1, 2], [big, 'short'], ['ok', 'ok']]);
+  });
+
+  it('decodes a multi-byte character that straddles the read-buffer boundary', async () => {
+    // Put the 4-byte emoji across the end of the first read (TEXT_READ_BYTES bytes).
+    const prefix = 'a\n';
+    const fill = 'x'.repeat(TEXT_READ_BYTES - prefix.length - 2);
+    const { columns } = await read(`${prefix}${fill}😀tail\n`);
+    expect(columns[0]![0]).toBe(`${fill}😀tail`);
+  });
+
+  it('treats empty and whitespace-only cells, and quoted empty strings, as null and trims unquoted cells', async () => {
+    const { columns } = await read('a, b ,c\n 1 ,  ,""\n2,x,\n');
+    expect(columns).toEqual([[1, 2], [null, 'x'], [null, null]]);
+  });
+
+  it('skips blank lines and names an unnamed header cell col<N>', async () => {
+    const { src, columns } = await read(',z\n\n0,1\n   \n1,2\n\n');
+    expect(src.columns.map((c) => c.name)).toEqual(['col1', 'z']);
+    expect(columns).toEqual([[0, 1], [1, 2]]);
+  });
+
+  it('infers int, float, bool and string kinds from every cell', async () => {
+    const { src, columns } = await read([
+      'i,f,special,b,s,mixed,none,bigid',
+      '1,1,NaN,true,a,1,,9007199254740993',
+      '-2,2.5e3,inf,FALSE,2,true,,12',
+      '+3,.5,-Infinity,True,,2,,',
+    ].join('\n'));
+    expect(src.columns.map((c) => c.kind)).toEqual(['int', 'float', 'float', 'bool', 'string', 'string', 'float', 'string']);
+    expect(columns).toEqual([
+      [1, -2, 3],
+      [1, 2500, 0.5],
+      [NaN, Infinity, -Infinity],
+      [true, false, true],
+      ['a', '2', null],
+      ['1', 'true', '2'],
+      [null, null, null],
+      // A 64-bit identifier beyond 2^53 would be rounded as a number: the column stays text.
+      ['9007199254740993', '12', null],
+    ]);
+  });
+
+  it('reads a header-only file as zero rows', async () => {
+    const { src, chunkShapes } = await read('a,b\n');
+    expect(src.nRows).toBe(0);
+    expect(chunkShapes).toEqual([]);
+  });
+
+  it('reads TSV with tabs as the only delimiter', async () => {
+    const { src, columns } = await read('name\tz\tnote\nobj one\t1.25\t\nobj, two\t\tsee "x"\n', 'tsv');
+    expect(src.format).toBe('tsv');
+    expect(columns).toEqual([['obj one', 'obj, two'], [1.25, null], [null, 'see "x"']]);
+  });
+
+  it('reads a file without a final newline and with lone CR line ends', async () => {
+    expect((await read('a,b\r1,2\r3,4')).columns).toEqual([[1, 3], [2, 4]]);
+  });
+});
