@@ -72,6 +72,22 @@ function columnsOf(v: unknown): Record<string, ColumnMeta> {
   return out;
 }
 
+/** Recorded content hashes: a `hashes` record, or the `sha256` of the input and config files. */
+function hashesOf(r: Record<string, unknown>): Record<string, string> {
+  const out = flatRecord(pick(r, 'hashes'), (x): x is string => typeof x === 'string');
+  for (const k of ['input', 'config']) {
+    const h = str(pick(r, `${k}.sha256`));
+    if (h) out[k] = `sha256:${h}`;
+  }
+  return out;
+}
+
+/** The derivation's own settings (DeriveSettings), whether recorded alone or inside their provenance record. */
+export function deriveSettingsOf(meta: SiteMeta): Record<string, unknown> {
+  const inner = meta.settings.settings;
+  return isRecord(inner) ? inner : meta.settings;
+}
+
 /** Normalises a parsed sidecar. Tolerates missing parts: a page shows what is recorded. */
 export function normalizeMeta(raw: unknown): SiteMeta {
   const r = isRecord(raw) ? raw : {};
@@ -85,7 +101,7 @@ export function normalizeMeta(raw: unknown): SiteMeta {
     citation: text('citation', 'catalog.citation'),
     toolVersion: text('tool.version', 'toolVersion', 'tool_version', 'version'),
     createdAt: text('createdAt', 'created_at', 'created'),
-    hashes: flatRecord(pick(r, 'hashes'), (x): x is string => typeof x === 'string'),
+    hashes: hashesOf(r),
     counts: flatRecord(pick(r, 'counts'), (x): x is number => typeof x === 'number'),
     columns: columnsOf(pick(r, 'columns')),
     settings: isRecord(pick(r, 'settings')) ? (pick(r, 'settings') as Record<string, unknown>) : {},
