@@ -41,9 +41,9 @@ export class XmlTokenizer {
     return n;
   }
 
-  /** A CatalogError at the current line. */
-  error(message: string): CatalogError {
-    return new CatalogError(`${this.label}: line ${this.line()}: ${message}`);
+  /** A CatalogError at the current line, or `extraLines` lines further (for text spanning lines). */
+  error(message: string, extraLines = 0): CatalogError {
+    return new CatalogError(`${this.label}: line ${this.line() + extraLines}: ${message}`);
   }
 
   /** Feeds the next piece of the document. */
@@ -182,7 +182,8 @@ export class XmlTokenizer {
 
   private emitText(raw: string): void {
     if (this.stack.length === 0) {
-      if (raw.trim() !== '') throw this.error('text outside the root element');
+      const at = raw.search(/\S/);
+      if (at !== -1) throw this.error('text outside the root element', newlinesBefore(raw, at));
       return;
     }
     this.handler.text(raw.includes('&') ? this.decode(raw) : raw);
@@ -196,12 +197,13 @@ export class XmlTokenizer {
   /** Decodes character and predefined entity references; anything else after '&' is an error. */
   private decode(s: string): string {
     if (!s.includes('&')) return s;
-    return s.replace(/&([^;\s&]*);?/g, (all, ref: string) => {
-      if (!all.endsWith(';')) throw this.error(`unescaped "&" in text (write &amp;)`);
-      if (ref.startsWith('#x') || ref.startsWith('#X')) return codePoint(ref.slice(2), 16, () => this.error(`bad character reference "${all}"`));
-      if (ref.startsWith('#')) return codePoint(ref.slice(1), 10, () => this.error(`bad character reference "${all}"`));
+    return s.replace(/&([^;\s&<]*);?/g, (all: string, ref: string, at: number) => {
+      const fail = (msg: string) => this.error(msg, newlinesBefore(s, at));
+      if (!all.endsWith(';')) throw fail(`unescaped "&" in text (write &amp;)`);
+      if (ref.startsWith('#x') || ref.startsWith('#X')) return codePoint(ref.slice(2), 16, () => fail(`bad character reference "${all}"`));
+      if (ref.startsWith('#')) return codePoint(ref.slice(1), 10, () => fail(`bad character reference "${all}"`));
       const named = NAMED_ENTITIES[ref];
-      if (named === undefined) throw this.error(`unknown entity "${all}"`);
+      if (named === undefined) throw fail(`unknown entity "${all}"`);
       return named;
     });
   }
@@ -212,6 +214,12 @@ function codePoint(digits: string, radix: number, fail: () => Error): string {
   const cp = ok ? parseInt(digits, radix) : NaN;
   if (!Number.isFinite(cp) || cp > 0x10ffff) throw fail();
   return String.fromCodePoint(cp);
+}
+
+function newlinesBefore(s: string, end: number): number {
+  let n = 0;
+  for (let i = s.indexOf('\n'); i !== -1 && i < end; i = s.indexOf('\n', i + 1)) n++;
+  return n;
 }
 
 function localName(name: string): string {
