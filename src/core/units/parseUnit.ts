@@ -18,7 +18,8 @@ const NUMBER = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?/;
 const SYMBOL = /^[A-Za-zµμÅ_]+/;
 /** Exponent after a symbol: `2`, `-1`, `+2`, `**-1`, `^-1`, `^(-1)`, `**(1/2)`, `^0.5`. */
 const EXPONENT = /^(?:\*\*|\^)?(?:\(([+-]?\d+(?:\.\d+)?(?:\/\d+)?)\)|([+-]?\d+(?:\.\d+)?))/;
-const LOG_FORM = /^(?:log|log10|dex)\s*\((.*)\)$/i;
+/** log10 of a unit: `log(solMass)`, `log10(Msun)`, `dex(solMass)`, `log10 Msun`, and CDS `[solMass]`. */
+const LOG_FORMS = [/^(?:log10|log|dex)\s*\((.*)\)$/i, /^(?:log10|log)\s+([^()]+)$/i, /^\[(.*)\]$/];
 
 class Reader {
   pos = 0;
@@ -128,7 +129,7 @@ const cache = new Map<string, ParsedUnit>();
 /**
  * Reads a catalog unit string (IVOA VOUnits 1.0 syntax and common variants: `km/s`, `km s-1`,
  * `km.s**-1`, `erg/s/cm^2`, `1e-18 erg/s/cm2`, CDS `10-20 erg s-1 cm-2`, `log(solMass)`,
- * `[solMass]`, `dex`, `%`; `''` and `'-'` are dimensionless). Throws {@link UnitError} naming
+ * `log10 Msun`, `[solMass]`, `dex`, `%`; `''` and `'-'` are dimensionless). Throws {@link UnitError} naming
  * the string and the part that could not be read. Results are cached per string.
  */
 export function parseUnit(unit: string): ParsedUnit {
@@ -136,7 +137,7 @@ export function parseUnit(unit: string): ParsedUnit {
   if (hit) return hit;
   const t = unit.trim();
   let parsed: ParsedUnit;
-  const logForm = LOG_FORM.exec(t) ?? /^\[(.*)\]$/.exec(t);
+  const logForm = LOG_FORMS.map((re) => re.exec(t)).find((m) => m !== null);
   if (logForm) parsed = { ...parseLinear(logForm[1] as string, unit), log: true };
   else if (t === 'dex') parsed = { cgs: 1, dimension: DIMENSIONLESS, log: true };
   else parsed = { ...parseLinear(t, unit), log: false };

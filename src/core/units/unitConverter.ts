@@ -1,7 +1,9 @@
-import { dimensionName, sameDimension, withArticle } from './dimension.ts';
+import { DIMENSIONLESS, dimensionName, sameDimension, withArticle } from './dimension.ts';
 import { parseUnit } from './parseUnit.ts';
 import { KIND_SPECS, type QuantityKind } from './quantityKind.ts';
 import { UnitError } from './unitError.ts';
+
+export type { QuantityKind } from './quantityKind.ts';
 
 const identity = (x: number): number => x;
 
@@ -10,7 +12,8 @@ const identity = (x: number): number => x;
  * flux → erg s-1 cm-2, luminosity → erg s-1, wavelength → Angstrom, magnitude → mag, mass →
  * solMass, logMass → log10 solMass, dimensionless, logDimensionless → dex). An undefined, empty
  * or '-' unit means the canonical one. logMass also takes a linear mass unit (x ↦ log10 of x in
- * solMass); log units shift by log10 of their size. Throws {@link UnitError}: `unknown unit "…"`
+ * solMass), and a bare `dex` as dex of solMass (how catalogs label log M and its errors);
+ * log units shift by log10 of their size. Throws {@link UnitError}: `unknown unit "…"`
  * when unreadable, or `unit "…" is a luminosity, expected a flux (erg s-1 cm-2)` when of the wrong
  * dimension.
  */
@@ -19,6 +22,8 @@ export function unitConverter(unit: string | undefined, kind: QuantityKind): (x:
   if (!spec) throw new UnitError(`unknown quantity kind "${String(kind)}"`);
   if (unit === undefined || unit.trim() === '' || unit.trim() === '-') return identity;
   const p = parseUnit(unit);
+  // Catalogs label log-mass columns, and above all their errors, plain "dex": read it as dex of solMass.
+  if (kind === 'logMass' && p.log && p.cgs === 1 && sameDimension(p.dimension, DIMENSIONLESS)) return identity;
   const expected = `expected ${withArticle(spec.name)} (${spec.unit || 'dimensionless'})`;
   if (!sameDimension(p.dimension, spec.dimension)) {
     const what = p.log ? `the log of ${withArticle(dimensionName(p.dimension))}` : withArticle(dimensionName(p.dimension));

@@ -76,6 +76,10 @@ describe('unitConverter', () => {
     expect(unitConverter('dex(solMass)', 'logMass')(9.5)).toBe(9.5);
     expect(unitConverter('[solMass]', 'logMass')(9.5)).toBe(9.5);
     expect(unitConverter('[Msun]', 'logMass')(9.5)).toBe(9.5);
+    expect(unitConverter('log10 Msun', 'logMass')(9.5)).toBe(9.5);
+    expect(unitConverter('log10(Msun)', 'logMass')(9.5)).toBe(9.5);
+    // Bare dex on a log-mass column (or its error) is dex of solMass: common practice, no source.
+    expect(unitConverter('dex', 'logMass')(9.5)).toBe(9.5);
     expectClose(unitConverter('log(1e6 solMass)', 'logMass')(2), 8, { rtol: 1e-15, source: src });
     expectClose(unitConverter('solMass', 'logMass')(3.16e9), Math.log10(3.16e9), { rtol: 1e-15, source: src });
     expectClose(unitConverter('1e8 Msun', 'logMass')(2), Math.log10(2e8), { rtol: 1e-15, source: src });
@@ -104,7 +108,8 @@ describe('unitConverter errors', () => {
     expect(() => unitConverter('km', 'velocity')).toThrow('unit "km" is a length, expected a velocity (km s-1)');
     expect(() => unitConverter('mag', 'mass')).toThrow('unit "mag" is a magnitude, expected a mass (solMass)');
     expect(() => unitConverter('log(solMass)', 'mass')).toThrow('unit "log(solMass)" is a logarithmic unit, expected a mass (solMass)');
-    expect(() => unitConverter('dex', 'logMass')).toThrow('unit "dex" is the log of a dimensionless number, expected a log mass (log(solMass))');
+    expect(() => unitConverter('log(km)', 'logMass')).toThrow('unit "log(km)" is the log of a length, expected a log mass (log(solMass))');
+    expect(() => unitConverter('dex', 'mass')).toThrow('unit "dex" is the log of a dimensionless number, expected a mass (solMass)');
     expect(() => unitConverter('km/s', 'dimensionless')).toThrow('unit "km/s" is a velocity, expected a dimensionless number (dimensionless)');
   });
 });
