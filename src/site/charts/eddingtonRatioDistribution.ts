@@ -9,6 +9,7 @@ import { PALETTE } from './palette.ts';
 import { pointsFromRows } from './pointsFromRows.ts';
 import { hasFlag, num } from './rowValues.ts';
 import type { CatalogRow, ChartOptions } from './types.ts';
+import { tag } from './markTag.ts';
 
 /** Options of {@link eddingtonRatioDistribution}. */
 export interface EddingtonRatioDistributionOptions extends ChartOptions {
@@ -95,27 +96,27 @@ export function eddingtonRatioDistribution(rows: readonly CatalogRow[], options:
     ariaDescription: 'Histogram of log Eddington ratio, with upper limits stacked separately.',
     marks: [
       Plot.frame({ stroke: PALETTE.ink, strokeOpacity: 0.25 }),
-      Plot.rectY(bins, { x1: 'x1', x2: 'x2', y1: 0, y2: 'detections', fill: PALETTE.population, fillOpacity: 0.85, inset: 0.5, ariaLabel: 'detections bin' }),
+      Plot.rectY(bins, { x1: 'x1', x2: 'x2', y1: 0, y2: 'detections', fill: PALETTE.population, fillOpacity: 0.85, inset: 0.5, ...tag('detections bin') }),
       Plot.rectY(
         bins.filter((b) => b.limits > 0),
-        { x1: 'x1', x2: 'x2', y1: 'detections', y2: (b: { detections: number; limits: number }) => b.detections + b.limits, fill: '#dfe9ee', stroke: PALETTE.population, strokeDasharray: '3 2', inset: 0.5, ariaLabel: 'upper limits bin' },
+        { x1: 'x1', x2: 'x2', y1: 'detections', y2: (b: { detections: number; limits: number }) => b.detections + b.limits, fill: '#dfe9ee', stroke: PALETTE.population, strokeDasharray: '3 2', inset: 0.5, ...tag('upper limits bin') },
       ),
-      Plot.ruleX([0], { stroke: PALETTE.ink, strokeDasharray: '4 3', ariaLabel: 'Eddington limit' }),
+      Plot.ruleX([0], { stroke: PALETTE.ink, strokeDasharray: '4 3', ...tag('Eddington limit') }),
       Plot.ruleY(markers.filter((m) => m.xLo !== null && m.xHi !== null && !m.xLimit), {
         y: 'y',
         x1: 'xLo',
         x2: 'xHi',
         stroke: (m: ChartPoint) => (m.role === 'extra' ? PALETTE.extra : PALETTE.ink),
         strokeWidth: 1.6,
-        ariaLabel: 'marked error bar x',
+        ...tag('marked error bar x'),
       }),
-      Plot.ruleX(markers, { x: 'x', y1: 0, y2: 'y', stroke: (m: ChartPoint) => (m.role === 'extra' ? PALETTE.extra : PALETTE.highlight), strokeWidth: 1.2, strokeOpacity: 0.7, ariaLabel: 'marked value' }),
-      Plot.dot(markers.filter((m) => m.role === 'highlight' && !m.xLimit), { x: 'x', y: 'y', r: 5.5, fill: PALETTE.highlight, stroke: PALETTE.ink, strokeWidth: 1.4, ariaLabel: 'highlighted object' }),
-      Plot.dot(markers.filter((m) => m.role === 'extra' && !m.xLimit), { x: 'x', y: 'y', r: 8, symbol: 'star', fill: PALETTE.extra, stroke: PALETTE.ink, strokeWidth: 1.2, ariaLabel: 'new object' }),
-      Plot.dot(markers.filter((m) => m.role === 'highlight' && m.xLimit), { x: 'x', y: 'y', r: 6, symbol: LIMIT_LEFT, stroke: PALETTE.ink, strokeWidth: 2, fill: 'none', ariaLabel: 'highlighted upper limit' }),
-      Plot.dot(markers.filter((m) => m.role === 'extra' && m.xLimit), { x: 'x', y: 'y', r: 6, symbol: LIMIT_LEFT, stroke: PALETTE.extra, strokeWidth: 2, fill: 'none', ariaLabel: 'new object upper limit' }),
+      Plot.ruleX(markers, { x: 'x', y1: 0, y2: 'y', stroke: (m: ChartPoint) => (m.role === 'extra' ? PALETTE.extra : PALETTE.highlight), strokeWidth: 1.2, strokeOpacity: 0.7, ...tag('marked value') }),
+      Plot.dot(markers.filter((m) => m.role === 'highlight' && !m.xLimit), { x: 'x', y: 'y', r: 5.5, fill: PALETTE.highlight, stroke: PALETTE.ink, strokeWidth: 1.4, ...tag('highlighted object') }),
+      Plot.dot(markers.filter((m) => m.role === 'extra' && !m.xLimit), { x: 'x', y: 'y', r: 8, symbol: 'star', fill: PALETTE.extra, stroke: PALETTE.ink, strokeWidth: 1.2, ...tag('new object') }),
+      Plot.dot(markers.filter((m) => m.role === 'highlight' && m.xLimit), { x: 'x', y: 'y', r: 6, symbol: LIMIT_LEFT, stroke: PALETTE.ink, strokeWidth: 2, fill: 'none', ...tag('highlighted upper limit') }),
+      Plot.dot(markers.filter((m) => m.role === 'extra' && m.xLimit), { x: 'x', y: 'y', r: 6, symbol: LIMIT_LEFT, stroke: PALETTE.extra, strokeWidth: 2, fill: 'none', ...tag('new object upper limit') }),
       ...legendMarks(legend, available, 8 - 56),
-      Plot.tip(hover, Plot.pointer({ x: 'x', y: 'y', title: 'text', ariaLabel: 'hover' })),
+      Plot.tip(hover, Plot.pointer({ x: 'x', y: 'y', title: 'text', ...tag('hover') })),
     ],
   });
   attachPoints(el, { points: markers, xLabel: 'log λ_Edd', yLabel: 'objects' });

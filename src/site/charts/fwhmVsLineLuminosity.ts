@@ -11,6 +11,8 @@ import type { CatalogRow, ChartOptions } from './types.ts';
 /** Options of {@link fwhmVsLineLuminosity}. */
 export type FwhmVsLineLuminosityOptions = ChartOptions;
 
+const FWHM_TICKS = [300, 500, 700, 1000, 1500, 2000, 3000, 4000, 5000, 7000, 10000, 15000, 20000, 30000];
+
 /** Hα as circles, Hβ as triangles: told apart by shape as well as colour. */
 export const LINE_SERIES: Record<'halpha' | 'hbeta', SeriesStyle> = {
   halpha: { symbol: 'circle', colour: PALETTE.halpha, label: 'Broad Hα' },
@@ -46,7 +48,7 @@ export function fwhmVsLineLuminosity(rows: readonly CatalogRow[], options: FwhmV
       yDomain,
       xLabel: 'log L_line / erg s⁻¹',
       yLabel: 'FWHM / km s⁻¹',
-      y: { type: 'log', tickFormat: (v: number) => String(v) },
+      y: { type: 'log', ticks: FWHM_TICKS.filter((t) => t >= yDomain[0] && t <= yDomain[1]), tickFormat: (v: number) => String(v) },
       series: LINE_SERIES,
       caption: [
         'Broad-line width against line luminosity, one point per measured line (Hα circles, Hβ triangles).',

@@ -8,6 +8,7 @@ import { pointsFromRows } from './pointsFromRows.ts';
 import { renderScatter } from './renderScatter.ts';
 import { hasFlag, num } from './rowValues.ts';
 import type { CatalogRow, ChartSettings, ChartOptions } from './types.ts';
+import { tag } from './markTag.ts';
 
 /** Options of {@link lbolVsMass}: only the Eddington luminosity per solar mass is needed from the settings. */
 export interface LbolVsMassOptions extends ChartOptions {
@@ -47,7 +48,7 @@ export function lbolVsMass(rows: readonly CatalogRow[], options: LbolVsMassOptio
   const pxPerY = (height - 60) / (yDomain[1] - yDomain[0]);
   const angle = (-Math.atan(pxPerY / pxPerX) * 180) / Math.PI;
   const under: Plot.Markish[] = [
-    Plot.link(segments, { x1: 'x1', y1: 'y1', x2: 'x2', y2: 'y2', stroke: PALETTE.guide, strokeDasharray: '5 4', strokeWidth: 1.2, ariaLabel: 'constant Eddington ratio' }),
+    Plot.link(segments, { x1: 'x1', y1: 'y1', x2: 'x2', y2: 'y2', stroke: PALETTE.guide, strokeDasharray: '5 4', strokeWidth: 1.2, ...tag('constant Eddington ratio') }),
   ];
   const over: Plot.Markish[] = [
     Plot.text(segments, {
@@ -60,7 +61,7 @@ export function lbolVsMass(rows: readonly CatalogRow[], options: LbolVsMassOptio
       stroke: 'white',
       strokeWidth: 3,
       fontSize: 11,
-      ariaLabel: 'Eddington ratio label',
+      ...tag('Eddington ratio label'),
     }),
   ];
   const shown = new Set(points.filter((p) => p.role !== 'extra').map((p) => p.id)).size;

@@ -1,6 +1,7 @@
 import * as Plot from '@observablehq/plot';
 import type { CustomSymbol } from './limitSymbols.ts';
 import { PALETTE } from './palette.ts';
+import { tag } from './markTag.ts';
 
 /** One entry of a chart legend. */
 export interface LegendItem {
@@ -84,7 +85,7 @@ export function legendMarks(items: readonly LegendItem[], availablePx: number, s
         stroke: item.stroke ?? 'none',
         strokeWidth: item.strokeWidth ?? 1,
         strokeDasharray: item.strokeDasharray,
-        ariaLabel: 'legend symbol',
+        ...tag('legend symbol'),
       }),
       Plot.text([item.label], {
         frameAnchor: 'bottom-left',
@@ -94,7 +95,7 @@ export function legendMarks(items: readonly LegendItem[], availablePx: number, s
         textAnchor: 'start',
         fontSize: 11,
         fill: PALETTE.ink,
-        ariaLabel: 'legend label',
+        ...tag('legend label'),
       }),
     ];
   });

@@ -10,6 +10,7 @@ import { pointsFromRows } from './pointsFromRows.ts';
 import { renderScatter } from './renderScatter.ts';
 import { hasFlag, num } from './rowValues.ts';
 import type { CatalogRow, SettingsChartOptions } from './types.ts';
+import { tag } from './markTag.ts';
 
 /** Options of {@link massVsRedshift}. */
 export type MassVsRedshiftOptions = SettingsChartOptions;
@@ -47,15 +48,15 @@ export function massVsRedshift(rows: readonly CatalogRow[], options: MassVsRedsh
     Plot.axisX({ anchor: 'bottom', label: 'Redshift z', labelAnchor: 'center', labelArrow: 'none', labelOffset: 32 }),
     Plot.axisX(
       ticks.map((t) => t.z),
-      { anchor: 'top', tickFormat: (z: number) => ticks.find((t) => t.z === z)?.label ?? '', label: 'Age of the universe', labelAnchor: 'center', labelArrow: 'none', ariaLabel: 'cosmic time axis' },
+      { anchor: 'top', tickFormat: (z: number) => ticks.find((t) => t.z === z)?.label ?? '', label: 'Age of the universe', labelAnchor: 'center', labelArrow: 'none', ...tag('cosmic time axis') },
     ),
-    Plot.ruleX([s.zSeed], { stroke: PALETTE.guide, strokeDasharray: '2 3', ariaLabel: 'seed redshift' }),
+    Plot.ruleX([s.zSeed], { stroke: PALETTE.guide, strokeDasharray: '2 3', ...tag('seed redshift') }),
     ...tracks.map((t) =>
-      Plot.line(t.points, { x: 'z', y: 'logM', stroke: trackColour[t.seed], strokeWidth: 1.8, strokeDasharray: trackDash[t.seed], clip: true, ariaLabel: `growth track ${t.seed}` }),
+      Plot.line(t.points, { x: 'z', y: 'logM', stroke: trackColour[t.seed], strokeWidth: 1.8, strokeDasharray: trackDash[t.seed], clip: true, ...tag(`growth track ${t.seed}`) }),
     ),
   ];
   const over: Plot.Markish[] = tracks.map((t) =>
-    Plot.text([t.points[0]!], { x: 'z', y: 'logM', text: () => `${t.seed} seed 10${superscript(Math.round(t.logMseed))} M☉`, textAnchor: 'end', dx: 6, dy: -10, fill: trackColour[t.seed], stroke: 'white', strokeWidth: 3, fontSize: 11, ariaLabel: 'growth track label' }),
+    Plot.text([t.points[0]!], { x: 'z', y: 'logM', text: () => `${t.seed} seed 10${superscript(Math.round(t.logMseed))} M☉`, textAnchor: 'start', dx: 4, dy: -10, fill: trackColour[t.seed], stroke: 'white', strokeWidth: 3, fontSize: 11, ...tag('growth track label') }),
   );
   const legend: LegendItem[] = tracks.map((t) => ({
     label: `Eddington-limited growth from a ${t.seed} seed (${t.seed === 'light' ? s.lightSeedMsun : s.heavySeedMsun} M☉ at z = ${s.zSeed})`,

@@ -11,6 +11,7 @@ import { relationCurves, type RelationCurve } from './relationLines.ts';
 import { renderScatter } from './renderScatter.ts';
 import { hasFlag, num } from './rowValues.ts';
 import type { CatalogRow, ChartOptions, ChartSettings } from './types.ts';
+import { tag } from './markTag.ts';
 
 /** Options of {@link massVsStellarMass}. */
 export interface MassVsStellarMassOptions extends ChartOptions {
@@ -63,7 +64,7 @@ export function massVsStellarMass(rows: readonly CatalogRow[], options: MassVsSt
   for (const c of curves) {
     const stroke = colour.get(c.relation.id)!;
     under.push(
-      Plot.areaY(c.band, { x: 'x', y1: 'lo', y2: 'hi', fill: stroke, fillOpacity: c.chosen ? 0.13 : 0.09, clip: true, ariaLabel: `scatter band ${c.relation.id}` }),
+      Plot.areaY(c.band, { x: 'x', y1: 'lo', y2: 'hi', fill: stroke, fillOpacity: c.chosen ? 0.13 : 0.09, clip: true, ...tag(`scatter band ${c.relation.id}`) }),
     );
     for (const inRange of [true, false]) {
       const seg = c.line.filter((l) => l.inRange === inRange);
@@ -76,7 +77,7 @@ export function massVsStellarMass(rows: readonly CatalogRow[], options: MassVsSt
             strokeWidth: c.chosen ? 2 : 1.5,
             strokeDasharray: inRange ? (c.chosen ? undefined : '7 3') : '2 3',
             clip: true,
-            ariaLabel: `local relation ${c.relation.id}`,
+            ...tag(`local relation ${c.relation.id}`),
           }),
         );
       }
@@ -84,7 +85,7 @@ export function massVsStellarMass(rows: readonly CatalogRow[], options: MassVsSt
     const last = c.line[c.line.length - 1]!;
     if (last.y > yDomain[0] && last.y < yDomain[1]) {
       over.push(
-        Plot.text([last], { x: 'x', y: 'y', text: () => authorYear(c.relation.label), textAnchor: 'end', dx: -4, dy: -9, fill: stroke, stroke: 'white', strokeWidth: 3, fontSize: 11, ariaLabel: 'relation label' }),
+        Plot.text([last], { x: 'x', y: 'y', text: () => authorYear(c.relation.label), textAnchor: 'end', dx: -4, dy: -9, fill: stroke, stroke: 'white', strokeWidth: 3, fontSize: 11, ...tag('relation label') }),
       );
     }
     legend.push({

@@ -9,7 +9,7 @@ export const PALETTE = {
   /** Catalog objects. */
   population: '#2f6a86',
   /** Highlighted catalog objects (drawn larger, with an ink outline). */
-  highlight: '#de7a12',
+  highlight: '#e4572e',
   /** New objects from the compare page (star symbol). */
   extra: '#b0226b',
   /** The catalog's chosen local relation and its scatter band. */
@@ -25,7 +25,7 @@ export const PALETTE = {
   /** Broad Hα points (circles). */
   halpha: '#2f6a86',
   /** Broad Hβ points (triangles). */
-  hbeta: '#c2661a',
+  hbeta: '#b08a1e',
   /** Density: from few to many objects per cell. */
   densityLow: '#e6eef2',
   densityHigh: '#143f55',

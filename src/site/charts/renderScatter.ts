@@ -68,7 +68,7 @@ export function renderScatter(spec: ScatterSpec, options: ChartOptions): SVGSVGE
     y: { domain: spec.yDomain, label: spec.yLabel, labelAnchor: 'center', labelArrow: 'none', grid: true, ...spec.y },
     color: layers.color,
     title: options.title,
-    caption: options.noCaption ? undefined : spec.caption,
+    caption: options.noCaption ? undefined : layers.dense ? `${spec.caption} With more than ${options.densityThreshold ?? 5000} objects the population is drawn as counts per cell (no bars); upper limits as one arrow per occupied cell.` : spec.caption,
     ariaDescription: spec.ariaDescription,
     marks: [Plot.frame({ stroke: PALETTE.ink, strokeOpacity: 0.25 }), ...(spec.under ?? []), ...layers.marks, ...(spec.over ?? []), ...legendMarks(legend, available, 8 - MARGIN_LEFT), layers.hover],
   });

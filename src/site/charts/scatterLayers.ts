@@ -3,6 +3,7 @@ import { binGrid } from './binGrid.ts';
 import { isLimit, type ChartPoint, type PointRole } from './chartPoint.ts';
 import { limitSymbol } from './limitSymbols.ts';
 import { PALETTE } from './palette.ts';
+import { tag } from './markTag.ts';
 
 /** How one series of points is drawn. */
 export interface SeriesStyle {
@@ -57,8 +58,8 @@ function errorBars(points: readonly ChartPoint[], role: PointRole): Plot.Markish
   const yBars = points.filter((p) => !p.yLimit && p.yLo !== null && p.yHi !== null);
   const common = { stroke: s.bar, strokeWidth: s.barWidth, strokeOpacity: role === 'population' ? 0.45 : 0.9, clip: true };
   return [
-    xBars.length ? Plot.ruleY(xBars, { y: 'y', x1: 'xLo', x2: 'xHi', ...common, ariaLabel: `${s.label} error bar x` }) : null,
-    yBars.length ? Plot.ruleX(yBars, { x: 'x', y1: 'yLo', y2: 'yHi', ...common, ariaLabel: `${s.label} error bar y` }) : null,
+    xBars.length ? Plot.ruleY(xBars, { y: 'y', x1: 'xLo', x2: 'xHi', ...common, ...tag(`${s.label} error bar x`) }) : null,
+    yBars.length ? Plot.ruleX(yBars, { x: 'x', y1: 'yLo', y2: 'yHi', ...common, ...tag(`${s.label} error bar y`) }) : null,
   ];
 }
 
@@ -73,7 +74,7 @@ function limitMarks(points: readonly ChartPoint[], role: PointRole, colour: stri
   return groups.map(([xl, yl]) => {
     const pts = points.filter((p) => p.xLimit === xl && p.yLimit === yl);
     if (!pts.length) return null;
-    return Plot.dot(pts, { x: 'x', y: 'y', symbol: limitSymbol(xl, yl), r, stroke: colour, strokeWidth: s.limitWidth, fill: 'none', ariaLabel: label });
+    return Plot.dot(pts, { x: 'x', y: 'y', symbol: limitSymbol(xl, yl), r, stroke: colour, strokeWidth: s.limitWidth, fill: 'none', ariaLabel: (p: ChartPoint) => p.id, ...tag(label) });
   });
 }
 
@@ -86,12 +87,12 @@ function detectionMarks(points: readonly ChartPoint[], role: PointRole, opts: Sc
     const pts = points.filter((p) => seriesOf(p) === name);
     if (!pts.length) return null;
     if (role === 'population') {
-      return Plot.dot(pts, { x: 'x', y: 'y', r: 3.2, symbol: style.symbol, fill: style.colour, fillOpacity: 0.8, stroke: 'white', strokeWidth: 0.6, ariaLabel: 'catalog point' });
+      return Plot.dot(pts, { x: 'x', y: 'y', r: 3.2, symbol: style.symbol, fill: style.colour, fillOpacity: 0.8, stroke: 'white', strokeWidth: 0.6, ariaLabel: (p: ChartPoint) => p.id, ...tag('catalog point') });
     }
     if (role === 'highlight') {
-      return Plot.dot(pts, { x: 'x', y: 'y', r: 5.5, symbol: style.symbol, fill: PALETTE.highlight, stroke: PALETTE.ink, strokeWidth: 1.4, ariaLabel: 'highlighted object' });
+      return Plot.dot(pts, { x: 'x', y: 'y', r: 5.5, symbol: style.symbol, fill: PALETTE.highlight, stroke: PALETTE.ink, strokeWidth: 1.4, ariaLabel: (p: ChartPoint) => p.id, ...tag('highlighted object') });
     }
-    return Plot.dot(pts, { x: 'x', y: 'y', r: 8, symbol: 'star', fill: PALETTE.extra, stroke: PALETTE.ink, strokeWidth: 1.2, ariaLabel: 'new object' });
+    return Plot.dot(pts, { x: 'x', y: 'y', r: 8, symbol: 'star', fill: PALETTE.extra, stroke: PALETTE.ink, strokeWidth: 1.2, ariaLabel: (p: ChartPoint) => p.id, ...tag('new object') });
   });
 }
 
@@ -100,7 +101,7 @@ function densityMarks(points: readonly ChartPoint[], opts: ScatterLayerOptions):
   const detections = binGrid(points.filter((p) => !isLimit(p)), opts.xDomain, opts.yDomain, nx, ny);
   // limits are binned on a coarser grid and drawn as one limit symbol per occupied cell
   const marks: Plot.Markish[] = [
-    Plot.rect(detections, { x1: 'x1', x2: 'x2', y1: 'y1', y2: 'y2', fill: 'count', inset: 0, ariaLabel: 'density', title: (c: { count: number }) => `${c.count} objects` }),
+    Plot.rect(detections, { x1: 'x1', x2: 'x2', y1: 'y1', y2: 'y2', fill: 'count', inset: 0, ...tag('density'), title: (c: { count: number }) => `${c.count} objects` }),
   ];
   for (const [xl, yl] of [
     [false, true],
@@ -115,8 +116,10 @@ function densityMarks(points: readonly ChartPoint[], opts: ScatterLayerOptions):
       Math.round(ny / 2),
     ).map((c) => ({ x: (c.x1 + c.x2) / 2, y: (c.y1 + c.y2) / 2, count: c.count }));
     if (cells.length) {
+      // a white halo keeps the limit symbols readable on dark cells
       marks.push(
-        Plot.dot(cells, { x: 'x', y: 'y', symbol: limitSymbol(xl, yl), r: 4.5, stroke: PALETTE.population, strokeWidth: 1.2, fill: 'none', ariaLabel: 'upper limit (binned)' }),
+        Plot.dot(cells, { x: 'x', y: 'y', symbol: limitSymbol(xl, yl), r: 4.5, stroke: 'white', strokeWidth: 3, fill: 'none' }),
+        Plot.dot(cells, { x: 'x', y: 'y', symbol: limitSymbol(xl, yl), r: 4.5, stroke: PALETTE.ink, strokeWidth: 1.2, fill: 'none', ...tag('upper limit (binned)') }),
       );
     }
   }
@@ -156,7 +159,7 @@ export function scatterLayers(points: readonly ChartPoint[], opts: ScatterLayerO
     );
   }
   const hover = points.length
-    ? Plot.tip(points as ChartPoint[], Plot.pointer({ x: 'x', y: 'y', title: (p: ChartPoint) => hoverText(p, opts), ariaLabel: 'hover' }))
+    ? Plot.tip(points as ChartPoint[], Plot.pointer({ x: 'x', y: 'y', title: (p: ChartPoint) => hoverText(p, opts), ...tag('hover') }))
     : null;
   const color: Plot.ScaleOptions | undefined = dense
     ? { type: 'log', range: [PALETTE.densityLow, PALETTE.densityHigh], interpolate: 'lab', label: 'Objects per cell', legend: false }

@@ -23,7 +23,7 @@ export function scatterLegend(points: readonly ChartPoint[], dense: boolean, ser
       if (present) items.push({ label: s.label, symbol: s.symbol, fill: s.colour, r: 3.5 });
     }
   }
-  if (pop.some(isLimit)) items.push({ label: 'Upper limit', symbol: LIMIT_DOWN, stroke: PALETTE.population, strokeWidth: 1.2, r: 3.5 });
+  if (pop.some(isLimit)) items.push({ label: 'Upper limit', symbol: LIMIT_DOWN, stroke: dense ? PALETTE.ink : PALETTE.population, strokeWidth: 1.2, r: 4.5 });
   if (points.some((p) => p.role === 'highlight')) items.push({ label: 'Highlighted', symbol: 'circle', fill: PALETTE.highlight, stroke: PALETTE.ink, strokeWidth: 1.4, r: 5 });
   if (points.some((p) => p.role === 'extra')) items.push({ label: 'New object', symbol: 'star', fill: PALETTE.extra, stroke: PALETTE.ink, strokeWidth: 1.2, r: 7 });
   return items;
