@@ -9,6 +9,7 @@ import { ageInHubbleTimes } from './hubbleIntegrals.ts';
  * about 1e-11 relative here; 1e4 covers seed formation (z ≈ 20–30) and far beyond.
  */
 export const TABLE_DU = 1 / 128;
+/** Highest redshift the tables reach (the last node is the first grid point at or above it). */
 export const TABLE_Z_MAX = 1e4;
 
 /**

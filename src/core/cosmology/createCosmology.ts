@@ -86,6 +86,8 @@ export function createCosmology(params: CosmologyParams): Cosmology {
       if (!(tGyr > 0 && tGyr <= age0 * (1 + 1e-14))) {
         throw new RangeError(`cosmology "${name}": age ${tGyr} Gyr is outside (0, ${age0.toFixed(5)}] Gyr (big bang to today)`);
       }
+      // Today exactly (or within rounding of it): z = 0 without a root search.
+      if (tGyr >= age0) return 0;
       return Math.expm1(uAtLnAge(t, expansion, Math.log(tGyr / hubbleTimeGyr)));
     },
     differentialComovingVolumeMpc3Sr: (z) => {

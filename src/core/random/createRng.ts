@@ -7,12 +7,16 @@ const INV_2_32 = 1 / 4294967296;
 
 /** xoshiro128** state: four 32-bit words; 2^128 − 1 period; passes BigCrush. */
 class Xoshiro128ss implements Rng {
-  constructor(
-    private s0: number,
-    private s1: number,
-    private s2: number,
-    private s3: number,
-  ) {}
+  private s0: number;
+  private s1: number;
+  private s2: number;
+  private s3: number;
+  constructor(s0: number, s1: number, s2: number, s3: number) {
+    this.s0 = s0;
+    this.s1 = s1;
+    this.s2 = s2;
+    this.s3 = s3;
+  }
 
   next(): number {
     const s1 = this.s1;

@@ -9,6 +9,7 @@ export interface Dimension {
   readonly mag: number;
 }
 
+/** The dimension of a pure number. */
 export const DIMENSIONLESS: Dimension = { mass: 0, length: 0, time: 0, mag: 0 };
 
 /** Builds a dimension from exponents of g, cm, s and mag (missing ones are 0). */
@@ -16,7 +17,7 @@ export function dim(d: Partial<Dimension>): Dimension {
   return { ...DIMENSIONLESS, ...d };
 }
 
-/** Product of a^p and b^q. */
+/** Dimension of a^p · b^q. */
 export function combine(a: Dimension, p: number, b: Dimension, q: number): Dimension {
   return {
     mass: p * a.mass + q * b.mass,
@@ -26,6 +27,7 @@ export function combine(a: Dimension, p: number, b: Dimension, q: number): Dimen
   };
 }
 
+/** True when both dimensions have the same exponents. */
 export function sameDimension(a: Dimension, b: Dimension): boolean {
   return a.mass === b.mass && a.length === b.length && a.time === b.time && a.mag === b.mag;
 }

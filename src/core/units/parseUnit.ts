@@ -21,12 +21,15 @@ const EXPONENT = /^(?:\*\*|\^)?(?:\(([+-]?\d+(?:\.\d+)?(?:\/\d+)?)\)|([+-]?\d+(?
 /** log10 of a unit: `log(solMass)`, `log10(Msun)`, `dex(solMass)`, `log10 Msun`, and CDS `[solMass]`. */
 const LOG_FORMS = [/^(?:log10|log|dex)\s*\((.*)\)$/i, /^(?:log10|log)\s+([^()]+)$/i, /^\[(.*)\]$/];
 
+/** Cursor over the unit string; `whole` is the string as the user wrote it, for messages. */
 class Reader {
   pos = 0;
-  constructor(
-    readonly text: string,
-    readonly whole: string,
-  ) {}
+  readonly text: string;
+  readonly whole: string;
+  constructor(text: string, whole: string) {
+    this.text = text;
+    this.whole = whole;
+  }
   rest(): string {
     return this.text.slice(this.pos);
   }
