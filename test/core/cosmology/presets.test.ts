@@ -45,18 +45,4 @@ describe('cosmology presets and parameters', () => {
     const bounce = createCosmology({ name: 'bounce', H0: 70, Om0: 0.1, Ode0: 2, Tcmb0: 0, Neff: 0, reference: 'test' });
     expect(() => bounce.ageGyr(1)).toThrow(/cosmology "bounce": E\(z\) is not positive/);
   });
-
-  it('answer an age or distance in well under a microsecond on average', () => {
-    // The Monte Carlo calls these per draw; the tables make them ~50 ns here. A 2 µs bound
-    // leaves room for a slow shared machine while still catching a fall back to integration.
-    const c = getCosmology('planck18');
-    c.ageGyr(1);
-    const n = 200_000;
-    let sink = 0;
-    const t0 = performance.now();
-    for (let i = 0; i < n; i++) sink += c.ageGyr(4 + (i % 997) * 0.01) + c.luminosityDistanceMpc(4 + (i % 991) * 0.01);
-    const nsPerCall = ((performance.now() - t0) * 1e6) / (2 * n);
-    expect(sink).toBeGreaterThan(0);
-    expect(nsPerCall).toBeLessThan(2000);
-  });
 });
