@@ -54,7 +54,9 @@ export function parseEcsvHeader(lines: readonly string[], file: string): EcsvHea
   if (err) {
     const yamlLine = err.linePos?.[0].line;
     const where = yamlLine !== undefined ? `line ${yamlLine + 1}: ` : '';
-    throw new CatalogError(`${file}: ${where}malformed ECSV YAML header: ${err.message.split('\n')[0]}`);
+    // The parser's own "at line N, column M" counts YAML lines, not file lines: drop it.
+    const what = err.message.split('\n')[0]!.replace(/ at line \d+, column \d+:?$/, '');
+    throw new CatalogError(`${file}: ${where}malformed ECSV YAML header: ${what}`);
   }
   const header = toPlain(doc.toJS());
   if (!isRecord(header)) throw new CatalogError(`${file}: ECSV YAML header is not a mapping`);
