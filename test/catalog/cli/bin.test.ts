@@ -1,0 +1,46 @@
+import { execFile } from 'node:child_process';
+import { mkdtemp, readdir, rm, writeFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { promisify } from 'node:util';
+import { DuckDBInstance } from '@duckdb/node-api';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+
+const BIN = fileURLToPath(new URL('../../../bin/dawn-census.js', import.meta.url));
+const run = promisify(execFile);
+
+let dir: string;
+beforeEach(async () => {
+  dir = await mkdtemp(path.join(tmpdir(), 'dc-bin-'));
+});
+afterEach(async () => {
+  await rm(dir, { recursive: true, force: true });
+});
+
+describe('bin/dawn-census.js', () => {
+  it('derives a catalog with the real deriveObject on two worker threads', async () => {
+    const input = path.join(dir, 'tiny.csv');
+    await writeFile(input, 'id,z,fwhm_halpha,fwhm_halpha_err,lum_halpha,lum_halpha_err\nT-1,5.5,2100,200,4.6e42,0.5e42\nT-2,6.5,1200,150,2.3e42,0.3e42\nT-3,5.0,,,,\n');
+    const { stderr } = await run(process.execPath, [BIN, 'derive', input, '--draws', '200', '--threads', '2'], { cwd: dir });
+    expect(stderr).toContain('Read 3 rows from tiny.csv');
+    expect((await readdir(dir)).sort()).toEqual(['tiny.census.meta.json', 'tiny.census.parquet', 'tiny.census.rejections.csv', 'tiny.csv']);
+    const db = await DuckDBInstance.create(':memory:');
+    const con = await db.connect();
+    const rows = (await con.runAndReadAll(`SELECT id, log_mbh, log_mbh_p16, log_mbh_p84 FROM '${path.join(dir, 'tiny.census.parquet')}' ORDER BY row`)).getRowObjectsJS();
+    con.closeSync();
+    db.closeSync();
+    expect(rows.map((r) => r.id)).toEqual(['T-1', 'T-2', 'T-3']);
+    // Only sanity here (the masses themselves are tested in test/core): a finite mass inside its own 16–84 % range.
+    const m = rows[0]!;
+    expect(Number.isFinite(m.log_mbh)).toBe(true);
+    expect(m.log_mbh_p16 as number).toBeLessThan(m.log_mbh_p84 as number);
+  });
+
+  it('exits with status 2 and one line on stderr when the catalog does not exist', async () => {
+    const failure = await run(process.execPath, [BIN, 'derive', 'missing.csv'], { cwd: dir }).catch((e: { code: number; stderr: string }) => e);
+    expect('code' in failure && failure.code).toBe(2);
+    expect((failure as { stderr: string }).stderr.trim().split('\n')).toHaveLength(1);
+    expect(await readdir(dir)).toEqual([]);
+  });
+});
