@@ -122,7 +122,7 @@ describe('corrupt and truncated inputs', () => {
   it.each(cases)('reports $what ($file) with one exact line', async ({ file, write, message }) => {
     const path = join(dir, file);
     await write(path);
-    const err = await openTable(path).then(async (src) => { await readAll(src); return null; }, (e: unknown) => e);
+    const err = await openTable(path).then(async (src) => { try { await readAll(src); } finally { await src.close(); } return null; }, (e: unknown) => e);
     expect(err).toBeInstanceOf(CatalogError);
     expect((err as Error).message).toBe(message(path));
     expect((err as Error).message).not.toMatch(/\n/);
