@@ -19,7 +19,7 @@ export interface PlannedColumn {
   fileKind: ColumnKind;
   /** The canonical column's definition (description, unit, UCD, limits). */
   def: CanonicalColumn;
-  /** Unit shown in row messages next to the value as given: `unitIn`, else the canonical unit. */
+  /** Unit shown in row messages next to the value as given: `unitIn`, else the canonical unit as people write it (`def.unitText`). */
   unitLabel: string;
   /** Name shown in row messages: the canonical name, with the file's column name when it differs. */
   label: string;

@@ -1,5 +1,5 @@
 import { LINES, type LineId } from '../../core/derive/types.ts';
-import type { QuantityKind } from '../../core/units/unitConverter.ts';
+import { CANONICAL_UNITS, type QuantityKind } from '../../core/units/index.ts';
 
 /** What a canonical column holds: a physical quantity (converted with src/core/units), text or a flag. */
 export type CanonicalKind = QuantityKind | 'text' | 'bool';
@@ -16,8 +16,10 @@ export interface CanonicalColumn {
   /** Canonical name, as used in the config's `columns:` and in the output. */
   name: string;
   kind: CanonicalKind;
-  /** Canonical unit (what values are converted to); '' where dimensionless, text or a flag. */
+  /** Canonical unit, VOUnits (what values are converted to: the units module's CANONICAL_UNITS); '' where dimensionless, text or a flag. */
   unit: string;
+  /** The canonical unit as people write it, shown in row messages when the file gives no unit ('km/s', 'erg/s'). */
+  unitText: string;
   description: string;
   /** IVOA UCD1+ word(s), where the list has one. */
   ucd?: string;
@@ -46,7 +48,8 @@ const LINE_LABEL: Record<LineId, string> = { halpha: 'Hα', hbeta: 'Hβ', mgii: 
 interface BaseColumn {
   name: string;
   kind: CanonicalKind;
-  unit: string;
+  /** Readable canonical unit; the VOUnits form comes from the kind. */
+  unitText: string;
   description: string;
   ucd?: string;
   limits: readonly ValueLimit[];
@@ -60,7 +63,7 @@ const lineColumns = (line: LineId): BaseColumn[] => [
   {
     name: `fwhm_${line}`,
     kind: 'velocity',
-    unit: 'km/s',
+    unitText: 'km/s',
     description: `FWHM of the broad ${LINE_LABEL[line]} line`,
     ucd: 'spect.line.width',
     limits: [...POSITIVE, { op: '<=', bound: MAX_FWHM_KMS, reason: `must be at most ${MAX_FWHM_KMS} km/s` }],
@@ -69,7 +72,7 @@ const lineColumns = (line: LineId): BaseColumn[] => [
   {
     name: `flux_${line}`,
     kind: 'flux',
-    unit: 'erg s-1 cm-2',
+    unitText: 'erg s-1 cm-2',
     description: `Observed flux of the broad ${LINE_LABEL[line]} line (before magnification and dust corrections)`,
     ucd: 'phot.flux;spect.line',
     limits: POSITIVE,
@@ -79,7 +82,7 @@ const lineColumns = (line: LineId): BaseColumn[] => [
   {
     name: `lum_${line}`,
     kind: 'luminosity',
-    unit: 'erg/s',
+    unitText: 'erg/s',
     description: `Observed luminosity of the broad ${LINE_LABEL[line]} line (used when no flux is given)`,
     ucd: 'phys.luminosity;spect.line',
     limits: POSITIVE,
@@ -90,7 +93,7 @@ const lineColumns = (line: LineId): BaseColumn[] => [
 const continuum = (lam: number): BaseColumn => ({
   name: `lam_l_${lam}`,
   kind: 'luminosity',
-  unit: 'erg/s',
+  unitText: 'erg/s',
   description: `Continuum λL_λ at ${lam} Å, observed (before magnification)`,
   ucd: 'phys.luminosity;spect.continuum',
   limits: POSITIVE,
@@ -99,25 +102,25 @@ const continuum = (lam: number): BaseColumn => ({
 
 /* The measured quantities; error and flag companions are added below. UCDs from the IVOA UCD1+ list (from memory). */
 const BASE_COLUMNS: readonly BaseColumn[] = [
-  { name: 'id', kind: 'text', unit: '', description: 'Object identifier, unique in the catalog', ucd: 'meta.id;meta.main', limits: [], measured: false },
-  { name: 'z', kind: 'dimensionless', unit: '', description: 'Redshift', ucd: 'src.redshift', limits: between(0, 30, '>'), measured: false },
+  { name: 'id', kind: 'text', unitText: '', description: 'Object identifier, unique in the catalog', ucd: 'meta.id;meta.main', limits: [], measured: false },
+  { name: 'z', kind: 'dimensionless', unitText: '', description: 'Redshift', ucd: 'src.redshift', limits: between(0, 30, '>'), measured: false },
   ...LINES.flatMap(lineColumns),
   continuum(5100),
   continuum(3000),
   continuum(1350),
-  { name: 'mu', kind: 'dimensionless', unit: '', description: 'Lensing magnification (1 when not lensed)', limits: POSITIVE, measured: true },
+  { name: 'mu', kind: 'dimensionless', unitText: '', description: 'Lensing magnification (1 when not lensed)', limits: POSITIVE, measured: true },
   {
     name: 'log_mstar',
     kind: 'logMass',
-    unit: 'log10 Msun',
+    unitText: 'log10 Msun',
     description: 'log10 of the stellar mass in solar masses (magnification-corrected)',
     ucd: 'phys.mass',
     limits: between(5, 13),
     measured: true,
   },
-  { name: 'sigma_star', kind: 'velocity', unit: 'km/s', description: 'Stellar velocity dispersion', ucd: 'phys.veloc.dispersion', limits: POSITIVE, measured: true },
-  { name: 'av', kind: 'magnitude', unit: 'mag', description: 'V-band attenuation toward the broad-line region', ucd: 'phys.absorption;em.opt.V', limits: between(0, 10), measured: true },
-  { name: 'balmer_decrement', kind: 'dimensionless', unit: '', description: 'Observed broad Hα/Hβ flux ratio', ucd: 'arith.ratio;spect.line', limits: POSITIVE, measured: true },
+  { name: 'sigma_star', kind: 'velocity', unitText: 'km/s', description: 'Stellar velocity dispersion', ucd: 'phys.veloc.dispersion', limits: POSITIVE, measured: true },
+  { name: 'av', kind: 'magnitude', unitText: 'mag', description: 'V-band attenuation toward the broad-line region', ucd: 'phys.absorption;em.opt.V', limits: between(0, 10), measured: true },
+  { name: 'balmer_decrement', kind: 'dimensionless', unitText: '', description: 'Observed broad Hα/Hβ flux ratio', ucd: 'arith.ratio;spect.line', limits: POSITIVE, measured: true },
 ];
 
 const ERROR_SIDES = [
@@ -126,17 +129,24 @@ const ERROR_SIDES = [
   { suffix: '_err_hi', side: 'hi', what: 'Upper 1σ error' },
 ] as const;
 
+const voUnit = (kind: CanonicalKind): string => (kind === 'text' || kind === 'bool' ? '' : CANONICAL_UNITS[kind]);
+
 function expand(base: BaseColumn): CanonicalColumn[] {
   const role = base.name === 'id' ? 'id' : 'value';
-  const out: CanonicalColumn[] = [{ name: base.name, kind: base.kind, unit: base.unit, description: base.description, ucd: base.ucd, role, limits: base.limits }];
+  const unit = voUnit(base.kind);
+  const out: CanonicalColumn[] = [
+    { name: base.name, kind: base.kind, unit, unitText: base.unitText, description: base.description, ucd: base.ucd, role, limits: base.limits },
+  ];
   if (base.measured) {
     // An error of a log quantity is in dex, whatever the value's zero point.
-    const errUnit = base.kind === 'logMass' ? 'dex' : base.unit;
+    const errUnit = base.kind === 'logMass' ? 'dex' : unit;
+    const errText = base.kind === 'logMass' ? 'dex' : base.unitText;
     for (const e of ERROR_SIDES) {
       out.push({
         name: base.name + e.suffix,
         kind: base.kind,
         unit: errUnit,
+        unitText: errText,
         description: `${e.what} of ${base.name}`,
         ucd: base.ucd ? `stat.error;${base.ucd}` : 'stat.error',
         role: 'error',
@@ -151,6 +161,7 @@ function expand(base: BaseColumn): CanonicalColumn[] {
       name: `${base.name}_is_limit`,
       kind: 'bool',
       unit: '',
+      unitText: '',
       description: `True where ${base.name} (or the line luminosity) is an upper limit`,
       ucd: 'meta.code',
       role: 'flag',

@@ -100,7 +100,7 @@ export function planColumns(source: TableSource, config: CensusConfig): ColumnPl
       kind: def.kind,
       fileKind: info.kind,
       def,
-      unitLabel: unitIn ?? def.unit,
+      unitLabel: unitIn ?? def.unitText,
       label: sameName ? def.name : `${def.name} (column ${info.name})`,
     });
   }

@@ -37,18 +37,20 @@ describe('CANONICAL_COLUMNS', () => {
 
   it('states canonical units and UCD1+ words for the main columns', () => {
     // UCDs from the IVOA UCD1+ controlled vocabulary (from memory).
+    // Units: VOUnits canonical forms of the units module, and the readable form used in messages.
     const pick = (n: string) => {
       const c = CANONICAL_BY_NAME.get(n)!;
-      return [c.kind, c.unit, c.ucd];
+      return [c.kind, c.unit, c.unitText, c.ucd];
     };
-    expect(pick('id')).toEqual(['text', '', 'meta.id;meta.main']);
-    expect(pick('z')).toEqual(['dimensionless', '', 'src.redshift']);
-    expect(pick('fwhm_hbeta')).toEqual(['velocity', 'km/s', 'spect.line.width']);
-    expect(pick('flux_halpha')).toEqual(['flux', 'erg s-1 cm-2', 'phot.flux;spect.line']);
-    expect(pick('lum_civ')).toEqual(['luminosity', 'erg/s', 'phys.luminosity;spect.line']);
-    expect(pick('log_mstar')).toEqual(['logMass', 'log10 Msun', 'phys.mass']);
-    expect(pick('sigma_star')).toEqual(['velocity', 'km/s', 'phys.veloc.dispersion']);
-    expect(pick('av')).toEqual(['magnitude', 'mag', 'phys.absorption;em.opt.V']);
-    expect(CANONICAL_BY_NAME.get('log_mstar_err')?.unit).toBe('dex');
+    expect(pick('id')).toEqual(['text', '', '', 'meta.id;meta.main']);
+    expect(pick('z')).toEqual(['dimensionless', '', '', 'src.redshift']);
+    expect(pick('fwhm_hbeta')).toEqual(['velocity', 'km s-1', 'km/s', 'spect.line.width']);
+    expect(pick('flux_halpha')).toEqual(['flux', 'erg s-1 cm-2', 'erg s-1 cm-2', 'phot.flux;spect.line']);
+    expect(pick('lum_civ')).toEqual(['luminosity', 'erg s-1', 'erg/s', 'phys.luminosity;spect.line']);
+    expect(pick('log_mstar')).toEqual(['logMass', 'log(solMass)', 'log10 Msun', 'phys.mass']);
+    expect(pick('sigma_star')).toEqual(['velocity', 'km s-1', 'km/s', 'phys.veloc.dispersion']);
+    expect(pick('av')).toEqual(['magnitude', 'mag', 'mag', 'phys.absorption;em.opt.V']);
+    expect(pick('log_mstar_err').slice(1, 3)).toEqual(['dex', 'dex']);
+    expect(pick('fwhm_halpha_err').slice(1, 3)).toEqual(['km s-1', 'km/s']);
   });
 });
