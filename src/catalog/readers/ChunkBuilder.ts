@@ -12,7 +12,12 @@ export class ChunkBuilder {
   private offset = 0;
   private ready: TableChunk[] = [];
 
-  constructor(private readonly nCols: number, private readonly chunkRows: number) {
+  private readonly nCols: number;
+  private readonly chunkRows: number;
+
+  constructor(nCols: number, chunkRows: number) {
+    this.nCols = nCols;
+    this.chunkRows = chunkRows;
     this.cols = emptyColumns(nCols);
   }
 

@@ -16,7 +16,8 @@ export type CommentSink = (text: string, line: number) => void;
 
 const LF = 10, CR = 13, QUOTE = 34, HASH = 35, SPACE = 32, TAB = 9;
 
-const enum S { RecordStart, FieldStart, Unquoted, Quoted, QuoteInQuoted, AfterQuoted, Comment }
+/** Tokenizer states (plain constants rather than an enum: erasable TypeScript syntax). */
+const S = { RecordStart: 0, FieldStart: 1, Unquoted: 2, Quoted: 3, QuoteInQuoted: 4, AfterQuoted: 5, Comment: 6 } as const;
 
 /**
  * Incremental RFC 4180 tokenizer for delimited text, fed with string pieces of any size.
@@ -34,7 +35,7 @@ const enum S { RecordStart, FieldStart, Unquoted, Quoted, QuoteInQuoted, AfterQu
 export class DelimitedTokenizer {
   private readonly delim: number;
   private readonly blankDelimited: boolean;
-  private state = S.RecordStart;
+  private state: number = S.RecordStart;
   private fields: string[] = [];
   private field = '';
   private fieldQuoted = false;
@@ -47,11 +48,14 @@ export class DelimitedTokenizer {
 
   private commentText = '';
 
-  constructor(
-    private readonly opts: DelimitedOptions,
-    private readonly sink: RecordSink,
-    private readonly commentSink?: CommentSink,
-  ) {
+  private readonly opts: DelimitedOptions;
+  private readonly sink: RecordSink;
+  private readonly commentSink: CommentSink | undefined;
+
+  constructor(opts: DelimitedOptions, sink: RecordSink, commentSink?: CommentSink) {
+    this.opts = opts;
+    this.sink = sink;
+    this.commentSink = commentSink;
     if (opts.delimiter.length !== 1) throw new Error(`delimiter must be one character, got "${opts.delimiter}"`);
     this.delim = opts.delimiter.charCodeAt(0);
     this.blankDelimited = opts.delimiter === ' ';

@@ -28,7 +28,13 @@ export class XmlTokenizer {
   private rootSeen = false;
   private rootClosed = false;
 
-  constructor(private readonly label: string, private readonly handler: XmlHandler) {}
+  private readonly label: string;
+  private readonly handler: XmlHandler;
+
+  constructor(label: string, handler: XmlHandler) {
+    this.label = label;
+    this.handler = handler;
+  }
 
   /** 1-based line of the markup being handled (for messages raised by the handler). */
   line(): number {

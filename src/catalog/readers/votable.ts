@@ -81,7 +81,13 @@ class VotHandler implements XmlHandler {
   private cells: string[] = [];
   private scanParsers: VotParser[] = [];
 
-  constructor(private readonly file: string, private readonly sink: RowSink | null) {}
+  private readonly file: string;
+  private readonly sink: RowSink | null;
+
+  constructor(file: string, sink: RowSink | null) {
+    this.file = file;
+    this.sink = sink;
+  }
 
   open(name: string, attrs: Record<string, string>): void {
     const parent = this.path[this.path.length - 1];
