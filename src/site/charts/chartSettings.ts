@@ -1,4 +1,4 @@
-import { defaultSettings } from '../../catalog/config/defaultConfig.ts';
+import { DEFAULT_SETTINGS } from '../../core/derive/defaultSettings.ts';
 import type { CosmologyId, LocalRelationId } from '../../core/derive/types.ts';
 import type { ChartSettings } from './types.ts';
 
@@ -18,14 +18,15 @@ const text = (v: unknown): string | undefined => (typeof v === 'string' && v.tri
 const finite = (v: unknown): number | undefined => (typeof v === 'number' && Number.isFinite(v) ? v : typeof v === 'string' && v.trim() !== '' && Number.isFinite(Number(v)) ? Number(v) : undefined);
 
 /**
- * The chart settings from the settings recorded in a catalog's metadata sidecar, read as the
- * derivation's `DeriveSettings` (camelCase) or the config's spelling (snake_case, `seeds.light`).
- * A key the record lacks takes the tool's default (src/catalog/config/defaultConfig.ts), which is
- * what the derivation itself used for it.
+ * The chart settings from the settings recorded in a catalog's metadata sidecar: its
+ * `settings` provenance record (whose `settings` member is the derivation's `DeriveSettings`),
+ * or a `DeriveSettings`-like record itself (camelCase, or the config's snake_case spelling with
+ * `seeds.light`). A key the record lacks takes the tool's default (DEFAULT_SETTINGS of
+ * src/core/derive), which is what the derivation itself used for it.
  */
 export function chartSettings(raw: Record<string, unknown> | undefined): ChartSettings {
-  const d = defaultSettings();
-  const r = raw ?? {};
+  const d = DEFAULT_SETTINGS;
+  const r = raw && isRecord(raw.settings) ? raw.settings : (raw ?? {});
   return {
     cosmology: ((text(pick(r, 'cosmology.id')) ?? text(pick(r, 'cosmology'))) as CosmologyId | undefined) ?? d.cosmology,
     localRelation: ((text(pick(r, 'localRelation.id', 'local_relation.id')) ?? text(pick(r, 'localRelation', 'local_relation'))) as LocalRelationId | undefined) ?? d.localRelation,
