@@ -38,8 +38,8 @@ export async function resolveDerivePlan(args: DeriveArgs): Promise<DerivePlan> {
     ...(args.seed !== undefined ? { seed: args.seed } : {}),
   });
   const fromConfig = config.input?.path;
-  const catalogPath = args.catalog !== undefined ? path.resolve(args.catalog) : fromConfig;
-  if (catalogPath === undefined) {
+  const catalogAbs = args.catalog !== undefined ? path.resolve(args.catalog) : fromConfig;
+  if (catalogAbs === undefined) {
     throw new UsageError(
       args.config !== undefined
         ? `no catalog given: name one (dawn-census derive <catalog> -c ${args.config}) or set input.path in ${args.config}`
@@ -47,12 +47,13 @@ export async function resolveDerivePlan(args: DeriveArgs): Promise<DerivePlan> {
     );
   }
   // The config's format describes its own input file, not another one named on the command line.
-  const format = catalogPath === fromConfig ? config.input?.format : undefined;
-  const outputPath = args.output !== undefined ? path.resolve(args.output) : (config.output ?? defaultOutputPath(catalogPath));
-  if (outputPath === catalogPath) throw new UsageError(`the output ${displayPath(outputPath)} is the catalog itself; choose another with -o`);
+  const format = catalogAbs === fromConfig ? config.input?.format : undefined;
+  const outputPath = args.output !== undefined ? path.resolve(args.output) : (config.output ?? defaultOutputPath(catalogAbs));
+  if (outputPath === catalogAbs) throw new UsageError(`the output ${displayPath(outputPath)} is the catalog itself; choose another with -o`);
   return {
     config,
-    catalogPath,
+    // As the user would write it (relative inside the working folder): readers name it in messages.
+    catalogPath: displayPath(catalogAbs),
     ...(format ? { format } : {}),
     outputPath,
     threads: args.threads ?? availableParallelism(),

@@ -1,4 +1,5 @@
 import path from 'node:path';
+import { FLAG_DESCRIPTIONS } from '../../core/derive/flags.ts';
 import type { CensusConfig } from '../config/CensusConfig.ts';
 import type { TableSource } from '../readers/types.ts';
 import type { OutputPaths } from '../derive/outputPaths.ts';
@@ -20,6 +21,11 @@ export interface CatalogMetadataParts {
   /** The output columns (extra fields, such as value getters, are dropped). */
   columns: readonly ColumnDoc[];
 }
+
+/** Flags the catalog build adds on top of deriveObject's. */
+const BUILD_FLAGS: Readonly<Record<string, string>> = {
+  derive_failed: 'The derivation stopped with an error for this object; no quantity was derived (see the rejection report).',
+};
 
 const docOnly = (c: ColumnDoc): ColumnDoc => ({
   name: c.name,
@@ -48,6 +54,7 @@ export function buildCatalogMetadata(p: CatalogMetadataParts): CatalogMetadata {
     },
     settings: p.provenance,
     counts: p.counts,
+    flags: { ...FLAG_DESCRIPTIONS, ...BUILD_FLAGS },
     files: {
       catalog: path.basename(p.paths.catalog),
       meta: path.basename(p.paths.meta),

@@ -27,6 +27,8 @@ export interface CatalogMetadata {
   settings: SettingsProvenance;
   /** Rows read, rows derived, rows flagged with input problems (listed in the rejection report), and problems found. */
   counts: { rows: number; derived: number; flagged: number; problems: number };
+  /** What each flag in the `flags` column means. */
+  flags: Record<string, string>;
   /** File names (same folder) of the catalog, this sidecar and the rejection report. */
   files: { catalog: string; meta: string; rejections: string };
   columns: ColumnDoc[];

@@ -14,20 +14,22 @@ export function derivedReference(topic: ReferenceTopic, p: SettingsProvenance, l
       return text(p.cosmology.reference);
     case 'lineLuminosity':
       return [text(p.dustCurve.reference), `intrinsic Hα/Hβ: ${p.intrinsicBalmer.reference}`].filter(Boolean).join('; ');
-    case 'continuum':
-      return p.settings.bolometric === 'halpha_gh05_bc5100' ? 'From broad Hα where no continuum is measured: Greene & Ho 2005, ApJ 630, 122, eq. 1 (inverted)' : undefined;
+    case 'continuum': {
+      const gh05 = p.bolometric.records.find((r) => typeof r.reference === 'string' && r.reference.includes('eq. 1'));
+      return gh05 ? `From broad Hα where no continuum is measured: ${String(gh05.reference)} (inverted)` : undefined;
+    }
     case 'virial': {
       const used = p.settings.linePriority.filter((l) => lines.includes(l));
       const refs = used.map((l) => text(p.calibrations[l]?.reference) ?? String(p.calibrations[l]?.id ?? p.settings.calibrations[l]));
       return refs.length ? refs.join('; ') : undefined;
     }
     case 'bolometric':
-      return `${p.settings.bolometric} (BC5100 = ${p.settings.bc5100}); see settings`;
+      return p.bolometric.reference || undefined;
     case 'eddington':
       return p.eddington.reference;
     case 'growth':
       return p.growth.reference;
     case 'local':
-      return `${p.settings.localRelation}; see settings`;
+      return text(p.localRelation.reference);
   }
 }

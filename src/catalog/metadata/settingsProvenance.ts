@@ -3,13 +3,11 @@ import { COSMOLOGY_PRESETS } from '../../core/cosmology/index.ts';
 import type { DeriveSettings, LineId } from '../../core/derive/types.ts';
 import { LINES } from '../../core/derive/types.ts';
 import { DUST_CURVES, INTRINSIC_BALMER_CASE_B } from '../../core/dust/index.ts';
+import { BC5100_RICHARDS06, BC_SHEN11, NETZER19 } from '../../core/bolometric/index.ts';
+import { SALPETER_GROWTH } from '../../core/growth/index.ts';
+import { LOCAL_RELATIONS } from '../../core/local/index.ts';
 import { CALIBRATIONS } from '../../core/virial/calibrations.ts';
-
-/** Growth of a black hole at a constant Eddington ratio, as used for the seed-mass columns. */
-export const GROWTH_MODEL = {
-  formula: 'M(t) = M_seed · exp(λ · duty · (1 − ε)/ε · Δt / t_Edd), Δt = age(z) − age(z_seed), t_Edd = σ_T c / (4π G m_p)',
-  reference: 'Salpeter 1964, ApJ 140, 796 (Eddington-limited exponential growth); t_Edd from CODATA 2018 constants',
-} as const;
+import { GH05_LHALPHA_L5100 } from '../../core/virial/lineContinuumRelations.ts';
 
 /**
  * The settings of a run, as recorded in the catalog's metadata: the settings themselves, and
@@ -20,10 +18,13 @@ export interface SettingsProvenance {
   settings: DeriveSettings;
   cosmology: Record<string, unknown>;
   calibrations: Partial<Record<LineId, Record<string, unknown>>>;
+  /** The bolometric method and the records of the corrections it uses. */
+  bolometric: { method: string; bc5100: number; records: Record<string, unknown>[]; reference: string };
   eddington: { lEddPerMsun: number; reference: string };
+  localRelation: Record<string, unknown>;
   dustCurve: Record<string, unknown>;
   intrinsicBalmer: { ratio: number; reference: string };
-  growth: typeof GROWTH_MODEL & { tEddGyr: number };
+  growth: { form: string; reference: string; tEddGyr: number };
   constants: Record<string, { value: number; unit: string; reference: string }>;
 }
 
@@ -45,16 +46,51 @@ export function settingsProvenance(settings: DeriveSettings): SettingsProvenance
     settings,
     cosmology: { id: settings.cosmology, ...(cosmo ? dataOnly(cosmo) : {}) },
     calibrations,
+    bolometric: bolometricRecord(settings),
     eddington: {
       lEddPerMsun: settings.eddingtonPerMsun,
       reference: edd?.reference ?? 'value set in the config',
+    },
+    localRelation: {
+      id: settings.localRelation,
+      ...(Object.hasOwn(LOCAL_RELATIONS, settings.localRelation) ? dataOnly(LOCAL_RELATIONS[settings.localRelation]) : {}),
     },
     dustCurve: { id: settings.dustCurve, ...(dust ? dataOnly(dust) : {}) },
     intrinsicBalmer: {
       ratio: settings.intrinsicBalmer,
       reference: settings.intrinsicBalmer === INTRINSIC_BALMER_CASE_B.ratio ? INTRINSIC_BALMER_CASE_B.reference : 'value set in the config',
     },
-    growth: { ...GROWTH_MODEL, tEddGyr: T_EDD_GYR },
+    growth: { form: SALPETER_GROWTH.form, reference: SALPETER_GROWTH.reference, tEddGyr: T_EDD_GYR },
     constants: { ...PHYSICAL_CONSTANTS },
   };
+}
+
+/** The bc5100 record matching `bc` (10.33 Richards et al. 2006, 9.26 Shen et al. 2011), else the bare value. */
+function bc5100Record(bc: number): Record<string, unknown> {
+  if (bc === BC5100_RICHARDS06.bc) return { ...BC5100_RICHARDS06 };
+  if (bc === BC_SHEN11.l5100.bc) return { ...BC_SHEN11.l5100 };
+  return { id: 'config_bc5100', band: 'l5100', bc, reference: 'value set in the config' };
+}
+
+function bolometricRecord(settings: DeriveSettings): SettingsProvenance['bolometric'] {
+  const records: Record<string, unknown>[] = [];
+  switch (settings.bolometric) {
+    case 'halpha_gh05_bc5100':
+      records.push(dataOnly(GH05_LHALPHA_L5100), bc5100Record(settings.bc5100));
+      break;
+    case 'bc5100':
+      records.push(bc5100Record(settings.bc5100));
+      break;
+    case 'bc3000':
+      records.push({ ...BC_SHEN11.l3000 });
+      break;
+    case 'bc1350':
+      records.push({ ...BC_SHEN11.l1350 });
+      break;
+    case 'netzer19':
+      records.push(...Object.values(NETZER19).map((r) => ({ ...r })));
+      break;
+  }
+  const reference = [...new Set(records.map((r) => r.reference).filter((r): r is string => typeof r === 'string'))].join('; ');
+  return { method: settings.bolometric, bc5100: settings.bc5100, records, reference };
 }

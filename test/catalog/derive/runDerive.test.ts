@@ -84,6 +84,9 @@ describe('runDerive', () => {
     const meta = JSON.parse(kv!.v);
     expect(meta).toEqual(JSON.parse(await readFile(path.join(dir, 'out', 'cat.meta.json'), 'utf8')));
     expect(meta.title).toBe('Test catalog');
+    expect(kv!.v).not.toContain(dir); // no absolute path: the bytes must not depend on where the run happens
+    expect(meta.flags.invalid_input).toMatch(/failed validation/);
+    expect(meta.files).toEqual({ catalog: 'cat.parquet', meta: 'cat.meta.json', rejections: 'cat.rejections.csv' });
     expect(meta.input.file).toBe('cat.csv');
     expect(meta.input.sha256).toMatch(/^[0-9a-f]{64}$/);
     expect(meta.counts).toEqual({ rows: 5, derived: 3, flagged: 2, problems: 2 });
