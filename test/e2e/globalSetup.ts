@@ -1,39 +1,89 @@
 /**
- * Builds the demo site once for all end-to-end tests and serves it on a free local port.
- * The URL reaches the tests through `inject('siteUrl')`.
+ * Builds every site variant the end-to-end tests need ONCE and serves each on a free local
+ * port: the demo catalog at the root, the same under a sub-path (/census/), a hostile catalog
+ * (markup, quotes and non-Latin text in ids, passthrough columns and the config's texts), and
+ * the root build with its Parquet file removed. Catalogs are derived with the CLI.
+ * URLs and file paths reach the tests through `inject(...)`.
  */
 import type { TestProject } from 'vitest/node';
 import { execFileSync } from 'node:child_process';
-import { mkdtempSync, rmSync } from 'node:fs';
+import { cpSync, mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { serveStatic, type StaticServer } from '../../scripts/lib/staticServer.ts';
 import { findChromium } from './browser.ts';
+import { HOSTILE_CONFIG, hostileCsv } from './hostileCatalog.ts';
 
 declare module 'vitest' {
   export interface ProvidedContext {
+    /** Demo catalog built at the root. */
     siteUrl: string;
+    /** Demo catalog built under /census/. */
+    subUrl: string;
+    /** Hostile catalog built at the root. */
+    hostileUrl: string;
+    /** The root build with data/catalog.parquet removed. */
+    missingUrl: string;
+    /** The demo catalog's Parquet file (the one copied into the site). */
+    demoParquet: string;
+    /** The hostile catalog's Parquet file. */
+    hostileParquet: string;
   }
 }
 
 const root = resolve(import.meta.dirname, '../..');
-let server: StaticServer | undefined;
+const servers: StaticServer[] = [];
 let outDir: string | undefined;
+
+function derive(args: string[]): void {
+  execFileSync(process.execPath, [join(root, 'bin/dawn-census.js'), 'derive', ...args, '--quiet'], { cwd: root, stdio: ['ignore', 'ignore', 'inherit'] });
+}
+
+function build(catalog: string, base: string, dist: string): void {
+  execFileSync(process.execPath, [join(root, 'node_modules/astro/astro.js'), 'build', '--silent'], {
+    cwd: root,
+    env: { ...process.env, CENSUS_CATALOG: catalog, CENSUS_OUT_DIR: dist, CENSUS_BASE: base },
+    stdio: ['ignore', 'ignore', 'inherit'],
+  });
+}
 
 export async function setup(project: TestProject): Promise<void> {
   findChromium(); // fail early, with the install hint, when there is no browser
   outDir = mkdtempSync(join(tmpdir(), 'census-e2e-'));
-  const dist = join(outDir, 'dist');
-  execFileSync(process.execPath, [join(root, 'node_modules/astro/astro.js'), 'build', '--silent'], {
-    cwd: root,
-    env: { ...process.env, CENSUS_OUT_DIR: dist, CENSUS_BASE: '/' },
-    stdio: ['ignore', 'ignore', 'inherit'],
-  });
-  server = await serveStatic(dist, '/');
-  project.provide('siteUrl', server.url);
+  const demoParquet = join(outDir, 'demo/catalog.parquet');
+  derive([join(root, 'data-demo/catalog.csv'), '-c', join(root, 'data-demo/census.config.yaml'), '-o', demoParquet, '--draws', '300']);
+
+  const hostileDir = join(outDir, 'hostile');
+  mkdirSync(hostileDir, { recursive: true });
+  writeFileSync(join(hostileDir, 'hostile.csv'), hostileCsv());
+  writeFileSync(join(hostileDir, 'hostile.config.yaml'), HOSTILE_CONFIG);
+  const hostileParquet = join(hostileDir, 'out/catalog.parquet');
+  derive([join(hostileDir, 'hostile.csv'), '-c', join(hostileDir, 'hostile.config.yaml'), '-o', hostileParquet]);
+
+  const rootDist = join(outDir, 'site-root');
+  const subDist = join(outDir, 'site-sub');
+  const hostileDist = join(outDir, 'site-hostile');
+  const missingDist = join(outDir, 'site-missing');
+  build(demoParquet, '/', rootDist);
+  build(demoParquet, '/census/', subDist);
+  build(hostileParquet, '/', hostileDist);
+  cpSync(rootDist, missingDist, { recursive: true });
+  rmSync(join(missingDist, 'data/catalog.parquet'));
+
+  const serve = async (dist: string, base: string) => {
+    const s = await serveStatic(dist, base);
+    servers.push(s);
+    return s.url;
+  };
+  project.provide('siteUrl', await serve(rootDist, '/'));
+  project.provide('subUrl', await serve(subDist, '/census/'));
+  project.provide('hostileUrl', await serve(hostileDist, '/'));
+  project.provide('missingUrl', await serve(missingDist, '/'));
+  project.provide('demoParquet', demoParquet);
+  project.provide('hostileParquet', hostileParquet);
 }
 
 export async function teardown(): Promise<void> {
-  await server?.close();
+  await Promise.all(servers.map((s) => s.close()));
   if (outDir) rmSync(outDir, { recursive: true, force: true });
 }

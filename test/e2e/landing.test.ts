@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser } from 'playwright-core';
 import { launchBrowser } from './browser.ts';
+import { nodeQuery, openSite, waitForCharts } from './sitePage.ts';
 
 describe('landing page', () => {
   let browser: Browser;
@@ -11,9 +12,40 @@ describe('landing page', () => {
     await browser?.close();
   });
 
-  it('loads and shows the title', async () => {
-    const page = await browser.newPage();
-    await page.goto(inject('siteUrl'));
-    await expect(page.locator('h1').textContent()).resolves.toContain('Dawn Census');
+  it('shows the title, the counts computed from the catalog, and draws its charts without leaving the origin', async () => {
+    const [expected] = await nodeQuery(
+      inject('demoParquet'),
+      `SELECT count(*) AS objects, count(log_mbh) AS derived, count(*) FILTER (WHERE coalesce(flags, '') <> '') AS flagged FROM census`,
+    );
+    const site = await openSite(browser, inject('siteUrl'));
+    try {
+      const { page } = site;
+      await page.goto(inject('siteUrl'));
+      await expect(page.locator('h1').textContent()).resolves.toContain('Cinderwake');
+      for (const key of ['objects', 'derived', 'flagged'] as const) {
+        await expect(page.locator(`[data-count="${key}"]`).textContent()).resolves.toBe(String(expected![key]));
+      }
+      await waitForCharts(page);
+      expect(await page.locator('[data-chart] svg').count()).toBeGreaterThanOrEqual(4);
+      await expect(page.locator('[data-db-status]').isHidden()).resolves.toBe(true);
+      // The DuckDB worker and wasm were requested, and from the site itself.
+      expect(site.requests.some((u) => u.endsWith('.wasm'))).toBe(true);
+      expect(site.foreign()).toEqual([]);
+      expect(site.errors).toEqual([]);
+    } finally {
+      await site.close();
+    }
+  });
+
+  it('offers the catalog for download as Parquet and CSV with the same rows', async () => {
+    const base = inject('siteUrl');
+    const parquet = await fetch(new URL('data/catalog.parquet', base));
+    expect(parquet.status).toBe(200);
+    const bytes = new Uint8Array(await parquet.arrayBuffer());
+    expect(new TextDecoder().decode(bytes.slice(0, 4))).toBe('PAR1');
+    const csv = await (await fetch(new URL('data/catalog.csv', base))).text();
+    const [count] = await nodeQuery(inject('demoParquet'), 'SELECT count(*) AS n FROM census');
+    expect(csv.trim().split('\n').length - 1).toBe(count!.n);
+    expect(csv.split('\n')[0]).toMatch(/^id,/);
   });
 });

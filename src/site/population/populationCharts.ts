@@ -16,7 +16,7 @@ import {
   type ChartSettings,
 } from '../charts/index.ts';
 import type { ResultSet } from '../db/resultSet.ts';
-import { objectSlug } from '../objectSlug.ts';
+import { mountChart } from '../charts/mountChart.ts';
 
 /** Columns the population charts read, when the catalog has them. */
 export const CHART_COLUMNS = [
@@ -80,20 +80,8 @@ export function drawPopulation(root: HTMLElement, rows: readonly ChartRow[], opt
       mount.replaceChildren(p);
       continue;
     }
-    mount.replaceChildren(el);
+    const key = mount.dataset.chart ?? 'chart';
+    mountChart(mount, el, { fileName: `census-${key}`, label: mount.dataset.label ?? key, base: options.base });
     mount.dataset.drawn = String(rows.length);
-    clickThrough(el, options.base);
   }
-}
-
-/**
- * TEMPORARY stand-in for the charts' mount helper (hover ids, click-to-object-page, downloads),
- * until src/site/charts exports it: a click on a chart opens the page of the object under the
- * pointer (Plot's pointer sets the figure's `value` to the hovered point).
- */
-function clickThrough(el: Element, base: string): void {
-  el.addEventListener('click', () => {
-    const v = (el as Element & { value?: { id?: unknown; role?: string } }).value;
-    if (v && typeof v.id === 'string' && v.role !== 'extra') location.href = `${base}object/${objectSlug(v.id)}/`;
-  });
 }

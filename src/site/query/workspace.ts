@@ -32,7 +32,8 @@ export function startWorkspace(): void {
   const chartNote = $<HTMLElement>('[data-chart-note]');
   const table = new ResultTable($<HTMLElement>('[data-result-table]'), { units, base });
   let last: ResultSet | null = null;
-  let running = false;
+  // Each run has a number; a run overtaken by a newer one drops its result.
+  let generation = 0;
 
   bindDbStatus($<HTMLElement>('[data-db-status]'));
 
@@ -45,39 +46,40 @@ export function startWorkspace(): void {
     editor.setAttribute('aria-invalid', message === null ? 'false' : 'true');
   };
 
-  async function run(): Promise<void> {
-    if (running) return;
+  async function run(byReader = true): Promise<void> {
+    const my = ++generation;
     const sql = editor.value.trim();
     if (!sql) {
       showError('The editor is empty: write a query, e.g. SELECT * FROM census LIMIT 10.');
       return;
     }
-    running = true;
-    runButton.disabled = true;
     runButton.textContent = 'Running…';
+    root.setAttribute('aria-busy', 'true');
     sharedNote.hidden = true;
     showError(null);
     const t0 = performance.now();
     try {
       const rs = await queryCensus(sql);
+      if (my !== generation) return;
       const ms = performance.now() - t0;
       last = rs;
       table.setResult(rs);
       csvButton.disabled = false;
       summary.textContent = `${rs.numRows.toLocaleString('en')} ${rs.numRows === 1 ? 'row' : 'rows'}, ${rs.names.length} ${rs.names.length === 1 ? 'column' : 'columns'} · ${ms < 1000 ? `${Math.round(ms)} ms` : `${(ms / 1000).toFixed(1)} s`}`;
       summary.dataset.rows = String(rs.numRows);
-      history.replaceState(null, '', hrefWithSql(location.href, editor.value));
-      await redrawCharts(sql, rs);
+      if (byReader) history.replaceState(null, '', hrefWithSql(location.href, editor.value));
+      await redrawCharts(sql, rs, my);
     } catch (err) {
-      showError(err instanceof CensusDbError ? err.message : `The query failed: ${String(err)}`);
+      if (my === generation) showError(err instanceof CensusDbError ? err.message : `The query failed: ${String(err)}`);
     } finally {
-      running = false;
-      runButton.disabled = false;
-      runButton.textContent = 'Run query';
+      if (my === generation) {
+        runButton.textContent = 'Run query';
+        root.removeAttribute('aria-busy');
+      }
     }
   }
 
-  async function redrawCharts(sql: string, rs: ResultSet): Promise<void> {
+  async function redrawCharts(sql: string, rs: ResultSet, my: number): Promise<void> {
     const idCol = rs.names.indexOf('id');
     if (idCol < 0) {
       chartNote.hidden = false;
@@ -97,6 +99,7 @@ export function startWorkspace(): void {
         const full = await queryCensus(
           `SELECT ${wanted.map(sqlIdent).join(', ')} FROM ${TABLE} WHERE id IN (SELECT id FROM (\n${inner}\n) AS result)`,
         );
+        if (my !== generation) return;
         rows = chartRows(full);
       } catch {
         // Not a plain SELECT (e.g. DESCRIBE): draw what the result itself has.
@@ -141,6 +144,6 @@ export function startWorkspace(): void {
     sharedNote.hidden = false;
     void connection().catch(() => undefined); // start DuckDB while the reader reads the query
   } else {
-    void run();
+    void run(false); // our own default query: show the catalog at once, without touching the URL
   }
 }

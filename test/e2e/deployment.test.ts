@@ -1,0 +1,55 @@
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import type { Browser } from 'playwright-core';
+import { launchBrowser } from './browser.ts';
+import { nodeQuery, openSite, waitForCharts } from './sitePage.ts';
+
+describe('deployment', () => {
+  let browser: Browser;
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it('works under a sub-path (/census/): links, charts and DuckDB queries', async () => {
+    const sub = inject('subUrl');
+    expect(new URL(sub).pathname).toBe('/census/');
+    const [expected] = await nodeQuery(inject('demoParquet'), 'SELECT count(*) AS n FROM census WHERE log_edd_ratio > 0');
+    const site = await openSite(browser, sub);
+    try {
+      const { page } = site;
+      await page.goto(sub);
+      await waitForCharts(page);
+      expect(await page.locator('[data-chart] svg').count()).toBeGreaterThanOrEqual(4);
+      await page.locator('nav a', { hasText: 'Query in SQL' }).click();
+      await page.waitForFunction(() => location.pathname === '/census/query/' && document.querySelector('#sql'));
+      await page.locator('#sql').fill('SELECT id FROM census WHERE log_edd_ratio > 0');
+      await page.locator('[data-run]').click();
+      await page.waitForFunction((n) => document.querySelector('[data-result-summary]')?.getAttribute('data-rows') === String(n), expected!.n, { timeout: 30_000 });
+      await page.locator('table[data-results] tbody a').first().click();
+      await page.waitForFunction(() => location.pathname.startsWith('/census/object/') && document.querySelector('h1'));
+      expect(site.requests.every((u) => new URL(u).pathname.startsWith('/census/') || !u.startsWith('http'))).toBe(true);
+      expect(site.foreign()).toEqual([]);
+    } finally {
+      await site.close();
+    }
+  });
+
+  it('says plainly that the catalog file is missing when the site was published without it', async () => {
+    const site = await openSite(browser, inject('missingUrl'));
+    try {
+      const { page } = site;
+      await page.goto(inject('missingUrl'));
+      const status = page.locator('[data-db-status]');
+      await page.waitForFunction(() => document.querySelector('[data-db-status]')?.getAttribute('data-kind') === 'error', undefined, { timeout: 30_000 });
+      await expect(status.textContent()).resolves.toMatch(/catalog file .*data\/catalog\.parquet.* was not found/);
+      // The static parts still show.
+      await expect(page.locator('[data-count="objects"]').textContent()).resolves.toMatch(/^\d+$/);
+      await page.goto(new URL('query/', inject('missingUrl')).href);
+      await page.waitForFunction(() => /was not found/.test(document.querySelector('#sql-error')?.textContent ?? '') || /was not found/.test(document.querySelector('[data-db-status]')?.textContent ?? ''), undefined, { timeout: 30_000 });
+    } finally {
+      await site.close();
+    }
+  });
+});

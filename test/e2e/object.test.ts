@@ -1,0 +1,58 @@
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import type { Browser } from 'playwright-core';
+import { objectSlug } from '../../src/site/objectSlug.ts';
+import { launchBrowser } from './browser.ts';
+import { markCount, nodeQuery, openSite, waitForCharts } from './sitePage.ts';
+
+describe('object pages', () => {
+  let browser: Browser;
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it('show inputs, derived values with intervals, flags in words, provenance, and the object highlighted', async () => {
+    const [row] = await nodeQuery(
+      inject('demoParquet'),
+      `SELECT id, log_mbh, log_mbh_p16, log_mbh_p84, flags FROM census WHERE log_mbh IS NOT NULL AND log_mstar IS NOT NULL AND flags <> '' ORDER BY id LIMIT 1`,
+    );
+    const site = await openSite(browser, inject('siteUrl'));
+    try {
+      const { page } = site;
+      await page.goto(new URL(`object/${objectSlug(String(row!.id))}/`, inject('siteUrl')).href);
+      await expect(page.locator('h1').textContent()).resolves.toBe(row!.id);
+      const mbh = page.locator('tr[data-column="log_mbh"]');
+      await expect(mbh.locator('td').nth(1).textContent()).resolves.toBe(Number(row!.log_mbh).toFixed(2));
+      await expect(mbh.locator('td').nth(2).textContent()).resolves.toBe(`${Number(row!.log_mbh_p16).toFixed(2)} – ${Number(row!.log_mbh_p84).toFixed(2)}`);
+      const firstFlag = String(row!.flags).split(',')[0]!;
+      await expect(page.locator('.flag-list').textContent()).resolves.toContain(firstFlag);
+      await expect(page.locator('#prov-h + dl').textContent()).resolves.toMatch(/Planck/);
+      await waitForCharts(page);
+      expect(await page.locator('[data-chart="mbh-mstar"] g[class*="census-highlighted"]').count()).toBeGreaterThan(0);
+      expect(site.foreign()).toEqual([]);
+    } finally {
+      await site.close();
+    }
+  });
+
+  it('open from a click on a chart mark', async () => {
+    const site = await openSite(browser, inject('siteUrl'));
+    try {
+      const { page } = site;
+      await page.goto(inject('siteUrl'));
+      await waitForCharts(page);
+      expect(await markCount(page, 'mbh-z')).toBeGreaterThan(0);
+      const dot = page.locator('[data-chart="mbh-z"] g.census-catalog-point > *').first();
+      await dot.scrollIntoViewIfNeeded();
+      const box = (await dot.boundingBox())!;
+      await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
+      await page.mouse.click(box.x + box.width / 2, box.y + box.height / 2);
+      await page.waitForURL(/\/object\//, { timeout: 10_000 });
+      await expect(page.locator('h1').textContent()).resolves.toBeTruthy();
+    } finally {
+      await site.close();
+    }
+  });
+});
