@@ -1,12 +1,13 @@
 import { LINES, type BolometricMethodId, type CosmologyId, type DustCurveId, type LineId, type LocalRelationId } from '../../core/derive/types.ts';
 import { COSMOLOGY_PRESETS } from '../../core/cosmology/presets.ts';
+import { DUST_CURVES } from '../../core/dust/kLambda.ts';
+import { LOCAL_RELATIONS } from '../../core/local/localRelations.ts';
 import { CALIBRATIONS } from '../../core/virial/calibrations.ts';
 
 /*
- * The ids a census config may name. Cosmologies and virial calibrations come from the core's
- * tables; the other lists mirror the core's dust-curve, bolometric and local-relation tables
- * until those exist, and `satisfies` keeps them in step with the id types of
- * src/core/derive/types.ts.
+ * The ids a census config may name, read from the core's tables (cosmology presets, virial
+ * calibrations, dust curves, local relations). The bolometric methods have no table in the
+ * core, so they are listed here; `satisfies` keeps the list in step with BolometricMethodId.
  */
 
 /** Cosmology ids (keys of COSMOLOGY_PRESETS). */
@@ -27,15 +28,10 @@ export const BOLOMETRIC_IDS = [
 ] as const satisfies readonly BolometricMethodId[];
 
 /** Local black-hole–host relations. */
-export const LOCAL_RELATION_IDS = [
-  'rv15_agn',
-  'rv15_early',
-  'kh13_mbulge',
-  'kh13_sigma',
-] as const satisfies readonly LocalRelationId[];
+export const LOCAL_RELATION_IDS = Object.keys(LOCAL_RELATIONS) as LocalRelationId[];
 
 /** Dust attenuation curves. */
-export const DUST_CURVE_IDS = ['calzetti00', 'ccm89', 'smc'] as const satisfies readonly DustCurveId[];
+export const DUST_CURVE_IDS = Object.keys(DUST_CURVES) as DustCurveId[];
 
 /** Input formats the readers understand (`input.format`). */
 export const INPUT_FORMATS = ['csv', 'tsv', 'ecsv', 'fits', 'votable', 'parquet'] as const;
