@@ -1,0 +1,58 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { catalogFiles } from '../../../src/site/build/catalogFiles.ts';
+import { catalogCsv, readCatalog } from '../../../src/site/build/loadCatalog.ts';
+import { methodsView } from '../../../src/site/build/methodsView.ts';
+import { objectView } from '../../../src/site/build/objectView.ts';
+import { writeFixtureCatalog, type FixtureCatalog } from '../fixtures/fixtureCatalog.ts';
+
+describe('reading the catalog at build time', () => {
+  let dir: string;
+  let fx: FixtureCatalog;
+  beforeAll(async () => {
+    dir = mkdtempSync(join(tmpdir(), 'census-site-'));
+    fx = await writeFixtureCatalog(dir, { n: 12 });
+  });
+  afterAll(() => rmSync(dir, { recursive: true, force: true }));
+
+  it('finds the Parquet file and its sidecar from CENSUS_CATALOG and says what is missing', () => {
+    expect(catalogFiles({ CENSUS_CATALOG: fx.parquet })).toEqual({ parquet: fx.parquet, meta: fx.meta });
+    expect(() => catalogFiles({ CENSUS_CATALOG: join(dir, 'nope.parquet') })).toThrow(/does not exist/);
+  });
+
+  it('reads every row and counts objects, derived masses and flagged objects', async () => {
+    const cat = await readCatalog({ parquet: fx.parquet, meta: fx.meta });
+    expect(cat.rows.map((r) => r.id)).toEqual(fx.ids);
+    // The fixture flags rows 3, 7, 11 (no host mass) and 2, 7 (out of range): four distinct rows; every row has a mass.
+    expect(cat.summary).toMatchObject({ objects: 12, derived: 12, flagged: 4 });
+    expect(cat.summary.zMin).toBeLessThan(cat.summary.zMax!);
+  });
+
+  it('writes the CSV download with a header and every row', async () => {
+    const bytes = await catalogCsv(fx.parquet, join(dir, 'out.csv'));
+    const lines = bytes.toString('utf8').trim().split('\n');
+    expect(lines[0]!.split(',')[0]).toBe('id');
+    expect(lines).toHaveLength(13);
+  });
+
+  it('arranges one object for its page: inputs with errors, derived values with 16–84 intervals, flags in words', async () => {
+    const cat = await readCatalog({ parquet: fx.parquet, meta: fx.meta });
+    const row = cat.rows[3]!;
+    const view = objectView(row, cat.columns.map((c) => c.name), cat.meta);
+    const mbh = view.derived.find((l) => l.column === 'log_mbh')!;
+    expect(mbh.spread).toBe(`${(Number(row.log_mbh) - 0.4).toFixed(2)} – ${(Number(row.log_mbh) + 0.4).toFixed(2)}`);
+    expect(view.inputs.find((l) => l.column === 'fwhm_halpha')!.spread).toBe('± 150');
+    expect(view.other.map((l) => l.column)).toEqual(expect.arrayContaining(['ra', 'dec', 'field', 'notes']));
+    expect(view.flags.map((f) => f.code)).toEqual(['no_host_mass']);
+  });
+
+  it('reads the methods from the metadata: the calibration with its reference and scatter', async () => {
+    const cat = await readCatalog({ parquet: fx.parquet, meta: fx.meta });
+    const m = methodsView(cat.meta);
+    expect(m.cosmology.reference).toMatch(/Planck/);
+    expect(m.calibrations[0]).toMatchObject({ line: 'halpha', id: 'Ha_GH05', scatter: '0.3' });
+    expect(JSON.parse(readFileSync(fx.meta, 'utf8')).settings.seed).toBe(42);
+  });
+});

@@ -1,0 +1,16 @@
+import { describe, expect, it } from 'vitest';
+import { columnLabel, unitText } from '../../../src/site/text/columnLabels.ts';
+
+describe('column labels', () => {
+  it('names line, error and percentile columns in words', () => {
+    expect(columnLabel('fwhm_hbeta_err')).toBe('FWHM Hβ error');
+    expect(columnLabel('flux_halpha_is_limit')).toBe('Flux Hα is an upper limit');
+    expect(columnLabel('log_mbh_p84')).toBe('Black-hole mass, 84th percentile');
+    expect(columnLabel('some_passthrough')).toBe('some_passthrough');
+  });
+  it('writes VOUnits as a reader does', () => {
+    expect(unitText('log(solMass)')).toBe('log M☉');
+    expect(unitText('log(erg/s)')).toBe('log erg/s');
+    expect(unitText('')).toBe('');
+  });
+});

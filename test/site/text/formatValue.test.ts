@@ -1,0 +1,30 @@
+import { describe, expect, it } from 'vitest';
+import { formatValue, isNumericType, MISSING } from '../../../src/site/text/formatValue.ts';
+
+describe('formatValue', () => {
+  it('prints log quantities and percentiles to 0.01 dex', () => {
+    expect(formatValue('log_mbh', 7.4567)).toBe('7.46');
+    expect(formatValue('log_edd_ratio_p16', -0.004)).toBe('0.00');
+    expect(formatValue('delta_log_mbh_local', 1.005)).toBe('1.00');
+  });
+  it('prints redshifts to 0.001 and coordinates to 1e-5 degrees', () => {
+    expect(formatValue('z', 6.12345)).toBe('6.123');
+    expect(formatValue('ra', 150.1234567)).toBe('150.12346');
+  });
+  it('prints fluxes in scientific notation and widths without decimals', () => {
+    expect(formatValue('flux_halpha', 2.346e-18)).toBe('2.35e-18');
+    expect(formatValue('fwhm_halpha', 2345.6)).toBe('2346');
+    expect(formatValue('lambda_req_light', 1.23456)).toBe('1.23');
+  });
+  it('shows missing values as a dash, booleans as words and text as it is', () => {
+    expect(formatValue('log_mbh', null)).toBe(MISSING);
+    expect(formatValue('log_mbh', Number.NaN)).toBe(MISSING);
+    expect(formatValue('flux_halpha_is_limit', true)).toBe('yes');
+    expect(formatValue('notes', '<b>x</b>')).toBe('<b>x</b>');
+  });
+  it('recognises numeric column types', () => {
+    expect(isNumericType('Float64')).toBe(true);
+    expect(isNumericType('Int32')).toBe(true);
+    expect(isNumericType('Utf8')).toBe(false);
+  });
+});
