@@ -3,7 +3,7 @@ import type { Rng } from '../random/rng.ts';
 import { percentiles16_50_84 } from '../random/percentiles.ts';
 import { logL5100FromLogLHalpha, logL5100FromLogLHbeta, inCalibrationRange } from '../virial/index.ts';
 import { inLocalRelationRange } from '../local/localRelation.ts';
-import { lambdaRequired } from '../growth/salpeterGrowth.ts';
+import { lambdaRequired, logSeedMassRequired } from '../growth/salpeterGrowth.ts';
 import { planObject, type LumSource } from './objectPlan.ts';
 import { createScratch, evaluateChain, OUT, OUT_SIZE } from './evaluateChain.ts';
 
@@ -78,6 +78,13 @@ export function deriveObject(inputs: ObjectInputs, settings: DeriveSettings, rng
   }
   const pct = (slot: number): Percentiles | null =>
     Number.isFinite(nominal[slot]) ? percentiles16_50_84(buf[slot] as Float64Array) : null;
+  const pMbh = pct(OUT.logMbh);
+  // The required seed mass is log M minus a constant for the object (its e-folds), a monotone
+  // map, so its percentiles are the mass percentiles mapped through it: no second selection.
+  const toSeed = (logM: number): number =>
+    logSeedMassRequired(logM, plan.dtSeedGyr, settings.efficiency, settings.lambdaSeed, settings.dutyCycle);
+  const pMseed =
+    pMbh && Number.isFinite(nominal[OUT.logMseed]) ? { p16: toSeed(pMbh.p16), p50: toSeed(pMbh.p50), p84: toSeed(pMbh.p84) } : null;
 
   const logMbh = finiteOrNull(nominal[OUT.logMbh] as number);
   const logEddRatio = finiteOrNull(nominal[OUT.logEddRatio] as number);
@@ -110,10 +117,10 @@ export function deriveObject(inputs: ObjectInputs, settings: DeriveSettings, rng
     localOffsetSigma,
     pAboveLocal: delta !== null ? above / draws : null,
     pct: {
-      logMbh: pct(OUT.logMbh),
+      logMbh: pMbh,
       logLbol: pct(OUT.logLbol),
       logEddRatio: pct(OUT.logEddRatio),
-      logMseed: pct(OUT.logMseed),
+      logMseed: pMseed,
       deltaLogMbhLocal: pDelta,
     },
     flags: [...flags].sort(),

@@ -124,6 +124,14 @@ describe('deriveObject growth quantities', () => {
     expect(d.lambdaReqHeavy!).toBeLessThan(d.lambdaReqLight!);
   });
 
+  it("shifts the mass percentiles by the object's e-folds to give the seed-mass percentiles", () => {
+    const d = deriveObject(haObject('sp', 1e43, 2000, { z: 6 }), settings(), rngFor('sp'));
+    const shift = d.logMseed! - d.logMbh!;
+    for (const k of ['p16', 'p50', 'p84'] as const) {
+      expectClose(d.pct.logMseed![k], d.pct.logMbh![k] + shift, { atol: 1e-12, source: 'closed form: log Mseed = log M − N_e log10 e' });
+    }
+  });
+
   it('has no seed quantities for an object above the seed redshift', () => {
     const d = deriveObject(haObject('z', 1e43, 2000, { z: 25 }), settings(), rngFor('z'));
     expect(d.logMseed).toBeNull();
