@@ -68,7 +68,7 @@ export async function resolveDerivePlan(args: DeriveArgs): Promise<DerivePlan> {
 export async function deriveCommand(
   args: DeriveArgs,
   err: TextOut,
-  extra: Pick<DeriveRunOptions, 'deriveModule' | 'chunkRows'> = {},
+  extra: Pick<DeriveRunOptions, 'deriveModule' | 'chunkRows' | 'signal'> = {},
 ): Promise<DeriveSummary> {
   const plan = await resolveDerivePlan(args);
   const label = displayPath(plan.catalogPath);

@@ -8,4 +8,6 @@ export const EXIT = {
   catalog: 2,
   /** The command line is wrong (sysexits EX_USAGE). */
   usage: 64,
+  /** Stopped by Ctrl-C (128 + SIGINT); nothing was written. */
+  interrupted: 130,
 } as const;

@@ -37,5 +37,5 @@ All three files are replaced together, and only when the run succeeds.
 Rows with problems stay in the output, flagged "invalid_input" with empty derived values.
 
 Exit status: 0 done; 1 unexpected failure; 2 the catalog or config cannot be used as a
-whole (nothing written); 64 wrong command line.
+whole (nothing written); 64 wrong command line; 130 interrupted (nothing written).
 `;

@@ -39,14 +39,34 @@ export async function main(argv: readonly string[], io: CliIo = processIo(), opt
       io.stdout.write(DERIVE_HELP);
       return EXIT.ok;
     }
-    await deriveCommand(args, io.stderr, options);
+    // Ctrl-C stops the run between chunks so that its temporary files are removed.
+    const interrupt = new AbortController();
+    const onSigint = (): void => interrupt.abort(new Interrupted());
+    process.once('SIGINT', onSigint);
+    try {
+      await deriveCommand(args, io.stderr, { ...options, signal: interrupt.signal });
+    } finally {
+      process.off('SIGINT', onSigint);
+    }
     return EXIT.ok;
   } catch (error) {
     return reportError(error, io);
   }
 }
 
+/** The run was stopped by Ctrl-C. */
+class Interrupted extends Error {
+  override name = 'Interrupted';
+  constructor() {
+    super('interrupted; nothing was written (an earlier output is unchanged)');
+  }
+}
+
 function reportError(error: unknown, io: CliIo): number {
+  if (error instanceof Interrupted) {
+    io.stderr.write(`\ndawn-census: ${error.message}\n`);
+    return EXIT.interrupted;
+  }
   if (error instanceof UsageError) {
     io.stderr.write(`dawn-census: ${error.message}\n`);
     return EXIT.usage;

@@ -46,6 +46,8 @@ export interface DeriveRunOptions {
   chunkRows?: number;
   /** Module exporting deriveObject (default: src/core/derive/deriveObject.ts); tests substitute a stand-in. */
   deriveModule?: string;
+  /** Aborts the run between chunks (e.g. on Ctrl-C): it then throws the signal's reason and writes nothing. */
+  signal?: AbortSignal;
   /** Called after each chunk is written. */
   onProgress?: (p: DeriveProgress) => void;
   /** Called for each problem found in a row, in row order. */
@@ -131,8 +133,11 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
     const maxInFlight = 2 * deriver.threads + 1;
     const rowsTotal = src.nRows;
 
+    // Rejects as soon as the run is aborted, so a long batch in a worker is not waited for.
+    const aborted = opts.signal ? abortedPromise(opts.signal) : null;
+    aborted?.catch(() => undefined);
     const writeChunk = async (chunk: PendingChunk): Promise<void> => {
-      const packed = chunk.results ? await chunk.results : null;
+      const packed = chunk.results ? await (aborted ? Promise.race([chunk.results, aborted]) : chunk.results) : null;
       let k = 0;
       for (const row of chunk.rows) {
         const index = derivable(row) ? k++ : -1;
@@ -163,6 +168,7 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
     };
 
     for await (const chunk of src.chunks(opts.chunkRows ?? DEFAULT_CHUNK_ROWS)) {
+      opts.signal?.throwIfAborted();
       const rows = normalizeChunk(chunk, plan) as NormalizedRowLike[];
       const inputs: ObjectInputs[] = [];
       for (const row of rows) {
@@ -180,7 +186,11 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
       queue.push({ rows, results });
       while (queue.length >= maxInFlight) await writeChunk(queue.shift()!);
     }
-    while (queue.length > 0) await writeChunk(queue.shift()!);
+    while (queue.length > 0) {
+      opts.signal?.throwIfAborted();
+      await writeChunk(queue.shift()!);
+    }
+    opts.signal?.throwIfAborted();
 
     await deriver.close();
     deriver = null;
@@ -215,6 +225,13 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
   } finally {
     await source?.close().catch(() => undefined);
   }
+}
+
+function abortedPromise(signal: AbortSignal): Promise<never> {
+  return new Promise((_, reject) => {
+    if (signal.aborted) reject(signal.reason);
+    else signal.addEventListener('abort', () => reject(signal.reason), { once: true });
+  });
 }
 
 /** A row is derived only when its inputs parsed and it has no problem at all. */

@@ -1,5 +1,5 @@
-import { execFile } from 'node:child_process';
-import { mkdtemp, readdir, rm, writeFile } from 'node:fs/promises';
+import { execFile, spawn } from 'node:child_process';
+import { mkdtemp, readdir, readFile, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -42,5 +42,26 @@ describe('bin/dawn-census.js', () => {
     expect('code' in failure && failure.code).toBe(2);
     expect((failure as { stderr: string }).stderr.trim().split('\n')).toHaveLength(1);
     expect(await readdir(dir)).toEqual([]);
+  });
+
+  it('stops on Ctrl-C with status 130, removing its temporary files and leaving an earlier output as it was', async () => {
+    const input = path.join(dir, 'many.csv');
+    const lines = ['id,z,fwhm_halpha,fwhm_halpha_err,lum_halpha,lum_halpha_err'];
+    for (let i = 0; i < 20000; i++) lines.push(`M-${i},${(4 + (i % 60) / 10).toFixed(1)},${1000 + (i % 90) * 30},150,${2 + (i % 9)}e42,0.3e42`);
+    await writeFile(input, lines.join('\n'));
+    await writeFile(path.join(dir, 'many.census.parquet'), 'earlier output');
+    const child = spawn(process.execPath, [BIN, 'derive', input, '--draws', '2000', '--threads', '2'], { cwd: dir });
+    let stderr = '';
+    let sent = false;
+    child.stderr.on('data', (d: Buffer) => {
+      stderr += d.toString();
+      // One Ctrl-C (a second one would end the process at once, as usual).
+      if (!sent && /derive: \d+%/.test(stderr)) sent = child.kill('SIGINT');
+    });
+    const code = await new Promise<number | null>((resolve) => child.on('exit', (c) => resolve(c)));
+    expect(code).toBe(130);
+    expect(stderr).toContain('dawn-census: interrupted; nothing was written (an earlier output is unchanged)');
+    expect((await readdir(dir)).sort()).toEqual(['many.census.parquet', 'many.csv']);
+    expect(await readFile(path.join(dir, 'many.census.parquet'), 'utf8')).toBe('earlier output');
   });
 });
