@@ -39,14 +39,14 @@ export const LEGEND_ROW = 18;
 /** Distance from the bottom of the frame to the first legend row, px (below the x-axis label). */
 export const LEGEND_OFFSET = 46;
 /** Rough width of one character of the 11 px legend text, px. */
-const CHAR_PX = 6.2;
+const CHAR_PX = 6.8;
 
 /** Where each item goes: its row and its x offset from the left of the frame. */
 export function legendLayout(items: readonly LegendItem[], availablePx: number, startPx: number): { row: number; dx: number }[] {
   let row = 0;
   let x = startPx;
   return items.map((item) => {
-    const w = 26 + item.label.length * CHAR_PX + 18;
+    const w = 16 + 2 * (item.r ?? 4) + item.label.length * CHAR_PX + 16;
     if (x + w > startPx + availablePx && x > startPx) {
       row += 1;
       x = startPx;
@@ -76,7 +76,7 @@ export function legendMarks(items: readonly LegendItem[], availablePx: number, s
     return [
       Plot.dot([item], {
         frameAnchor: 'bottom-left',
-        dx: dx + 10,
+        dx: dx + 6 + (item.r ?? 4),
         dy,
         symbol: item.symbol as Plot.SymbolType,
         r: item.r ?? 4,
@@ -89,7 +89,7 @@ export function legendMarks(items: readonly LegendItem[], availablePx: number, s
       }),
       Plot.text([item.label], {
         frameAnchor: 'bottom-left',
-        dx: dx + 24,
+        dx: dx + 14 + 2 * (item.r ?? 4),
         dy,
         text: (d: string) => d,
         textAnchor: 'start',

@@ -1,7 +1,7 @@
 import { isLimit, type ChartPoint } from './chartPoint.ts';
 import type { LegendItem } from './legend.ts';
 import { LEGEND_BAND } from './legend.ts';
-import { LIMIT_DOWN } from './limitSymbols.ts';
+import { limitSymbol } from './limitSymbols.ts';
 import { PALETTE } from './palette.ts';
 import { DEFAULT_SERIES, type SeriesStyle } from './scatterLayers.ts';
 
@@ -23,7 +23,8 @@ export function scatterLegend(points: readonly ChartPoint[], dense: boolean, ser
       if (present) items.push({ label: s.label, symbol: s.symbol, fill: s.colour, r: 3.5 });
     }
   }
-  if (pop.some(isLimit)) items.push({ label: 'Upper limit', symbol: LIMIT_DOWN, stroke: dense ? PALETTE.ink : PALETTE.population, strokeWidth: 1.2, r: 4.5 });
+  const firstLimit = pop.find(isLimit);
+  if (firstLimit) items.push({ label: 'Upper limit', symbol: limitSymbol(firstLimit.xLimit, firstLimit.yLimit), stroke: dense ? PALETTE.ink : PALETTE.population, strokeWidth: 1.2, r: 4.5 });
   if (points.some((p) => p.role === 'highlight')) items.push({ label: 'Highlighted', symbol: 'circle', fill: PALETTE.highlight, stroke: PALETTE.ink, strokeWidth: 1.4, r: 5 });
   if (points.some((p) => p.role === 'extra')) items.push({ label: 'New object', symbol: 'star', fill: PALETTE.extra, stroke: PALETTE.ink, strokeWidth: 1.2, r: 7 });
   return items;
