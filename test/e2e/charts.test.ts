@@ -51,6 +51,13 @@ describe('charts in the browser', () => {
       expect(svg).toContain('<svg');
       expect(svg).toContain('single-epoch virial');
       expect(svg).toContain('census-catalog-point');
+      const [png] = await Promise.all([page.waitForEvent('download'), page.locator('[data-place-chart="mbh-mstar"] button', { hasText: 'Download PNG' }).click()]);
+      expect(png.suggestedFilename()).toBe('place-mbh-mstar.png');
+      const bytes = readFileSync((await png.path())!);
+      // PNG signature (ISO/IEC 15948 §5.2) and a width twice the chart's
+      expect([...bytes.subarray(0, 8)]).toEqual([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
+      const chartWidth = Number(await page.locator('[data-place-chart="mbh-mstar"] svg').first().getAttribute('width'));
+      expect(bytes.readUInt32BE(16)).toBe(2 * chartWidth);
 
       const p = await loneliestPoint(page, 'mbh-mstar');
       expect(p.id).toMatch(/^CDW-\d{5}$/);
