@@ -1,3 +1,4 @@
+import { stat } from 'node:fs/promises';
 import { availableParallelism } from 'node:os';
 import path from 'node:path';
 import { applyOverrides } from '../config/applyOverrides.ts';
@@ -50,6 +51,9 @@ export async function resolveDerivePlan(args: DeriveArgs): Promise<DerivePlan> {
   const format = catalogAbs === fromConfig ? config.input?.format : undefined;
   const outputPath = args.output !== undefined ? path.resolve(args.output) : (config.output ?? defaultOutputPath(catalogAbs));
   if (outputPath === catalogAbs) throw new UsageError(`the output ${displayPath(outputPath)} is the catalog itself; choose another with -o`);
+  if ((await stat(outputPath).catch(() => null))?.isDirectory()) {
+    throw new UsageError(`the output ${displayPath(outputPath)} is a folder; give a file name, e.g. ${displayPath(path.join(outputPath, 'catalog.parquet'))}`);
+  }
   return {
     config,
     // As the user would write it (relative inside the working folder): readers name it in messages.

@@ -1,4 +1,4 @@
-import { mkdtemp, readdir, readFile, rm, writeFile } from 'node:fs/promises';
+import { mkdir, mkdtemp, readdir, readFile, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
@@ -108,10 +108,14 @@ describe('dawn-census', () => {
     expect(await readdir('.')).toEqual(['dup.csv']);
   });
 
-  it('refuses to write the output over the catalog', async () => {
+  it('refuses to write the output over the catalog or onto a folder', async () => {
     await writeFile('cat.csv', CSV);
     const r = await run(['derive', 'cat.csv', '-o', 'cat.csv']);
     expect(r.status).toBe(64);
     expect(r.err).toBe('dawn-census: the output cat.csv is the catalog itself; choose another with -o\n');
+    await mkdir('out');
+    const folder = await run(['derive', 'cat.csv', '-o', 'out/']);
+    expect(folder.status).toBe(64);
+    expect(folder.err).toBe(`dawn-census: the output out is a folder; give a file name, e.g. ${path.join('out', 'catalog.parquet')}\n`);
   });
 });
