@@ -5,6 +5,7 @@
 import type { DerivedObject } from '../../core/derive/types.ts';
 import type { LocalRelation } from '../../core/local/index.ts';
 import { objectHref } from '../charts/mountChart.ts';
+import { FLAG_DESCRIPTIONS } from '../../core/derive/flags.ts';
 import { flagText } from '../text/flagText.ts';
 import type { PlaceReport } from './placeReport.ts';
 import { ordinalPercentile, type PercentileRank } from './ranks.ts';
@@ -89,7 +90,7 @@ export function resultView(
   if (d.flags.length) {
     root.append(el('h3', {}, 'Flags'));
     const ul = el('ul', { class: 'flag-list' });
-    for (const f of d.flags) ul.append(el('li', {}, el('code', {}, f), `: ${flagText(f)}`));
+    for (const f of d.flags) ul.append(el('li', {}, el('code', {}, f), `: ${(FLAG_DESCRIPTIONS as Record<string, string>)[f] ?? flagText(f)}`));
     root.append(ul);
   }
   for (const n of notes) root.append(el('p', { class: 'small muted' }, n));
