@@ -1,0 +1,107 @@
+/**
+ * The in-browser object page (`object/?id=…`), for catalogs too large for one static page per
+ * object and for any link by id: reads the object's row with DuckDB-WASM and lays it out like
+ * the static pages (src/site/build/objectView.ts), writing every value with textContent.
+ */
+import { CensusDbError, queryCensus, TABLE } from '../db/duckdb.ts';
+import { rowObjects } from '../db/resultSet.ts';
+import { sqlString } from '../db/sqlIdent.ts';
+import { bindDbStatus } from '../db/statusView.ts';
+import { objectView, type ViewLine } from '../build/objectView.ts';
+import type { CatalogRow } from '../build/loadCatalog.ts';
+import type { ColumnMeta } from '../build/siteMeta.ts';
+import { mountCatalogCharts } from '../population/mountCatalogCharts.ts';
+
+function text(tag: string, content: string, className?: string): HTMLElement {
+  const e = document.createElement(tag);
+  e.textContent = content;
+  if (className) e.className = className;
+  return e;
+}
+
+function valueTable(lines: ViewLine[], spreadHeading: string): HTMLElement {
+  const wrap = document.createElement('div');
+  wrap.className = 'table-wrap';
+  const table = document.createElement('table');
+  table.className = 'data values';
+  const head = document.createElement('tr');
+  for (const [h, num] of [['Quantity', false], ['Column', false], ['Value', true], [spreadHeading, true], ['Unit', false]] as const) {
+    const th = text('th', h, num ? 'num' : undefined);
+    th.setAttribute('scope', 'col');
+    head.append(th);
+  }
+  table.createTHead().append(head);
+  const body = table.createTBody();
+  for (const l of lines) {
+    const tr = document.createElement('tr');
+    tr.dataset.column = l.column;
+    const th = text('th', l.label);
+    th.setAttribute('scope', 'row');
+    th.title = l.description;
+    const code = document.createElement('td');
+    code.append(text('code', l.column));
+    tr.append(th, code, text('td', l.limit ? `< ${l.value} (upper limit)` : l.value, 'num'), text('td', l.spread, 'num'), text('td', l.unit));
+    body.append(tr);
+  }
+  wrap.append(table);
+  return wrap;
+}
+
+export async function startObjectViewer(root: HTMLElement): Promise<void> {
+  bindDbStatus(document.querySelector<HTMLElement>('[data-db-status]'));
+  const heading = root.querySelector<HTMLElement>('h1')!;
+  const body = root.querySelector<HTMLElement>('[data-object-body]')!;
+  const charts = document.querySelector<HTMLElement>('[data-population="manual"]')!;
+  const id = new URLSearchParams(location.search).get('id');
+  if (!id) {
+    heading.textContent = 'No object chosen';
+    body.replaceChildren(text('p', 'This page shows one object: open it from a query result, a chart or a link with ?id=<identifier>.'));
+    return;
+  }
+  heading.textContent = id;
+  document.title = `${id} · ${document.title}`;
+  try {
+    const rs = await queryCensus(`SELECT * FROM ${TABLE} WHERE id = ${sqlString(id)} LIMIT 1`);
+    const [row] = rowObjects(rs) as CatalogRow[];
+    if (!row) {
+      body.replaceChildren(text('p', `There is no object with the identifier “${id}” in this catalog.`, 'status'));
+      return;
+    }
+    const columns = JSON.parse(root.dataset.columns ?? '{}') as Record<string, ColumnMeta>;
+    const view = objectView(row, rs.names, { columns });
+    const z = view.inputs.find((l) => l.column === 'z');
+    const parts: HTMLElement[] = [text('p', `Redshift ${z?.value ?? '—'}${view.flags.length ? ` · ${view.flags.length} ${view.flags.length === 1 ? 'flag' : 'flags'}` : ''}`, 'lede')];
+    const grid = document.createElement('div');
+    grid.className = 'two-col';
+    const left = document.createElement('section');
+    left.append(text('h2', 'Derived values'), text('p', 'Nominal values; the interval is the 16th–84th percentile of the Monte Carlo draws.', 'small muted'), valueTable(view.derived, '16–84 % interval'));
+    const right = document.createElement('section');
+    right.append(text('h2', 'Inputs'), valueTable(view.inputs, '1σ error'));
+    if (view.other.length) right.append(text('h3', 'Other columns'), valueTable(view.other, ''));
+    grid.append(left, right);
+    parts.push(grid, text('h2', 'Flags'));
+    if (view.flags.length === 0) parts.push(text('p', 'No flags: every quantity was derived without a special condition.'));
+    else {
+      const ul = document.createElement('ul');
+      ul.className = 'flag-list';
+      for (const f of view.flags) {
+        const li = document.createElement('li');
+        li.append(text('code', f.code), document.createTextNode(`: ${f.text}`));
+        ul.append(li);
+      }
+      parts.push(ul);
+    }
+    const prov = document.createElement('dl');
+    prov.className = 'defs';
+    for (const [k, c] of [['Black-hole mass from', 'mbh_method'], ['Bolometric luminosity from', 'lbol_method']] as const) {
+      prov.append(text('dt', k), text('dd', typeof row[c] === 'string' && row[c] ? String(row[c]) : 'not derived'));
+    }
+    parts.push(text('h2', 'How these numbers were made'), prov);
+    body.replaceChildren(...parts);
+    charts.dataset.highlight = id;
+    charts.dataset.population = 'catalog';
+    await mountCatalogCharts(charts);
+  } catch (err) {
+    body.replaceChildren(text('p', err instanceof CensusDbError ? err.message : String(err), 'status'));
+  }
+}
