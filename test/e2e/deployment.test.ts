@@ -22,13 +22,17 @@ describe('deployment', () => {
       await page.goto(sub);
       await waitForCharts(page);
       expect(await page.locator('[data-chart] svg').count()).toBeGreaterThanOrEqual(4);
-      await page.locator('nav a', { hasText: 'Query in SQL' }).click();
-      await page.waitForFunction(() => location.pathname === '/census/query/' && document.querySelector('#sql'));
+      await Promise.all([
+        page.waitForURL((u) => u.pathname === '/census/query/', { waitUntil: 'domcontentloaded' }),
+        page.locator('nav a', { hasText: 'Query in SQL' }).click(),
+      ]);
       await page.locator('#sql').fill('SELECT id FROM census WHERE log_edd_ratio > 0');
       await page.locator('[data-run]').click();
       await page.waitForFunction((n) => document.querySelector('[data-result-summary]')?.getAttribute('data-rows') === String(n), expected!.n, { timeout: 30_000 });
-      await page.locator('table[data-results] tbody a').first().click();
-      await page.waitForFunction(() => location.pathname.startsWith('/census/object/') && document.querySelector('h1'));
+      await Promise.all([
+        page.waitForURL((u) => u.pathname.startsWith('/census/object/'), { waitUntil: 'domcontentloaded' }),
+        page.locator('table[data-results] tbody a').first().click(),
+      ]);
       expect(site.requests.every((u) => new URL(u).pathname.startsWith('/census/') || !u.startsWith('http'))).toBe(true);
       expect(site.foreign()).toEqual([]);
     } finally {

@@ -39,10 +39,21 @@ function derive(args: string[]): void {
   execFileSync(process.execPath, [join(root, 'bin/dawn-census.js'), 'derive', ...args, '--quiet'], { cwd: root, stdio: ['ignore', 'ignore', 'inherit'] });
 }
 
+/**
+ * The environment of a child build: vitest sets Vite's own variables (BASE_URL, MODE, …) in
+ * process.env, and a build that inherits BASE_URL=/ would link every page to the root.
+ */
+function buildEnv(extra: Record<string, string>): NodeJS.ProcessEnv {
+  const env = { ...process.env };
+  for (const k of ['BASE_URL', 'MODE', 'DEV', 'PROD', 'SSR', 'NODE_ENV']) delete env[k];
+  for (const k of Object.keys(env)) if (k.startsWith('VITEST') || k.startsWith('VITE_')) delete env[k];
+  return { ...env, ...extra };
+}
+
 function build(catalog: string, base: string, dist: string): void {
   execFileSync(process.execPath, [join(root, 'node_modules/astro/astro.js'), 'build', '--silent'], {
     cwd: root,
-    env: { ...process.env, CENSUS_CATALOG: catalog, CENSUS_OUT_DIR: dist, CENSUS_BASE: base },
+    env: buildEnv({ CENSUS_CATALOG: catalog, CENSUS_OUT_DIR: dist, CENSUS_BASE: base }),
     stdio: ['ignore', 'ignore', 'inherit'],
   });
 }

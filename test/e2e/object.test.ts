@@ -55,4 +55,23 @@ describe('object pages', () => {
       await site.close();
     }
   });
+
+  it('are also shown by the in-browser viewer (object/?id=…), which large catalogs link to', async () => {
+    const [row] = await nodeQuery(inject('demoParquet'), `SELECT id, log_mbh FROM census WHERE log_mbh IS NOT NULL ORDER BY z DESC LIMIT 1`);
+    const site = await openSite(browser, inject('siteUrl'));
+    try {
+      const { page } = site;
+      await page.goto(new URL(`object/?id=${encodeURIComponent(String(row!.id))}`, inject('siteUrl')).href);
+      await page.waitForSelector('tr[data-column="log_mbh"]', { timeout: 30_000 });
+      await expect(page.locator('h1').textContent()).resolves.toBe(row!.id);
+      await expect(page.locator('tr[data-column="log_mbh"] td').nth(1).textContent()).resolves.toBe(Number(row!.log_mbh).toFixed(2));
+      await waitForCharts(page);
+      expect(await page.locator('[data-chart="mbh-z"] g[class*="census-highlighted"]').count()).toBeGreaterThan(0);
+      await page.goto(new URL('object/?id=no-such-object', inject('siteUrl')).href);
+      await page.waitForFunction(() => /no object with the identifier/.test(document.querySelector('[data-object-body]')?.textContent ?? ''), undefined, { timeout: 30_000 });
+      expect(site.foreign()).toEqual([]);
+    } finally {
+      await site.close();
+    }
+  });
 });

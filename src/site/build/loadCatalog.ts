@@ -6,6 +6,7 @@ import { readFileSync } from 'node:fs';
 import { DuckDBInstance } from '@duckdb/node-api';
 import { catalogFiles, type CatalogFiles } from './catalogFiles.ts';
 import { normalizeMeta, type SiteMeta } from './siteMeta.ts';
+import { objectPagesMode, type ObjectPagesMode } from '../objectLink.ts';
 
 /** A catalog value as the pages see it. */
 export type CellValue = number | string | boolean | null;
@@ -23,6 +24,8 @@ export interface CatalogSummary {
 
 export interface SiteCatalog {
   files: CatalogFiles;
+  /** One static page per object, or the in-browser viewer (large catalogs). */
+  objectPages: ObjectPagesMode;
   meta: SiteMeta;
   /** Column names and DuckDB types, in file order. */
   columns: { name: string; type: string }[];
@@ -82,7 +85,8 @@ export async function readCatalog(files: CatalogFiles = catalogFiles()): Promise
       zMin: o!.z_min ?? null,
       zMax: o!.z_max ?? null,
     };
-    return { files, meta, columns: names.map((name, i) => ({ name, type: types[i]! })), rows, summary };
+    const objectPages = objectPagesMode(rows.length, process.env.CENSUS_OBJECT_PAGES);
+    return { files, objectPages, meta, columns: names.map((name, i) => ({ name, type: types[i]! })), rows, summary };
   } finally {
     con.closeSync();
     instance.closeSync();

@@ -41,7 +41,7 @@ const PERCENTILE = /_p(16|50|84)$/;
 const CANONICAL_INPUT =
   /^(z|(fwhm|flux|lum)_(halpha|hbeta|mgii|civ)|lam_l_(5100|3000|1350)|mu|log_mstar|sigma_star|av|balmer_decrement)$/;
 
-function groupOf(column: string, meta: SiteMeta): string {
+function groupOf(column: string, meta: Pick<SiteMeta, 'columns'>): string {
   const g = meta.columns[column]?.group;
   if (g) return g;
   if (column === 'id' || column === 'row') return 'key';
@@ -52,7 +52,7 @@ function groupOf(column: string, meta: SiteMeta): string {
 
 const isNum = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v);
 
-export function objectView(row: CatalogRow, columns: readonly string[], meta: SiteMeta): ObjectView {
+export function objectView(row: CatalogRow, columns: readonly string[], meta: Pick<SiteMeta, 'columns'>): ObjectView {
   const line = (column: string, spread = ''): ViewLine => ({
     column,
     label: columnLabel(column),

@@ -17,6 +17,7 @@ import {
 } from '../charts/index.ts';
 import type { ResultSet } from '../db/resultSet.ts';
 import { mountChart } from '../charts/mountChart.ts';
+import { objectHrefHere } from '../objectLink.ts';
 
 /** Columns the population charts read, when the catalog has them. */
 export const CHART_COLUMNS = [
@@ -81,7 +82,7 @@ export function drawPopulation(root: HTMLElement, rows: readonly ChartRow[], opt
       continue;
     }
     const key = mount.dataset.chart ?? 'chart';
-    mountChart(mount, el, { fileName: `census-${key}`, label: mount.dataset.label ?? key, base: options.base });
+    mountChart(mount, el, { fileName: `census-${key}`, label: mount.dataset.label ?? key, base: options.base, onOpen: (id) => location.assign(objectHrefHere(id)) });
     mount.dataset.drawn = String(rows.length);
   }
 }

@@ -49,4 +49,5 @@ ORDER BY z DESC`,
 /** The query the workspace opens with when the link carries none. */
 export const DEFAULT_QUERY = `SELECT id, z, log_mbh, log_lbol, log_edd_ratio, delta_log_mbh_local, flags
 FROM census
-ORDER BY z DESC`;
+ORDER BY z DESC
+LIMIT 1000`;

@@ -5,7 +5,7 @@
  * with textContent: catalog text is data, never markup.
  */
 import type { ResultSet } from '../db/resultSet.ts';
-import { objectSlug } from '../objectSlug.ts';
+import { objectHrefHere } from '../objectLink.ts';
 import { formatValue, isNumericType } from '../text/formatValue.ts';
 import { sortOrder, type SortDirection } from './sortOrder.ts';
 
@@ -130,7 +130,7 @@ export class ResultTable {
         if (numeric[c]) td.className = 'num';
         if (c === idCol && v !== null && v !== undefined) {
           const a = document.createElement('a');
-          a.href = `${this.options.base}object/${objectSlug(String(v))}/`;
+          a.href = objectHrefHere(String(v));
           a.textContent = String(v);
           td.append(a);
         } else {

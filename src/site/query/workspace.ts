@@ -67,6 +67,7 @@ export function startWorkspace(): void {
       csvButton.disabled = false;
       summary.textContent = `${rs.numRows.toLocaleString('en')} ${rs.numRows === 1 ? 'row' : 'rows'}, ${rs.names.length} ${rs.names.length === 1 ? 'column' : 'columns'} · ${ms < 1000 ? `${Math.round(ms)} ms` : `${(ms / 1000).toFixed(1)} s`}`;
       summary.dataset.rows = String(rs.numRows);
+      summary.dataset.ms = ms.toFixed(1);
       if (byReader) history.replaceState(null, '', hrefWithSql(location.href, editor.value));
       await redrawCharts(sql, rs, my);
     } catch (err) {
