@@ -35,7 +35,7 @@ const finiteOrNull = (x: number): number | null => (Number.isFinite(x) ? x : nul
  */
 export function deriveObject(inputs: ObjectInputs, settings: DeriveSettings, rng: Rng): DerivedObject {
   const plan = planObject(inputs, settings);
-  const scratch = createScratch(plan);
+  const scratch = createScratch(plan, settings);
   const nominal = new Float64Array(OUT_SIZE);
   evaluateChain(plan, settings, null, scratch, nominal, false);
 
@@ -68,13 +68,19 @@ export function deriveObject(inputs: ObjectInputs, settings: DeriveSettings, rng
   const draws = Math.max(1, Math.floor(settings.draws));
   const buf = drawBuffers(draws);
   const one = new Float64Array(OUT_SIZE);
+  const [bMbh, bLbol, bEdd, , bDelta] = buf as [Float64Array, Float64Array, Float64Array, Float64Array, Float64Array];
   let superEdd = 0;
   let above = 0;
   for (let k = 0; k < draws; k++) {
     evaluateChain(plan, settings, rng, scratch, one);
-    for (let j = 0; j < OUT_SIZE; j++) (buf[j] as Float64Array)[k] = one[j] as number;
-    if ((one[OUT.logEddRatio] as number) > 0) superEdd++;
-    if ((one[OUT.deltaLocal] as number) > 0) above++;
+    const edd = one[OUT.logEddRatio] as number;
+    const delta = one[OUT.deltaLocal] as number;
+    bMbh[k] = one[OUT.logMbh] as number;
+    bLbol[k] = one[OUT.logLbol] as number;
+    bEdd[k] = edd;
+    bDelta[k] = delta;
+    if (edd > 0) superEdd++;
+    if (delta > 0) above++;
   }
   const pct = (slot: number): Percentiles | null =>
     Number.isFinite(nominal[slot]) ? percentiles16_50_84(buf[slot] as Float64Array) : null;

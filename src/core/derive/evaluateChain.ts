@@ -21,10 +21,39 @@ export const OUT_SIZE = 5;
  */
 export interface ChainScratch {
   logL: Float64Array;
+  /** log10 of the Eddington luminosity per solar mass. */
+  logEddPerMsun: number;
+  /**
+   * The L_bol route as log L_bol = lbolA + lbolB · log L. Every bolometric method here is a
+   * power law in L (fixed corrections, Netzer 2019's c·L^d, Greene & Ho 2005 eq. 1 inverted
+   * times BC5100), hence linear in log L; the draws use this form and skip three log10 calls.
+   * NaN when the route is not linear (checked at a third point), so the draws call the route.
+   */
+  lbolA: number;
+  lbolB: number;
 }
 
-export function createScratch(plan: ObjectPlan): ChainScratch {
-  return { logL: new Float64Array(plan.sources.length).fill(NaN) };
+export function createScratch(plan: ObjectPlan, settings: DeriveSettings): ChainScratch {
+  let lbolA = NaN;
+  let lbolB = NaN;
+  if (plan.lbol) {
+    const f0 = lbolRoute(plan, settings, 40);
+    const f1 = lbolRoute(plan, settings, 41);
+    if (Math.abs(f0 + 5 * (f1 - f0) - lbolRoute(plan, settings, 45)) < 1e-9) {
+      lbolB = f1 - f0;
+      lbolA = f0 - 40 * lbolB;
+    }
+  }
+  return { logL: new Float64Array(plan.sources.length).fill(NaN), logEddPerMsun: Math.log10(settings.eddingtonPerMsun), lbolA, lbolB };
+}
+
+/** log10 L_bol from the corrected log10 luminosity of the plan's bolometric source. */
+function lbolRoute(plan: ObjectPlan, settings: DeriveSettings, logL: number): number {
+  const lbol = plan.lbol;
+  if (!lbol) return NaN;
+  return lbol.route === 'halpha'
+    ? logLbolFromHalpha(logL, settings.bc5100)
+    : logLbolFromContinuum(lbol.route, logL, { band: lbol.band, bc5100: settings.bc5100 });
 }
 
 /**
@@ -71,21 +100,19 @@ export function evaluateChain(
   }
 
   let logLbol = NaN;
-  const lbol = plan.lbol;
-  if (lbol) {
-    const l = logL[lbol.source] as number;
-    logLbol =
-      lbol.route === 'halpha'
-        ? logLbolFromHalpha(l, settings.bc5100)
-        : logLbolFromContinuum(lbol.route, l, { band: lbol.band, bc5100: settings.bc5100 });
+  if (plan.lbol) {
+    const l = logL[plan.lbol.source] as number;
+    logLbol = rng && !Number.isNaN(scratch.lbolB) ? scratch.lbolA + scratch.lbolB * l : lbolRoute(plan, settings, l);
   }
 
   out[OUT.logMbh] = logM;
   out[OUT.logLbol] = logLbol;
-  out[OUT.logEddRatio] = logLbol - Math.log10(settings.eddingtonPerMsun) - logM;
-  out[OUT.logMseed] = Number.isNaN(plan.dtSeedGyr)
-    ? NaN
-    : logSeedMassRequired(logM, plan.dtSeedGyr, settings.efficiency, settings.lambdaSeed, settings.dutyCycle);
+  out[OUT.logEddRatio] = logLbol - scratch.logEddPerMsun - logM;
+  // The seed mass is a monotone map of log M: the draws need only the nominal value (deriveObject maps the percentiles).
+  out[OUT.logMseed] =
+    rng || Number.isNaN(plan.dtSeedGyr)
+      ? NaN
+      : logSeedMassRequired(logM, plan.dtSeedGyr, settings.efficiency, settings.lambdaSeed, settings.dutyCycle);
 
   let delta = NaN;
   const local = plan.local;
