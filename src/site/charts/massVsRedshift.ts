@@ -56,7 +56,7 @@ export function massVsRedshift(rows: readonly CatalogRow[], options: MassVsRedsh
     ),
   ];
   const over: Plot.Markish[] = tracks.map((t) =>
-    Plot.text([t.points[0]!], { x: 'z', y: 'logM', text: () => `${t.seed} seed 10${superscript(Math.round(t.logMseed))} M☉`, textAnchor: 'start', dx: 4, dy: -10, fill: trackColour[t.seed], stroke: 'white', strokeWidth: 3, fontSize: 11, ...tag('growth track label') }),
+    Plot.text([t.points[0]!], { x: 'z', y: 'logM', text: () => `${t.seed} seed 10${superscript(Math.round(t.logMseed))} M☉`, textAnchor: 'start', dx: 6, dy: -13, fill: trackColour[t.seed], stroke: 'white', strokeWidth: 3, fontSize: 11, ...tag('growth track label') }),
   );
   const legend: LegendItem[] = tracks.map((t) => ({
     label: `Eddington-limited growth from a ${t.seed} seed (${t.seed === 'light' ? s.lightSeedMsun : s.heavySeedMsun} M☉ at z = ${s.zSeed})`,

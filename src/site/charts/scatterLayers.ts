@@ -99,7 +99,7 @@ function detectionMarks(points: readonly ChartPoint[], role: PointRole, opts: Sc
 function densityMarks(points: readonly ChartPoint[], opts: ScatterLayerOptions): Plot.Markish[] {
   const [nx, ny] = DENSITY_BINS;
   const detections = binGrid(points.filter((p) => !isLimit(p)), opts.xDomain, opts.yDomain, nx, ny);
-  // limits are binned on a coarser grid and drawn as one limit symbol per occupied cell
+  // limits are binned on a grid four times coarser and drawn as one limit symbol per occupied cell
   const marks: Plot.Markish[] = [
     Plot.rect(detections, { x1: 'x1', x2: 'x2', y1: 'y1', y2: 'y2', fill: 'count', inset: 0, ...tag('density'), title: (c: { count: number }) => `${c.count} objects` }),
   ];
@@ -112,8 +112,8 @@ function densityMarks(points: readonly ChartPoint[], opts: ScatterLayerOptions):
       points.filter((p) => p.xLimit === xl && p.yLimit === yl),
       opts.xDomain,
       opts.yDomain,
-      Math.round(nx / 2),
-      Math.round(ny / 2),
+      Math.round(nx / 4),
+      Math.round(ny / 4),
     ).map((c) => ({ x: (c.x1 + c.x2) / 2, y: (c.y1 + c.y2) / 2, count: c.count }));
     if (cells.length) {
       // a white halo keeps the limit symbols readable on dark cells
