@@ -4,7 +4,7 @@
  * with the arrow keys, and download the figure as SVG or PNG (made locally: the SVG is
  * serialised, the PNG drawn from it on an offscreen canvas at twice the size).
  */
-import { objectSlug } from '../objectSlug.ts';
+import { objectHref as linkHref, type ObjectPagesMode } from '../objectLink.ts';
 import type { ChartPoint } from './chartPoint.ts';
 import { chartPoints } from './chartPoints.ts';
 import { hoverText } from './scatterLayers.ts';
@@ -29,9 +29,17 @@ type PlotElement = (SVGSVGElement | HTMLElement) & {
 
 const SVG_NS = 'http://www.w3.org/2000/svg';
 
-/** The page of a catalog object. */
-export function objectHref(base: string, id: string): string {
-  return `${base.endsWith('/') ? base : base + '/'}object/${objectSlug(id)}/`;
+/**
+ * The page of a catalog object under `base`: `object/<slug>/`, or the viewer `object/?id=` when
+ * the build made one viewer page instead (see src/site/objectLink.ts; in the browser the mode
+ * defaults to the one the build wrote on <body>).
+ */
+export function objectHref(base: string, id: string, mode: ObjectPagesMode = pagesModeHere()): string {
+  return linkHref(base.endsWith('/') ? base : base + '/', id, mode);
+}
+
+function pagesModeHere(): ObjectPagesMode {
+  return typeof document !== 'undefined' && document.body?.dataset.objectPages === 'viewer' ? 'viewer' : 'static';
 }
 
 function svgText(chart: Element): string {

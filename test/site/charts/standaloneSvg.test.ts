@@ -26,5 +26,6 @@ describe('objectHref', () => {
   it('links to the object page under the base path', () => {
     expect(objectHref('/census/', 'CDW-00001')).toBe('/census/object/CDW-00001/');
     expect(objectHref('/', 'a b')).toMatch(/^\/object\/a_b-[0-9a-f]{8}\/$/);
+    expect(objectHref('/census/', 'a b', 'viewer')).toBe('/census/object/?id=a%20b');
   });
 });
