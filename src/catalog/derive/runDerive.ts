@@ -204,6 +204,7 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
       counts,
       paths,
       columns,
+      inputColumns: plan.canonical,
     });
     await writer.finish({ [METADATA_KEY]: catalogMetadataJson(metadata) });
     writer = null;

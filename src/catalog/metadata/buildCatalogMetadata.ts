@@ -20,6 +20,8 @@ export interface CatalogMetadataParts {
   paths: OutputPaths;
   /** The output columns (extra fields, such as value getters, are dropped). */
   columns: readonly ColumnDoc[];
+  /** How each canonical column was read: its file column and the unit it was read in. */
+  inputColumns: readonly { name: string; sourceName: string; unitIn?: string }[];
 }
 
 /** Flags the catalog build adds on top of deriveObject's. */
@@ -47,7 +49,12 @@ export function buildCatalogMetadata(p: CatalogMetadataParts): CatalogMetadata {
     format: METADATA_FORMAT,
     tool: { name: 'dawn-census', version: toolVersion() },
     ...described,
-    input: { file: path.basename(p.source.path), format: p.source.format, sha256: p.inputSha256 },
+    input: {
+      file: path.basename(p.source.path),
+      format: p.source.format,
+      sha256: p.inputSha256,
+      columns: p.inputColumns.map((c) => ({ name: c.name, source: c.sourceName, unit: c.unitIn ?? '' })),
+    },
     config: {
       file: config.configPath ? path.basename(config.configPath) : null,
       sha256: config.configText !== undefined ? sha256Text(config.configText) : null,

@@ -20,8 +20,12 @@ export interface CatalogMetadata {
   description?: string;
   licence?: string;
   citation?: string;
-  /** The input catalog: file name (no folder), format, SHA-256 of its bytes. */
-  input: { file: string; format: string; sha256: string };
+  /**
+   * The input catalog: file name (no folder), format, SHA-256 of its bytes, and for each
+   * canonical column the file column it was read from and the unit it was read in (from the
+   * file's metadata or the config; '' = canonical), so a reader can trace every value back.
+   */
+  input: { file: string; format: string; sha256: string; columns: { name: string; source: string; unit: string }[] };
   /** The config file, or null values when the defaults were used. */
   config: { file: string | null; sha256: string | null };
   settings: SettingsProvenance;

@@ -89,6 +89,12 @@ describe('runDerive', () => {
     expect(meta.files).toEqual({ catalog: 'cat.parquet', meta: 'cat.meta.json', rejections: 'cat.rejections.csv' });
     expect(meta.input.file).toBe('cat.csv');
     expect(meta.input.sha256).toMatch(/^[0-9a-f]{64}$/);
+    expect(meta.input.columns).toEqual([
+      { name: 'id', source: 'id', unit: '' },
+      { name: 'z', source: 'z', unit: '' },
+      { name: 'fwhm_halpha', source: 'fwhm_halpha', unit: '' },
+      { name: 'fwhm_halpha_err', source: 'fwhm_halpha_err', unit: '' },
+    ]);
     expect(meta.counts).toEqual({ rows: 5, derived: 3, flagged: 2, problems: 2 });
     expect(meta.settings.settings.draws).toBe(64);
     expect(meta.settings.cosmology.H0).toBe(67.66);
