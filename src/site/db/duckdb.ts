@@ -117,14 +117,33 @@ export async function queryCensus(sql: string): Promise<ResultSet> {
   const columns: unknown[][] = [];
   for (let c = 0; c < names.length; c++) {
     const vec = table.getChildAt(c);
-    const col: unknown[] = new Array(table.numRows);
-    if (vec) {
-      const hasNulls = vec.nullCount > 0;
-      for (let r = 0; r < table.numRows; r++) col[r] = hasNulls && !vec.isValid(r) ? null : plain(vec.get(r));
-    }
-    columns.push(col);
+    columns.push(vec ? columnValues(vec, table.numRows) : new Array<unknown>(table.numRows).fill(null));
   }
   return { names, types, columns, numRows: table.numRows };
+}
+
+interface ArrowVector {
+  nullCount: number;
+  isValid(i: number): boolean;
+  toArray(): unknown;
+}
+
+/** A column as plain values. Numeric columns come out of Arrow as one typed array (fast); nulls are patched in. */
+function columnValues(vec: ArrowVector, n: number): unknown[] {
+  const arr = vec.toArray();
+  let out: unknown[];
+  if (ArrayBuffer.isView(arr)) {
+    const typed = arr as unknown as ArrayLike<number | bigint>;
+    out = new Array<unknown>(n);
+    for (let r = 0; r < n; r++) {
+      const v = typed[r]!;
+      out[r] = typeof v === 'bigint' ? Number(v) : v;
+    }
+    if (vec.nullCount > 0) for (let r = 0; r < n; r++) if (!vec.isValid(r)) out[r] = null;
+  } else {
+    out = Array.from(arr as ArrayLike<unknown>, plain);
+  }
+  return out;
 }
 
 function plain(v: unknown): unknown {

@@ -5,17 +5,23 @@
 import { queryCensus, TABLE, CensusDbError } from '../db/duckdb.ts';
 import { sqlIdent } from '../db/sqlIdent.ts';
 import { catalogColumns } from './catalogColumns.ts';
-import { CHART_COLUMNS, chartRows, drawPopulation } from './populationCharts.ts';
+import { CHART_COLUMNS, chartRows, DENSE_ABOVE, DENSE_CHART_COLUMNS, drawPopulation } from './populationCharts.ts';
 
 export async function mountCatalogCharts(root: HTMLElement): Promise<void> {
   const base = document.body.dataset.base ?? '/';
   const highlight = root.dataset.highlight;
   const settings = root.dataset.settings ? (JSON.parse(root.dataset.settings) as Record<string, unknown>) : undefined;
   try {
+    performance.mark('census:charts-start');
     const have = await catalogColumns();
-    const cols = CHART_COLUMNS.filter((c) => have.includes(c));
+    performance.mark('census:db-ready');
+    const objects = Number(root.dataset.objects ?? '0');
+    const wanted: readonly string[] = objects > DENSE_ABOVE ? DENSE_CHART_COLUMNS : CHART_COLUMNS;
+    const cols = wanted.filter((c) => have.includes(c));
     const rs = await queryCensus(`SELECT ${cols.map(sqlIdent).join(', ')} FROM ${TABLE}`);
-    drawPopulation(root, chartRows(rs), { base, settings, highlightIds: highlight ? [highlight] : undefined });
+    performance.mark('census:rows');
+    await drawPopulation(root, chartRows(rs), { base, settings, highlightIds: highlight ? [highlight] : undefined });
+    performance.mark('census:drawn');
   } catch (err) {
     // The status line above the charts says what went wrong with the database; say it here too.
     const message = err instanceof CensusDbError ? err.message : `The charts could not be drawn: ${String(err)}`;

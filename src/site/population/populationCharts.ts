@@ -26,6 +26,18 @@ export const CHART_COLUMNS = [
   'fwhm_hbeta_err', 'log_lum_hbeta', 'flux_halpha_is_limit', 'flags',
 ] as const;
 
+/**
+ * What the charts read when the population is drawn as a density (more than
+ * DENSE_ABOVE objects): no error bars are drawn then, so their columns are not fetched.
+ */
+export const DENSE_CHART_COLUMNS = [
+  'id', 'z', 'log_mstar', 'log_mbh', 'log_lbol', 'log_edd_ratio', 'fwhm_halpha', 'log_lum_halpha', 'fwhm_hbeta', 'log_lum_hbeta',
+  'flux_halpha_is_limit', 'flags',
+] as const;
+
+/** Above this many objects the charts draw densities (the charts' own default threshold). */
+export const DENSE_ABOVE = 5000;
+
 /** Options of one drawing of the population. */
 export interface DrawOptions {
   /** Ids drawn on top and emphasised (the object page's object). */
@@ -64,12 +76,17 @@ export const CHART_FUNCTIONS: Record<string, ChartFn> = {
   'edd-hist': (rows, o) => eddingtonRatioDistribution(rows, o),
 };
 
-/** Draws every `[data-chart]` mount inside `root` from `rows`. */
-export function drawPopulation(root: HTMLElement, rows: readonly ChartRow[], options: DrawOptions): void {
+/**
+ * Draws every `[data-chart]` mount inside `root` from `rows`, one chart per animation frame
+ * so the first appears as soon as it is ready.
+ */
+export async function drawPopulation(root: HTMLElement, rows: readonly ChartRow[], options: DrawOptions): Promise<void> {
   const settings = chartSettings(options.settings);
   for (const mount of root.querySelectorAll<HTMLElement>('[data-chart]')) {
     const fn = CHART_FUNCTIONS[mount.dataset.chart ?? ''];
     if (!fn) continue;
+    // Let the browser paint the chart before the next one (a frame, then a task).
+    await new Promise((resolve) => requestAnimationFrame(() => setTimeout(resolve, 0)));
     const width = Math.max(320, Math.min(720, Math.floor(mount.clientWidth || 600)));
     let el: SVGSVGElement | HTMLElement;
     try {
@@ -84,5 +101,6 @@ export function drawPopulation(root: HTMLElement, rows: readonly ChartRow[], opt
     const key = mount.dataset.chart ?? 'chart';
     mountChart(mount, el, { fileName: `census-${key}`, label: mount.dataset.label ?? key, base: options.base, onOpen: (id) => location.assign(objectHrefHere(id)) });
     mount.dataset.drawn = String(rows.length);
+    performance.mark(`census:chart:${key}`);
   }
 }

@@ -106,7 +106,7 @@ export function startWorkspace(): void {
         // Not a plain SELECT (e.g. DESCRIBE): draw what the result itself has.
       }
     }
-    drawPopulation(charts, rows, { base, settings: charts.dataset.settings ? JSON.parse(charts.dataset.settings) : undefined });
+    await drawPopulation(charts, rows, { base, settings: charts.dataset.settings ? JSON.parse(charts.dataset.settings) : undefined });
   }
 
   attachEditorKeys(editor, () => void run());
