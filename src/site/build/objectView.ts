@@ -20,6 +20,8 @@ export interface ViewLine {
   description: string;
   /** True when the value is an upper limit. */
   limit?: boolean;
+  /** True when the value is a number (right-aligned). */
+  numeric: boolean;
 }
 
 export interface ObjectView {
@@ -60,6 +62,7 @@ export function objectView(row: CatalogRow, columns: readonly string[], meta: Pi
     spread,
     unit: unitText(meta.columns[column]?.unit),
     description: meta.columns[column]?.description ?? '',
+    numeric: typeof row[column] === 'number',
   });
 
   const inputs: ViewLine[] = [];

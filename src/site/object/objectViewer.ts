@@ -25,7 +25,8 @@ function valueTable(lines: ViewLine[], spreadHeading: string): HTMLElement {
   const table = document.createElement('table');
   table.className = 'data values';
   const head = document.createElement('tr');
-  for (const [h, num] of [['Quantity', false], ['Column', false], ['Value', true], [spreadHeading, true], ['Unit', false]] as const) {
+  const heads: [string, boolean][] = [['Quantity', false], ['Column', false], ['Value', true], ...(spreadHeading ? [[spreadHeading, true] as [string, boolean]] : []), ['Unit', false]];
+  for (const [h, num] of heads) {
     const th = text('th', h, num ? 'num' : undefined);
     th.setAttribute('scope', 'col');
     head.append(th);
@@ -40,7 +41,9 @@ function valueTable(lines: ViewLine[], spreadHeading: string): HTMLElement {
     th.title = l.description;
     const code = document.createElement('td');
     code.append(text('code', l.column));
-    tr.append(th, code, text('td', l.limit ? `< ${l.value} (upper limit)` : l.value, 'num'), text('td', l.spread, 'num'), text('td', l.unit));
+    tr.append(th, code, text('td', l.limit ? `< ${l.value} (upper limit)` : l.value, l.numeric ? 'num' : undefined));
+    if (spreadHeading) tr.append(text('td', l.spread, 'num'));
+    tr.append(text('td', l.unit));
     body.append(tr);
   }
   wrap.append(table);

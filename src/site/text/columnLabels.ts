@@ -20,7 +20,7 @@ const LABELS: Record<string, string> = {
   mbh_method: 'Mass from',
   log_lbol: 'Bolometric luminosity',
   lbol_method: 'Bolometric correction',
-  log_edd_ratio: 'Eddington ratio',
+  log_edd_ratio: 'Eddington ratio (log)',
   p_super_eddington: 'Probability above Eddington',
   log_mseed: 'Required seed mass',
   lambda_req_light: 'Eddington ratio a light seed needs',
