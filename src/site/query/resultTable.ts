@@ -132,6 +132,7 @@ export class ResultTable {
           const a = document.createElement('a');
           a.href = objectHrefHere(String(v));
           a.textContent = String(v);
+          td.className = 'id-cell';
           td.append(a);
         } else {
           td.textContent = formatValue(rs.names[c]!, v);

@@ -2,7 +2,10 @@
  * The catalog's flags in words. Flags are short codes in the comma-separated `flags` column;
  * a reader should not need the code book to know what one means.
  */
-const FLAGS: Record<string, string> = {
+import { FLAG_DESCRIPTIONS } from '../../core/derive/flags.ts';
+
+/** Words for flags the core does not describe (older catalogs). The core's own descriptions come first. */
+const FALLBACK: Record<string, string> = {
   invalid_input: 'Some inputs failed validation, so some quantities could not be derived.',
   mbh_upper_limit: 'The line flux is an upper limit, so the black-hole mass is an upper limit too.',
   no_host_mass: 'No host stellar mass (or velocity dispersion) is given, so there is no offset from the local relation.',
@@ -23,5 +26,5 @@ export function splitFlags(cell: unknown): string[] {
 
 /** A sentence for one flag code; unknown codes say so rather than guess. */
 export function flagText(code: string): string {
-  return FLAGS[code] ?? 'No description is recorded for this flag.';
+  return (FLAG_DESCRIPTIONS as Record<string, string>)[code] ?? FALLBACK[code] ?? 'No description is recorded for this flag.';
 }

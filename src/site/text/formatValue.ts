@@ -14,6 +14,7 @@ export function formatValue(column: string, value: unknown): string {
   if (value === null || value === undefined || value === '') return MISSING;
   if (typeof value === 'boolean') return value ? 'yes' : 'no';
   if (typeof value === 'bigint') return value.toString();
+  if (typeof value === 'string' && column.toLowerCase() === 'flags') return value.split(',').filter(Boolean).join(', ');
   if (typeof value !== 'number') return String(value);
   if (!Number.isFinite(value)) return Number.isNaN(value) ? MISSING : value > 0 ? '∞' : '−∞';
   const c = column.toLowerCase();

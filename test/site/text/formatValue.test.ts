@@ -28,3 +28,9 @@ describe('formatValue', () => {
     expect(isNumericType('Utf8')).toBe(false);
   });
 });
+
+describe('formatValue of flags', () => {
+  it('spaces the comma-separated flags so they wrap', () => {
+    expect(formatValue('flags', 'a,b,,c')).toBe('a, b, c');
+  });
+});
