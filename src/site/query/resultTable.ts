@@ -79,7 +79,7 @@ export class ResultTable {
     this.sort = { column, direction };
     this.order = sortOrder(rs.columns[column]!, direction);
     this.page = 0;
-    for (const [i, th] of Array.from(this.table.tHead!.rows[0]!.cells).entries()) {
+    for (const [i, th] of Array.from(this.table.querySelectorAll('thead th')).entries()) {
       th.setAttribute('aria-sort', i === column ? direction : 'none');
     }
     this.renderBody();
@@ -142,7 +142,7 @@ export class ResultTable {
       }
       tbody.append(tr);
     }
-    this.table.tBodies[0]!.replaceWith(tbody);
+    this.table.querySelector('tbody')!.replaceWith(tbody);
     const n = rs.numRows;
     this.pager.hidden = n <= this.pageSize;
     this.prev.disabled = this.page === 0;
