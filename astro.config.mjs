@@ -1,5 +1,17 @@
 // @ts-check
 import { defineConfig } from 'astro/config';
+import { rm } from 'node:fs/promises';
+import { fileURLToPath } from 'node:url';
+
+/** Removes Astro's empty content-collection modules from the published folder (the site has no collections). */
+const tidyOutput = {
+  name: 'census-tidy-output',
+  hooks: {
+    'astro:build:done': async ({ dir }) => {
+      for (const f of ['content-assets.mjs', 'content-modules.mjs']) await rm(fileURLToPath(new URL(f, dir)), { force: true });
+    },
+  },
+};
 
 // The site is built for one derived catalog. Which one, and under which sub-path it is
 // deployed, come from the environment so that `npm start`, the end-to-end tests and a
@@ -7,7 +19,11 @@ import { defineConfig } from 'astro/config';
 //   CENSUS_CATALOG  path of the derived Parquet file (its .meta.json sidecar sits beside it)
 //   CENSUS_BASE     base path of the deployment, e.g. /census/ (default /)
 //   CENSUS_OUT_DIR  output directory (default dist)
-const base = process.env.CENSUS_BASE ?? '/';
+//   CENSUS_OBJECT_PAGES  'static' (one page per object) or 'viewer' (one in-browser page for all);
+//                   by default static up to 20,000 objects (src/site/objectLink.ts)
+let base = (process.env.CENSUS_BASE ?? '/').trim() || '/';
+if (!base.startsWith('/')) base = '/' + base;
+if (!base.endsWith('/')) base += '/';
 
 export default defineConfig({
   base,
@@ -16,6 +32,7 @@ export default defineConfig({
   trailingSlash: 'ignore',
   build: { format: 'directory' },
   devToolbar: { enabled: false },
+  integrations: [tidyOutput],
   vite: {
     // DuckDB-WASM ships its own worker and wasm bundles; Vite must not pre-bundle it.
     optimizeDeps: { exclude: ['@duckdb/duckdb-wasm'] },
