@@ -93,7 +93,7 @@ export async function serveStatic(root: string, base = '/', port = 0): Promise<S
         headers['content-range'] = `bytes ${start}-${end}/${size}`;
         headers['content-length'] = end - start + 1;
         res.writeHead(206, headers);
-        log.push({ path: url.pathname, bytes: end - start + 1 });
+        log.push({ path: url.pathname, bytes: req.method === 'HEAD' ? 0 : end - start + 1 });
         if (req.method === 'HEAD') return void res.end();
         createReadStream(target, { start, end }).pipe(res);
         return;
