@@ -5,6 +5,8 @@
  * The sidecar records the settings (DeriveSettings) and, beside them, the records behind each
  * id (src/catalog/metadata/settingsProvenance.ts); this reads either layout.
  */
+import { BC5100_RICHARDS06, BC_SHEN11, NETZER19 } from '../../core/bolometric/index.ts';
+import { LOCAL_RELATIONS } from '../../core/local/index.ts';
 import type { SiteMeta } from './siteMeta.ts';
 
 type Rec = Record<string, unknown>;
@@ -36,7 +38,7 @@ export interface MethodsView {
   bolometric: { id: string; params: NamedValue[]; reference?: string };
   eddington: NamedValue[];
   growth: { params: NamedValue[]; formula?: string; reference?: string };
-  local: { id: string; reference?: string; params: NamedValue[] };
+  local: { id: string; label?: string; formula?: string; reference?: string; params: NamedValue[] };
   dust: { id: string; params: NamedValue[]; reference?: string };
   monteCarlo: NamedValue[];
   constants: NamedValue[];
@@ -59,6 +61,15 @@ export function calibrationFormula(c: Rec): string | undefined {
   return `log(M_BH/M☉) = ${eps}${a.toFixed(3)} + ${b} · log(${L} / 10^${p} erg s⁻¹) + ${cc} · log(FWHM / 1000 km s⁻¹)`;
 }
 
+const LOCAL_X: Record<string, string> = { logMstar: 'log(M*/M☉)', logMbulge: 'log(M_bulge/M☉)', logSigma: 'log(σ*/km s⁻¹)' };
+
+/** 'log M_BH = a + b (x − pivot)' from a local relation record. */
+export function localFormula(r: Rec): string | undefined {
+  if (typeof r.a !== 'number' || typeof r.b !== 'number' || typeof r.pivot !== 'number') return undefined;
+  const x = LOCAL_X[String(r.x)] ?? 'x';
+  return `log(M_BH/M☉) = ${r.a.toFixed(3)} + ${r.b} · (${x} − ${Number(r.pivot.toFixed(3))})`;
+}
+
 function values(r: unknown, skip: string[] = []): NamedValue[] {
   if (!isRec(r)) return [];
   const out: NamedValue[] = [];
@@ -69,6 +80,25 @@ function values(r: unknown, skip: string[] = []): NamedValue[] {
     else if (Array.isArray(v) && v.every((x) => typeof x !== 'object')) out.push({ name: k, value: v.join(', ') });
   }
   return out;
+}
+
+/** What each bolometric method does, in words, and the record its correction comes from. */
+export const BOLOMETRIC_METHODS: Record<string, { text: string; reference: string }> = {
+  halpha_gh05_bc5100: {
+    text: 'The broad Hα luminosity gives the 5100 Å continuum (Greene & Ho 2005, ApJ 630, 122, eq. 1, inverted), multiplied by a fixed bolometric correction BC5100.',
+    reference: BC5100_RICHARDS06.reference,
+  },
+  bc5100: { text: 'The measured 5100 Å continuum multiplied by a fixed bolometric correction BC5100.', reference: BC_SHEN11.l5100.reference },
+  bc3000: { text: `The measured 3000 Å continuum multiplied by a fixed bolometric correction (${BC_SHEN11.l3000.bc}).`, reference: BC_SHEN11.l3000.reference },
+  bc1350: { text: `The measured 1350 Å continuum multiplied by a fixed bolometric correction (${BC_SHEN11.l1350.bc}).`, reference: BC_SHEN11.l1350.reference },
+  netzer19: { text: 'Luminosity-dependent bolometric corrections k = c (λL_λ / 10^42 erg s⁻¹)^d, from the first continuum present (5100, 3000, 1350 Å).', reference: NETZER19.l5100.reference },
+};
+
+/** The local relation's record: from the sidecar when it recorded one, else the tool's own record of that id. */
+function localRecord(id: string, recorded: Rec): Rec {
+  if (str(recorded.reference)) return recorded;
+  const known = (LOCAL_RELATIONS as Record<string, unknown>)[id];
+  return isRec(known) ? known : recorded;
 }
 
 export function methodsView(meta: SiteMeta): MethodsView {
@@ -108,7 +138,7 @@ export function methodsView(meta: SiteMeta): MethodsView {
   const bolRec: Rec = isRec(prov.bolometric) ? prov.bolometric : isRec(s.bolometric) ? s.bolometric : {};
   const edd: Rec = isRec(prov.eddington) ? prov.eddington : {};
   const growthRec: Rec = isRec(prov.growth) ? prov.growth : {};
-  const localRec: Rec = isRec(prov.localRelation) ? prov.localRelation : isRec(s.localRelation) ? s.localRelation : {};
+  const localRec: Rec = localRecord(id(s.localRelation), isRec(prov.localRelation) ? prov.localRelation : isRec(s.localRelation) ? s.localRelation : {});
   const dustRec: Rec = isRec(prov.dustCurve) ? prov.dustCurve : isRec(s.dustCurve) ? s.dustCurve : {};
   const pick = (...keys: string[]): NamedValue[] =>
     keys.filter((k) => s[k] !== undefined && !isRec(s[k])).map((k) => ({ name: k, value: Array.isArray(s[k]) ? (s[k] as unknown[]).join(', ') : String(s[k]) }));
@@ -117,7 +147,11 @@ export function methodsView(meta: SiteMeta): MethodsView {
     cosmology,
     calibrations,
     linePriority: Array.isArray(s.linePriority) ? s.linePriority.map(String) : [],
-    bolometric: { id: id(s.bolometric) || id(bolRec), params: [...pick('bc5100'), ...values(bolRec, ['id', 'reference'])], reference: str(bolRec.reference) },
+    bolometric: {
+      id: id(s.bolometric) || id(bolRec),
+      params: [...pick('bc5100'), ...values(bolRec, ['id', 'reference'])],
+      reference: str(bolRec.reference) ?? BOLOMETRIC_METHODS[id(s.bolometric) || id(bolRec)]?.reference,
+    },
     eddington: [
       ...(s.eddingtonPerMsun !== undefined ? [{ name: 'L_Edd per solar mass', value: String(s.eddingtonPerMsun), unit: 'erg/s', reference: str(edd.reference) }] : []),
     ],
@@ -126,7 +160,13 @@ export function methodsView(meta: SiteMeta): MethodsView {
       formula: str(growthRec.formula),
       reference: str(growthRec.reference),
     },
-    local: { id: id(s.localRelation) || id(localRec), reference: str(localRec.reference), params: values(localRec, ['id', 'reference', 'label']) },
+    local: {
+      id: id(s.localRelation) || id(localRec),
+      label: str(localRec.label),
+      formula: localFormula(localRec),
+      reference: str(localRec.reference),
+      params: values(localRec, ['id', 'reference', 'label', 'notes', 'x', 'a', 'b', 'pivot', 'scatterProvenance']),
+    },
     dust: { id: id(s.dustCurve) || id(dustRec), params: [...pick('intrinsicBalmer'), ...values(dustRec, ['id', 'reference', 'name', 'label'])], reference: str(dustRec.reference) },
     monteCarlo: pick('draws', 'seed'),
     constants: values(prov.constants ?? s.constants),

@@ -1,0 +1,45 @@
+import { describe, expect, it } from 'vitest';
+import { calibrationFormula, localFormula, methodsView } from '../../../src/site/build/methodsView.ts';
+import { normalizeMeta } from '../../../src/site/build/siteMeta.ts';
+
+// A sidecar in the shape the CLI writes (src/catalog/metadata/settingsProvenance.ts): the settings, and the records behind each id.
+const sidecar = {
+  title: 'T',
+  settings: {
+    settings: { cosmology: 'planck18', calibrations: { halpha: 'rv15_halpha' }, linePriority: ['halpha'], bolometric: 'halpha_gh05_bc5100', bc5100: 10.33, eddingtonPerMsun: 1.26e38, efficiency: 0.1, zSeed: 20, localRelation: 'rv15_agn', dustCurve: 'calzetti00', intrinsicBalmer: 2.86, draws: 2000, seed: 1 },
+    cosmology: { id: 'planck18', name: 'Planck18', H0: 67.66, reference: 'Planck Collaboration 2020' },
+    calibrations: { halpha: { id: 'rv15_halpha', line: 'halpha', logEps: 0.0314, a: 6.57, b: 0.47, c: 2.06, luminosity: 'line', logLpivot: 42, scatterDex: 0.4, reference: 'RV15 eq. 5' } },
+    eddington: { lEddPerMsun: 1.26e38, reference: 'Shen 2011' },
+    growth: { formula: 'M(t) = …', reference: 'Salpeter 1964', tEddGyr: 0.45 },
+    constants: { speedOfLight: { value: 29979245800, unit: 'cm s^-1', reference: 'SI' } },
+  },
+};
+
+describe('methodsView', () => {
+  const m = methodsView(normalizeMeta(sidecar));
+
+  it('writes each calibration as a formula from its coefficients, with scatter and reference', () => {
+    expect(m.calibrations).toHaveLength(1);
+    expect(m.calibrations[0]).toMatchObject({ line: 'halpha', id: 'rv15_halpha', scatter: '0.4', reference: 'RV15 eq. 5' });
+    expect(m.calibrations[0]!.formula).toBe('log(M_BH/M☉) = 0.031 + 6.570 + 0.47 · log(L_line / 10^42 erg s⁻¹) + 2.06 · log(FWHM / 1000 km s⁻¹)');
+  });
+
+  it('reads the cosmology, the Eddington luminosity, the growth model, the Monte Carlo settings and the constants', () => {
+    expect(m.cosmology).toMatchObject({ id: 'planck18', name: 'Planck18', reference: 'Planck Collaboration 2020' });
+    expect(m.eddington[0]).toMatchObject({ value: '1.26e+38', reference: 'Shen 2011' });
+    expect(m.growth.reference).toBe('Salpeter 1964');
+    expect(m.monteCarlo).toEqual([{ name: 'draws', value: '2000' }, { name: 'seed', value: '1' }]);
+    expect(m.constants[0]).toMatchObject({ name: 'speedOfLight', unit: 'cm s^-1' });
+  });
+
+  it('fills the local relation and the bolometric reference from the tool records when the sidecar names only the id', () => {
+    expect(m.local.reference).toMatch(/Reines & Volonteri 2015/);
+    expect(m.local.formula).toBe('log(M_BH/M☉) = 7.450 + 1.05 · (log(M*/M☉) − 11)');
+    expect(m.bolometric.reference).toMatch(/Richards et al. 2006/);
+  });
+
+  it('gives no formula for records without coefficients', () => {
+    expect(calibrationFormula({ id: 'x' })).toBeUndefined();
+    expect(localFormula({})).toBeUndefined();
+  });
+});
