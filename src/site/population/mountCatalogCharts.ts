@@ -2,7 +2,7 @@
  * Draws the population charts of a page from the whole catalog (landing and object pages):
  * asks DuckDB-WASM for the chart columns the catalog has, then hands the rows to the charts.
  */
-import { queryCensus, TABLE, CensusDbError } from '../db/duckdb.ts';
+import { connection, queryCensus, TABLE, CensusDbError } from '../db/duckdb.ts';
 import { sqlIdent } from '../db/sqlIdent.ts';
 import { catalogColumns } from './catalogColumns.ts';
 import { CHART_COLUMNS, chartRows, DENSE_ABOVE, DENSE_CHART_COLUMNS, drawPopulation } from './populationCharts.ts';
@@ -13,7 +13,9 @@ export async function mountCatalogCharts(root: HTMLElement): Promise<void> {
   const settings = root.dataset.settings ? (JSON.parse(root.dataset.settings) as Record<string, unknown>) : undefined;
   try {
     performance.mark('census:charts-start');
-    const have = await catalogColumns();
+    // The build wrote the catalog's columns on the mount; ask DuckDB only when it did not.
+    const have = root.dataset.columns ? (JSON.parse(root.dataset.columns) as string[]) : await catalogColumns();
+    await connection();
     performance.mark('census:db-ready');
     const objects = Number(root.dataset.objects ?? '0');
     const wanted: readonly string[] = objects > DENSE_ABOVE ? DENSE_CHART_COLUMNS : CHART_COLUMNS;

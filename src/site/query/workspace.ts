@@ -90,7 +90,7 @@ export function startWorkspace(): void {
     }
     chartNote.hidden = true;
     charts.hidden = false;
-    const have = await catalogColumns();
+    const have = charts.dataset.columns ? (JSON.parse(charts.dataset.columns) as string[]) : await catalogColumns();
     const wanted = CHART_COLUMNS.filter((c) => have.includes(c));
     let rows = chartRows(rs);
     if (!wanted.every((c) => rs.names.includes(c))) {
