@@ -56,4 +56,16 @@ describe('deployment', () => {
       await site.close();
     }
   });
+
+  it('says plainly that the catalog file is damaged when it is not Parquet', async () => {
+    const site = await openSite(browser, inject('corruptUrl'));
+    try {
+      const { page } = site;
+      await page.goto(inject('corruptUrl'));
+      await page.waitForFunction(() => document.querySelector('[data-db-status]')?.getAttribute('data-kind') === 'error', undefined, { timeout: 30_000 });
+      await expect(page.locator('[data-db-status]').textContent()).resolves.toMatch(/catalog file .*data\/catalog\.parquet.* is not a readable Parquet file/);
+    } finally {
+      await site.close();
+    }
+  });
 });

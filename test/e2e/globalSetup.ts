@@ -24,6 +24,8 @@ declare module 'vitest' {
     hostileUrl: string;
     /** The root build with data/catalog.parquet removed. */
     missingUrl: string;
+    /** The root build with data/catalog.parquet replaced by bytes that are not Parquet. */
+    corruptUrl: string;
     /** The demo catalog's Parquet file (the one copied into the site). */
     demoParquet: string;
     /** The hostile catalog's Parquet file. */
@@ -80,6 +82,9 @@ export async function setup(project: TestProject): Promise<void> {
   build(hostileParquet, '/', hostileDist);
   cpSync(rootDist, missingDist, { recursive: true });
   rmSync(join(missingDist, 'data/catalog.parquet'));
+  const corruptDist = join(outDir, 'site-corrupt');
+  cpSync(missingDist, corruptDist, { recursive: true });
+  writeFileSync(join(corruptDist, 'data/catalog.parquet'), 'PAR1 this is not a Parquet file, only its first four bytes are right. '.repeat(40));
 
   const serve = async (dist: string, base: string) => {
     const s = await serveStatic(dist, base);
@@ -90,6 +95,7 @@ export async function setup(project: TestProject): Promise<void> {
   project.provide('subUrl', await serve(subDist, '/census/'));
   project.provide('hostileUrl', await serve(hostileDist, '/'));
   project.provide('missingUrl', await serve(missingDist, '/'));
+  project.provide('corruptUrl', await serve(corruptDist, '/'));
   project.provide('demoParquet', demoParquet);
   project.provide('hostileParquet', hostileParquet);
 }
