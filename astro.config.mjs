@@ -4,6 +4,7 @@ import { rm } from 'node:fs/promises';
 import { fileURLToPath } from 'node:url';
 
 /** Removes Astro's empty content-collection modules from the published folder (the site has no collections). */
+/** @type {import('astro').AstroIntegration} */
 const tidyOutput = {
   name: 'census-tidy-output',
   hooks: {
