@@ -22,6 +22,12 @@ describe('SQL workspace', () => {
     try {
       const { page } = site;
       await page.goto(new URL('query/', inject('siteUrl')).href);
+      // Tab in the editor inserts two spaces instead of leaving it.
+      await page.locator('#sql').fill('SELECT');
+      await page.locator('#sql').press('End');
+      await page.locator('#sql').press('Tab');
+      await expect(page.locator('#sql').inputValue()).resolves.toBe('SELECT  ');
+      await expect(page.evaluate(() => document.activeElement?.id)).resolves.toBe('sql');
       await page.locator('#sql').fill(SQL);
       await page.locator('#sql').press('Control+Enter');
       await page.waitForFunction((n) => document.querySelector('[data-result-summary]')?.getAttribute('data-rows') === String(n), rows.length, { timeout: 30_000 });

@@ -20,6 +20,8 @@ export interface CatalogSummary {
   flagged: number;
   zMin: number | null;
   zMax: number | null;
+  /** How many objects carry each flag, most frequent first. */
+  flagCounts: { flag: string; count: number }[];
 }
 
 export interface SiteCatalog {
@@ -78,12 +80,21 @@ export async function readCatalog(files: CatalogFiles = catalogFiles()): Promise
        FROM ${src}`,
     );
     const [o] = s.getRowObjectsJS() as Record<string, number | null>[];
+    const flagCounts = has('flags')
+      ? ((
+          await con.runAndReadAll(
+            `SELECT trim(f) AS flag, count(*)::DOUBLE AS count FROM (SELECT unnest(string_split(flags, ',')) AS f FROM ${src})
+             WHERE trim(f) <> '' GROUP BY flag ORDER BY count DESC, flag`,
+          )
+        ).getRowObjectsJS() as { flag: string; count: number }[])
+      : [];
     const summary: CatalogSummary = {
       objects: Number(o!.objects),
       derived: Number(o!.derived),
       flagged: Number(o!.flagged),
       zMin: o!.z_min ?? null,
       zMax: o!.z_max ?? null,
+      flagCounts: flagCounts.map((f) => ({ flag: String(f.flag), count: Number(f.count) })),
     };
     const objectPages = objectPagesMode(rows.length, process.env.CENSUS_OBJECT_PAGES);
     return { files, objectPages, meta, columns: names.map((name, i) => ({ name, type: types[i]! })), rows, summary };

@@ -28,6 +28,11 @@ describe('reading the catalog at build time', () => {
     // The fixture flags rows 3, 7, 11 (no host mass) and 2, 7 (out of range): four distinct rows; every row has a mass.
     expect(cat.summary).toMatchObject({ objects: 12, derived: 12, flagged: 4 });
     expect(cat.summary.zMin).toBeLessThan(cat.summary.zMax!);
+    // no_host_mass on rows 3, 7, 11; calibration_out_of_range on rows 2, 7.
+    expect(cat.summary.flagCounts).toEqual([
+      { flag: 'no_host_mass', count: 3 },
+      { flag: 'calibration_out_of_range', count: 2 },
+    ]);
   });
 
   it('writes the CSV download with a header and every row', async () => {
