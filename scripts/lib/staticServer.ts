@@ -70,6 +70,16 @@ export async function serveStatic(root: string, base = '/', port = 0): Promise<S
         }
       }
       if (!info) {
+        // The site's own 404 page, as static hosts serve it.
+        const page = join(root, '404.html');
+        const custom = await stat(page).catch(() => null);
+        if (custom?.isFile()) {
+          res.writeHead(404, { 'content-type': MIME['.html']!, 'content-length': custom.size });
+          log.push({ path: url.pathname, bytes: req.method === 'HEAD' ? 0 : custom.size });
+          if (req.method === 'HEAD') return void res.end();
+          createReadStream(page).pipe(res);
+          return;
+        }
         res.writeHead(404, { 'content-type': 'text/plain' }).end('not found');
         return;
       }
