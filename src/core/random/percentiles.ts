@@ -2,15 +2,19 @@ import type { Percentiles } from '../derive/types.ts';
 import { lerp } from './quantile.ts';
 import { minOf } from './minOf.ts';
 import { selectInPlace } from './selectInPlace.ts';
+import { binnedPercentiles } from './binnedPercentiles.ts';
 
 /**
  * 16th, 50th and 84th percentiles (the median and ±1σ of a normal) of `values`, each as
  * {@link quantile} (numpy 'linear'). Selects the median over the whole array, then the 16th
  * only below it and the 84th only above it. REORDERS `values` in place; no NaN; n ≥ 1.
+ * Monte Carlo samples take the faster counting path of {@link binnedPercentiles} (same result).
  */
 export function percentiles16_50_84(values: Float64Array): Percentiles {
   const n = values.length;
   if (n === 0) throw new RangeError('percentiles of an empty array');
+  const counted = binnedPercentiles(values);
+  if (counted) return counted;
   const h50 = (n - 1) * 0.5;
   const k50 = Math.floor(h50);
   selectInPlace(values, k50);

@@ -1,0 +1,104 @@
+import type { Percentiles } from '../derive/types.ts';
+import { lerp } from './quantile.ts';
+
+/** Bins of the counting pass; the central bins of 2000 normal draws then hold ~20 values each. */
+const NBINS = 512;
+/** A needed bin holding more values than this (a range stretched by outliers) sends the caller back to selection. */
+const MAX_IN_BIN = 512;
+const PROBS = [0.16, 0.5, 0.84] as const;
+
+const counts = new Int32Array(NBINS);
+const slotOfBin = new Int8Array(NBINS);
+let gathered = new Float64Array(6 * MAX_IN_BIN);
+
+/**
+ * The 16th, 50th and 84th percentiles of `values` (numpy's default 'linear' interpolation
+ * between order statistics), exactly, by counting rather than selecting: one pass for the
+ * range, one counting the values into equal bins, one gathering the values of the (at most
+ * six) bins that hold the order statistics needed; those few are sorted. On Monte Carlo draws
+ * this does about a third of the work of three selections.
+ *
+ * Returns null, leaving `values` untouched, when it cannot answer cheaply: non-finite values,
+ * or a needed bin crowded because a few outliers stretch the range. The caller then selects.
+ * @param values - the sample (not modified).
+ */
+export function binnedPercentiles(values: Float64Array): Percentiles | null {
+  const n = values.length;
+  if (n < 64) return null;
+  let min = Infinity;
+  let max = -Infinity;
+  // NaN fails both comparisons; the sum carries it (and ±Infinity) to the check below.
+  let sum = 0;
+  for (let i = 0; i < n; i++) {
+    const x = values[i] as number;
+    sum += x;
+    if (x < min) min = x;
+    if (x > max) max = x;
+  }
+  if (!Number.isFinite(sum) || !Number.isFinite(min) || !Number.isFinite(max)) return null;
+  if (min === max) return { p16: min, p50: min, p84: min };
+
+  const scale = NBINS / (max - min);
+  counts.fill(0);
+  for (let i = 0; i < n; i++) {
+    const b = ((values[i] as number) - min) * scale;
+    // b = NBINS only for x = max (or by rounding just below it): it belongs to the last bin.
+    counts[b < NBINS ? b | 0 : NBINS - 1]++;
+  }
+
+  // Ranks needed: floor and floor+1 of (n − 1)p for each p.
+  const ranks: number[] = [];
+  for (const p of PROBS) {
+    const k = Math.floor((n - 1) * p);
+    ranks.push(k, Math.min(k + 1, n - 1));
+  }
+  // Bin of each rank, and how many values lie in bins before it.
+  const binOf = new Int32Array(6);
+  const before = new Int32Array(6);
+  let cum = 0;
+  let r = 0;
+  for (let b = 0; b < NBINS && r < 6; b++) {
+    const c = counts[b] as number;
+    while (r < 6 && (ranks[r] as number) < cum + c) {
+      binOf[r] = b;
+      before[r] = cum;
+      r++;
+    }
+    cum += c;
+  }
+
+  slotOfBin.fill(0);
+  const start: number[] = [];
+  let slots = 0;
+  let offset = 0;
+  for (let j = 0; j < 6; j++) {
+    const b = binOf[j] as number;
+    if (slotOfBin[b] !== 0) continue;
+    const c = counts[b] as number;
+    if (c > MAX_IN_BIN) return null;
+    slotOfBin[b] = ++slots;
+    start.push(offset);
+    offset += c;
+  }
+  if (gathered.length < offset) gathered = new Float64Array(offset);
+  const fill = start.slice();
+  for (let i = 0; i < n; i++) {
+    const x = values[i] as number;
+    const b = (x - min) * scale;
+    const s = slotOfBin[b < NBINS ? b | 0 : NBINS - 1] as number;
+    if (s !== 0) gathered[(fill[s - 1] as number)++] = x;
+  }
+  for (let s = 0; s < slots; s++) gathered.subarray(start[s], fill[s]).sort();
+
+  const order = (j: number): number => {
+    const b = binOf[j] as number;
+    return gathered[(start[(slotOfBin[b] as number) - 1] as number) + (ranks[j] as number) - (before[j] as number)] as number;
+  };
+  const at = (i: number, p: number): number => {
+    const h = (n - 1) * p;
+    const t = h - Math.floor(h);
+    const lo = order(2 * i);
+    return t === 0 ? lo : lerp(lo, order(2 * i + 1), t);
+  };
+  return { p16: at(0, 0.16), p50: at(1, 0.5), p84: at(2, 0.84) };
+}
