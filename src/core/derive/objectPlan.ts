@@ -12,6 +12,15 @@ import { getLocalRelation } from '../local/localRelations.ts';
 import type { LocalRelation } from '../local/localRelation.ts';
 import { snr } from './drawPositive.ts';
 
+/**
+ * A copy of a measurement with both errors filled in. Every measurement the draws touch has
+ * this one shape, so the hot loop's property reads stay monomorphic whatever the caller built.
+ */
+function spec(m: Measured): Measured {
+  const errLo = m.errLo ?? 0;
+  return { value: m.value, errLo, errHi: m.errHi ?? errLo };
+}
+
 /** Rest wavelengths of the continuum bands, Å (the bands' names). */
 const BAND_ANGSTROM: Readonly<Record<ContinuumBand, number>> = { l5100: 5100, l3000: 3000, l1350: 1350 };
 const BAND_INPUT = { l5100: 'lamL5100', l3000: 'lamL3000', l1350: 'lamL1350' } as const;
@@ -105,14 +114,14 @@ export function planObject(inputs: ObjectInputs, settings: DeriveSettings): Obje
   const dlCm = dlMpc * MPC_CM;
   const logFourPiDl2 = Math.log10(4 * Math.PI) + 2 * Math.log10(dlCm);
 
-  const mu = inputs.mu ?? null;
+  const mu = inputs.mu ? spec(inputs.mu) : null;
   if (mu && mu.value !== 1) flags.add('lensed');
 
   const curve = settings.dustCurve;
   let dust: DustPlan = { mode: 'none' };
-  if (inputs.av) dust = { mode: 'av', m: inputs.av, rv: getDustCurve(curve).rv };
+  if (inputs.av) dust = { mode: 'av', m: spec(inputs.av), rv: getDustCurve(curve).rv };
   else if (inputs.balmerDecrement) {
-    dust = { mode: 'decrement', m: inputs.balmerDecrement };
+    dust = { mode: 'decrement', m: spec(inputs.balmerDecrement) };
     if (inputs.balmerDecrement.value < settings.intrinsicBalmer) flags.add('balmer_below_intrinsic');
   } else flags.add('no_dust_correction');
 
@@ -123,14 +132,14 @@ export function planObject(inputs: ObjectInputs, settings: DeriveSettings): Obje
     const m = li?.fluxCgs ?? li?.lumErgS;
     if (!li || !m) continue;
     lineSource.set(line, sources.length);
-    sources.push({ key: line, m, isFlux: li.fluxCgs !== undefined, dustK: kLambda(curve, lineWavelengthAngstrom(line)), isLimit: li.fluxIsLimit === true });
+    sources.push({ key: line, m: spec(m), isFlux: li.fluxCgs !== undefined, dustK: kLambda(curve, lineWavelengthAngstrom(line)), isLimit: li.fluxIsLimit === true });
   }
   const bandSource = new Map<ContinuumBand, number>();
   for (const band of ['l5100', 'l3000', 'l1350'] as const) {
     const m = inputs[BAND_INPUT[band]];
     if (!m) continue;
     bandSource.set(band, sources.length);
-    sources.push({ key: band, m, isFlux: false, dustK: kLambda(curve, BAND_ANGSTROM[band]), isLimit: false });
+    sources.push({ key: band, m: spec(m), isFlux: false, dustK: kLambda(curve, BAND_ANGSTROM[band]), isLimit: false });
   }
 
   const mass = planMass(inputs, settings, lineSource, bandSource, flags);
@@ -161,12 +170,12 @@ function planMass(
     if (!fwhm) continue;
     const cal = getCalibration(settings.calibrations[line]);
     const source = cal.luminosity === 'line' ? lineSource.get(line) : bandSource.get(cal.luminosity);
-    if (source !== undefined) return { line, cal, fwhm, source, l5100FromHbeta: false };
+    if (source !== undefined) return { line, cal, fwhm: spec(fwhm), source, l5100FromHbeta: false };
     // Hβ masses calibrated on L5100 with no continuum measured: estimate L5100 from L(Hβ).
     const hb = lineSource.get('hbeta');
     if (line === 'hbeta' && cal.luminosity === 'l5100' && hb !== undefined) {
       flags.add('l5100_from_hbeta');
-      return { line, cal, fwhm, source: hb, l5100FromHbeta: true };
+      return { line, cal, fwhm: spec(fwhm), source: hb, l5100FromHbeta: true };
     }
   }
   flags.add('no_mass');
@@ -204,9 +213,9 @@ function planLocal(inputs: ObjectInputs, settings: DeriveSettings, flags: Set<Fl
   const rel = getLocalRelation(settings.localRelation);
   if (rel.x === 'logSigma') {
     if (!inputs.sigmaStarKms) return flags.add('no_host_mass'), null;
-    return { rel, x: inputs.sigmaStarKms, xIsSigma: true };
+    return { rel, x: spec(inputs.sigmaStarKms), xIsSigma: true };
   }
   if (!inputs.logMstar) return flags.add('no_host_mass'), null;
   if (rel.x === 'logMbulge') flags.add('bulge_mass_from_total');
-  return { rel, x: inputs.logMstar, xIsSigma: false };
+  return { rel, x: spec(inputs.logMstar), xIsSigma: false };
 }

@@ -43,7 +43,8 @@ export function binnedPercentiles(values: Float64Array): Percentiles | null {
   for (let i = 0; i < n; i++) {
     const b = ((values[i] as number) - min) * scale;
     // b = NBINS only for x = max (or by rounding just below it): it belongs to the last bin.
-    counts[b < NBINS ? b | 0 : NBINS - 1]++;
+    const bin = b < NBINS ? b | 0 : NBINS - 1;
+    counts[bin] = (counts[bin] as number) + 1;
   }
 
   // Ranks needed: floor and floor+1 of (n − 1)p for each p.
