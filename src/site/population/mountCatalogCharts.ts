@@ -5,7 +5,7 @@
 import { connection, queryCensus, TABLE, CensusDbError } from '../db/duckdb.ts';
 import { sqlIdent } from '../db/sqlIdent.ts';
 import { catalogColumns } from './catalogColumns.ts';
-import { CHART_COLUMNS, chartRows, DENSE_ABOVE, DENSE_CHART_COLUMNS, drawPopulation } from './populationCharts.ts';
+import { CHART_COLUMNS, chartRows, DENSE_COLUMNS_BY_CHART, NARROW_ABOVE, drawChart, drawPopulation, nextPaint } from './populationCharts.ts';
 
 export async function mountCatalogCharts(root: HTMLElement): Promise<void> {
   const base = document.body.dataset.base ?? '/';
@@ -18,11 +18,21 @@ export async function mountCatalogCharts(root: HTMLElement): Promise<void> {
     await connection();
     performance.mark('census:db-ready');
     const objects = Number(root.dataset.objects ?? '0');
-    const wanted: readonly string[] = objects > DENSE_ABOVE ? DENSE_CHART_COLUMNS : CHART_COLUMNS;
-    const cols = wanted.filter((c) => have.includes(c));
-    const rs = await queryCensus(`SELECT ${cols.map(sqlIdent).join(', ')} FROM ${TABLE}`);
-    performance.mark('census:rows');
-    await drawPopulation(root, chartRows(rs), { base, settings, highlightIds: highlight ? [highlight] : undefined });
+    const options = { base, settings, highlightIds: highlight ? [highlight] : undefined };
+    if (objects > NARROW_ABOVE) {
+      // A large catalog: each chart asks only for its own columns, so the first is drawn sooner.
+      for (const mount of root.querySelectorAll<HTMLElement>('[data-chart]')) {
+        const cols = (DENSE_COLUMNS_BY_CHART[mount.dataset.chart ?? ''] ?? CHART_COLUMNS).filter((c) => have.includes(c));
+        const rs = await queryCensus(`SELECT ${cols.map(sqlIdent).join(', ')} FROM ${TABLE}`);
+        await nextPaint();
+        drawChart(mount, chartRows(rs), options);
+      }
+    } else {
+      const cols = CHART_COLUMNS.filter((c) => have.includes(c));
+      const rs = await queryCensus(`SELECT ${cols.map(sqlIdent).join(', ')} FROM ${TABLE}`);
+      performance.mark('census:rows');
+      await drawPopulation(root, chartRows(rs), options);
+    }
     performance.mark('census:drawn');
   } catch (err) {
     // The status line above the charts says what went wrong with the database; say it here too.

@@ -27,16 +27,11 @@ export const CHART_COLUMNS = [
 ] as const;
 
 /**
- * What the charts read when the population is drawn as a density (more than
- * DENSE_ABOVE objects): no error bars are drawn then, so their columns are not fetched.
+ * Above this many objects the landing and object pages fetch each chart's columns separately
+ * and without error-bar columns: the charts draw such populations as densities (their own
+ * threshold is 5,000 placed points), where no bars are drawn.
  */
-export const DENSE_CHART_COLUMNS = [
-  'id', 'z', 'log_mstar', 'log_mbh', 'log_lbol', 'log_edd_ratio', 'fwhm_halpha', 'log_lum_halpha', 'fwhm_hbeta', 'log_lum_hbeta',
-  'flux_halpha_is_limit', 'flags',
-] as const;
-
-/** Above this many objects the charts draw densities (the charts' own default threshold). */
-export const DENSE_ABOVE = 5000;
+export const NARROW_ABOVE = 20_000;
 
 /** Options of one drawing of the population. */
 export interface DrawOptions {
@@ -77,30 +72,51 @@ export const CHART_FUNCTIONS: Record<string, ChartFn> = {
 };
 
 /**
+ * The columns each chart reads when drawn as a density (no error bars): large catalogs fetch
+ * them chart by chart, so the first chart waits only for its own columns.
+ */
+export const DENSE_COLUMNS_BY_CHART: Record<string, readonly string[]> = {
+  'mbh-mstar': ['id', 'log_mstar', 'log_mbh', 'flags'],
+  'mbh-z': ['id', 'z', 'log_mbh', 'flags'],
+  'lbol-mbh': ['id', 'log_mbh', 'log_lbol', 'flags'],
+  'edd-hist': ['id', 'log_edd_ratio', 'flags'],
+  'fwhm-lum': ['id', 'fwhm_halpha', 'log_lum_halpha', 'fwhm_hbeta', 'log_lum_hbeta', 'flux_halpha_is_limit', 'flags'],
+};
+
+/** Lets the browser paint what was drawn before the next chart (a frame, then a task). */
+export function nextPaint(): Promise<void> {
+  return new Promise((resolve) => requestAnimationFrame(() => setTimeout(resolve, 0)));
+}
+
+/** Draws the chart of one `[data-chart]` mount from `rows`. */
+export function drawChart(mount: HTMLElement, rows: readonly ChartRow[], options: DrawOptions): void {
+  const fn = CHART_FUNCTIONS[mount.dataset.chart ?? ''];
+  if (!fn) return;
+  const settings = chartSettings(options.settings);
+  const width = Math.max(320, Math.min(720, Math.floor(mount.clientWidth || 600)));
+  let el: SVGSVGElement | HTMLElement;
+  try {
+    el = fn(rows as readonly CatalogRow[], { settings, highlightIds: options.highlightIds, width, height: Math.round(width * 0.66) });
+  } catch (err) {
+    const p = document.createElement('p');
+    p.className = 'chart-note';
+    p.textContent = `This chart could not be drawn: ${err instanceof Error ? err.message : String(err)}`;
+    mount.replaceChildren(p);
+    return;
+  }
+  const key = mount.dataset.chart ?? 'chart';
+  mountChart(mount, el, { fileName: `census-${key}`, label: mount.dataset.label ?? key, base: options.base, onOpen: (id) => location.assign(objectHrefHere(id)) });
+  mount.dataset.drawn = String(rows.length);
+  performance.mark(`census:chart:${key}`);
+}
+
+/**
  * Draws every `[data-chart]` mount inside `root` from `rows`, one chart per animation frame
  * so the first appears as soon as it is ready.
  */
 export async function drawPopulation(root: HTMLElement, rows: readonly ChartRow[], options: DrawOptions): Promise<void> {
-  const settings = chartSettings(options.settings);
   for (const mount of root.querySelectorAll<HTMLElement>('[data-chart]')) {
-    const fn = CHART_FUNCTIONS[mount.dataset.chart ?? ''];
-    if (!fn) continue;
-    // Let the browser paint the chart before the next one (a frame, then a task).
-    await new Promise((resolve) => requestAnimationFrame(() => setTimeout(resolve, 0)));
-    const width = Math.max(320, Math.min(720, Math.floor(mount.clientWidth || 600)));
-    let el: SVGSVGElement | HTMLElement;
-    try {
-      el = fn(rows as readonly CatalogRow[], { settings, highlightIds: options.highlightIds, width, height: Math.round(width * 0.66) });
-    } catch (err) {
-      const p = document.createElement('p');
-      p.className = 'chart-note';
-      p.textContent = `This chart could not be drawn: ${err instanceof Error ? err.message : String(err)}`;
-      mount.replaceChildren(p);
-      continue;
-    }
-    const key = mount.dataset.chart ?? 'chart';
-    mountChart(mount, el, { fileName: `census-${key}`, label: mount.dataset.label ?? key, base: options.base, onOpen: (id) => location.assign(objectHrefHere(id)) });
-    mount.dataset.drawn = String(rows.length);
-    performance.mark(`census:chart:${key}`);
+    await nextPaint();
+    drawChart(mount, rows, options);
   }
 }
