@@ -68,4 +68,27 @@ describe('deployment', () => {
       await site.close();
     }
   });
+
+  it('links every object to the in-browser viewer when built without one page per object', async () => {
+    const url = inject('viewerUrl');
+    const [first] = await nodeQuery(inject('demoParquet'), 'SELECT id FROM census ORDER BY id LIMIT 1');
+    const { objectSlug } = await import('../../src/site/objectSlug.ts');
+    expect((await fetch(new URL(`object/${objectSlug(String(first!.id))}/`, url))).status).toBe(404);
+    const site = await openSite(browser, url);
+    try {
+      const { page } = site;
+      await page.goto(new URL('query/', url).href);
+      await page.locator('#sql').fill('SELECT id, z FROM census ORDER BY id LIMIT 5');
+      await page.locator('[data-run]').click();
+      await page.waitForFunction(() => document.querySelector('[data-result-summary]')?.getAttribute('data-rows') === '5', undefined, { timeout: 30_000 });
+      const link = page.locator('table[data-results] tbody tr').first().locator('a');
+      await expect(link.getAttribute('href')).resolves.toBe(`/object/?id=${encodeURIComponent(String(first!.id))}`);
+      await Promise.all([page.waitForURL((u) => u.pathname === '/object/', { waitUntil: 'domcontentloaded' }), link.click()]);
+      await page.waitForSelector('tr[data-column="log_mbh"]', { timeout: 30_000 });
+      await expect(page.locator('h1').textContent()).resolves.toBe(first!.id);
+      expect(site.foreign()).toEqual([]);
+    } finally {
+      await site.close();
+    }
+  });
 });

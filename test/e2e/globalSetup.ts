@@ -26,6 +26,8 @@ declare module 'vitest' {
     missingUrl: string;
     /** The root build with data/catalog.parquet replaced by bytes that are not Parquet. */
     corruptUrl: string;
+    /** Demo catalog built with CENSUS_OBJECT_PAGES=viewer (the layout of large catalogs). */
+    viewerUrl: string;
     /** The demo catalog's Parquet file (the one copied into the site). */
     demoParquet: string;
     /** The hostile catalog's Parquet file. */
@@ -52,10 +54,10 @@ function buildEnv(extra: Record<string, string>): NodeJS.ProcessEnv {
   return { ...env, ...extra };
 }
 
-function build(catalog: string, base: string, dist: string): void {
+function build(catalog: string, base: string, dist: string, extra: Record<string, string> = {}): void {
   execFileSync(process.execPath, [join(root, 'node_modules/astro/astro.js'), 'build', '--silent'], {
     cwd: root,
-    env: buildEnv({ CENSUS_CATALOG: catalog, CENSUS_OUT_DIR: dist, CENSUS_BASE: base }),
+    env: buildEnv({ CENSUS_CATALOG: catalog, CENSUS_OUT_DIR: dist, CENSUS_BASE: base, ...extra }),
     stdio: ['ignore', 'ignore', 'inherit'],
   });
 }
@@ -80,6 +82,8 @@ export async function setup(project: TestProject): Promise<void> {
   build(demoParquet, '/', rootDist);
   build(demoParquet, '/census/', subDist);
   build(hostileParquet, '/', hostileDist);
+  const viewerDist = join(outDir, 'site-viewer');
+  build(demoParquet, '/', viewerDist, { CENSUS_OBJECT_PAGES: 'viewer' });
   cpSync(rootDist, missingDist, { recursive: true });
   rmSync(join(missingDist, 'data/catalog.parquet'));
   const corruptDist = join(outDir, 'site-corrupt');
@@ -96,6 +100,7 @@ export async function setup(project: TestProject): Promise<void> {
   project.provide('hostileUrl', await serve(hostileDist, '/'));
   project.provide('missingUrl', await serve(missingDist, '/'));
   project.provide('corruptUrl', await serve(corruptDist, '/'));
+  project.provide('viewerUrl', await serve(viewerDist, '/'));
   project.provide('demoParquet', demoParquet);
   project.provide('hostileParquet', hostileParquet);
 }
