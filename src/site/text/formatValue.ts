@@ -7,7 +7,8 @@
 /** The text shown for a missing value. */
 export const MISSING = '—';
 
-const isLog = (c: string) => /^(log_|delta_log_)/.test(c) || /_p(16|50|84)$/.test(c);
+/** Logarithmic quantities (dex) and their percentiles, also under names a query gives them (median_log_x, p16). */
+const isLog = (c: string) => /(^|_)log(_|$)/.test(c) || /(^|_)p(16|50|84)$/.test(c);
 
 /** `value` of column `column` as display text. */
 export function formatValue(column: string, value: unknown): string {

@@ -6,6 +6,9 @@ describe('formatValue', () => {
     expect(formatValue('log_mbh', 7.4567)).toBe('7.46');
     expect(formatValue('log_edd_ratio_p16', -0.004)).toBe('0.00');
     expect(formatValue('delta_log_mbh_local', 1.005)).toBe('1.00');
+    // Names a query gives: median of a log column, bare percentiles.
+    expect(formatValue('median_log_edd_ratio', -0.6183)).toBe('-0.62');
+    expect(formatValue('p84', -0.00255)).toBe('0.00');
   });
   it('prints redshifts to 0.001 and coordinates to 1e-5 degrees', () => {
     expect(formatValue('z', 6.12345)).toBe('6.123');
