@@ -100,7 +100,10 @@ describe('the compare page (place a new object)', () => {
       await expect(page.locator('#place-z').getAttribute('aria-describedby')).resolves.toContain('place-z-msg');
       await expect(page.locator('#place-fwhm-msg').textContent()).resolves.toBe('-300 km s-1: must be positive');
       await expect(page.locator('#place-result').isHidden()).resolves.toBe(true);
+      // pasted rows are read by default in the unit the catalog's own fluxes came in (the demo's 1e-18)
+      await expect(page.locator('#place-csv-unit').inputValue()).resolves.toBe('1e-18 erg s-1 cm-2');
       // a pasted row with a flux in the wrong unit says which unit was probably meant
+      await page.selectOption('#place-csv-unit', 'erg s-1 cm-2');
       await page.fill('#place-csv', 'id,z,fwhm_halpha,flux_halpha\nINVENTED-E2E-3,5.5,1800,6.2');
       await page.click('#place-csv-go');
       await expect(page.locator('#place-csv-msg').textContent()).resolves.toMatch(/flux_halpha: 6\.2 erg s-1 cm-2 .*1e-18/);
