@@ -10,11 +10,11 @@ import type { SettingsProvenance } from '../metadata/settingsProvenance.ts';
 import type { CellValue } from '../parquet/parquetWriter.ts';
 import { packedValue } from './packedDerived.ts';
 import type { PackedDerived } from './packedDerived.ts';
-import type { NormalizedRowLike } from './rowShape.ts';
+import type { NormalizedRow } from '../normalize/normalizeChunk.ts';
 
 /** Everything one output row is assembled from. */
 export interface RowContext {
-  row: NormalizedRowLike;
+  row: NormalizedRow;
   /** The batch results holding this row, or null when it was not derived. */
   packed: PackedDerived | null;
   /** Index of this row in `packed`. */

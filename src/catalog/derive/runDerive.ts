@@ -24,7 +24,7 @@ import type { OutputPaths } from './outputPaths.ts';
 import type { PackedDerived } from './packedDerived.ts';
 import { RejectionReport } from './rejectionReport.ts';
 import type { RejectionEntry } from './rejectionReport.ts';
-import type { NormalizedRowLike } from './rowShape.ts';
+import type { NormalizedRow } from '../normalize/normalizeChunk.ts';
 import { createWorkerPool } from './workerPool.ts';
 
 /** Rows per chunk read, normalized and sent to a worker. */
@@ -81,7 +81,7 @@ export interface DeriveSummary {
 }
 
 interface PendingChunk {
-  rows: NormalizedRowLike[];
+  rows: NormalizedRow[];
   results: Promise<PackedDerived> | null;
 }
 
@@ -169,7 +169,7 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
 
     for await (const chunk of src.chunks(opts.chunkRows ?? DEFAULT_CHUNK_ROWS)) {
       opts.signal?.throwIfAborted();
-      const rows = normalizeChunk(chunk, plan) as NormalizedRowLike[];
+      const rows = normalizeChunk(chunk, plan);
       const inputs: ObjectInputs[] = [];
       for (const row of rows) {
         duplicates.check(row.id, row.row);
@@ -236,11 +236,11 @@ function abortedPromise(signal: AbortSignal): Promise<never> {
 }
 
 /** A row is derived only when its inputs parsed and it has no problem at all. */
-function derivable(row: NormalizedRowLike): boolean {
+function derivable(row: NormalizedRow): boolean {
   return row.inputs !== null && row.problems.length === 0;
 }
 
-function rowContext(row: NormalizedRowLike, packed: PackedDerived | null, k: number): RowContext {
+function rowContext(row: NormalizedRow, packed: PackedDerived | null, k: number): RowContext {
   const flags: string[] = [];
   if (!derivable(row)) flags.push(INVALID_INPUT_FLAG);
   if (packed) {

@@ -4,6 +4,8 @@
  * the methods page can show every recorded choice; the fields the pages name are lifted out.
  */
 
+import { isRecord, pick } from '../recordPath.ts';
+
 /** What the site knows about one column. */
 export interface ColumnMeta {
   name: string;
@@ -37,17 +39,8 @@ export interface SiteMeta {
   raw: Record<string, unknown>;
 }
 
-const isRecord = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
 const str = (v: unknown): string | undefined => (typeof v === 'string' && v.trim() !== '' ? v : undefined);
 
-function pick(raw: Record<string, unknown>, ...paths: string[]): unknown {
-  for (const p of paths) {
-    let v: unknown = raw;
-    for (const k of p.split('.')) v = isRecord(v) ? v[k] : undefined;
-    if (v !== undefined && v !== null) return v;
-  }
-  return undefined;
-}
 
 function flatRecord<T>(v: unknown, keep: (x: unknown) => x is T): Record<string, T> {
   const out: Record<string, T> = {};

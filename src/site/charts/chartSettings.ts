@@ -1,17 +1,9 @@
 import { DEFAULT_SETTINGS } from '../../core/derive/defaultSettings.ts';
 import type { CosmologyId, LocalRelationId } from '../../core/derive/types.ts';
 import type { ChartSettings } from './types.ts';
+import { isRecord, pick } from '../recordPath.ts';
 
-const isRecord = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
 
-function pick(raw: Record<string, unknown>, ...paths: string[]): unknown {
-  for (const p of paths) {
-    let v: unknown = raw;
-    for (const k of p.split('.')) v = isRecord(v) ? v[k] : undefined;
-    if (v !== undefined && v !== null) return v;
-  }
-  return undefined;
-}
 
 const text = (v: unknown): string | undefined => (typeof v === 'string' && v.trim() !== '' ? v.trim() : undefined);
 

@@ -1,7 +1,7 @@
 import { DEFAULT_SETTINGS } from '../../core/derive/defaultSettings.ts';
 import type { DeriveSettings } from '../../core/derive/types.ts';
+import { isRecord } from '../recordPath.ts';
 
-const isRecord = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
 
 /**
  * The derivation settings of the catalog, from the `settings` record of its metadata sidecar
