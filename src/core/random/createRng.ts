@@ -19,6 +19,10 @@ class Xoshiro128ss implements Rng {
   }
 
   next(): number {
+    return this.nextUint32() * INV_2_32;
+  }
+
+  nextUint32(): number {
     const s1 = this.s1;
     const m = Math.imul(s1, 5);
     const result = Math.imul((m << 7) | (m >>> 25), 9);
@@ -29,7 +33,7 @@ class Xoshiro128ss implements Rng {
     this.s0 ^= this.s3;
     this.s2 ^= t;
     this.s3 = (this.s3 << 11) | (this.s3 >>> 21);
-    return (result >>> 0) * INV_2_32;
+    return result >>> 0;
   }
 }
 

@@ -3,6 +3,11 @@
  * tests and the catalog build control the stream (see {@link createRng} and {@link seedFor}).
  */
 export interface Rng {
-  /** The next uniform deviate in [0, 1). */
+  /** The next uniform deviate in [0, 1): `nextUint32() / 2^32`. */
   next(): number;
+  /**
+   * The next 32 random bits as an unsigned integer in [0, 2^32). The same step of the stream as
+   * `next()`; the normal sampler takes its bits from here without a round trip through a float.
+   */
+  nextUint32(): number;
 }

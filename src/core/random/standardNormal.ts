@@ -44,7 +44,7 @@ function tail(rng: Rng, negative: boolean): number {
 export function standardNormal(rng: Rng): number {
   for (;;) {
     // One 32-bit draw: low 7 bits pick the layer, the upper 25 give a signed abscissa in (−1, 1).
-    const j = (rng.next() * 4294967296) >>> 0;
+    const j = rng.nextUint32();
     const i = j & (N - 1);
     const u = ((j >>> 7) + 0.5) * (2 / 33554432) - 1;
     if (Math.abs(u) < (RATIO[i] as number)) return u * (X[i] as number);
