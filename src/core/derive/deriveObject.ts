@@ -5,14 +5,11 @@ import { logL5100FromLogLHalpha, logL5100FromLogLHbeta, inCalibrationRange } fro
 import { inLocalRelationRange } from '../local/localRelation.ts';
 import { lambdaRequired, logSeedMassRequired } from '../growth/salpeterGrowth.ts';
 import { planObject, type LumSource } from './objectPlan.ts';
-import { createScratch, evaluateChain, OUT, OUT_SIZE } from './evaluateChain.ts';
+import { createBuffers, evaluateChain, sampleInputs, OUT, type ChainBuffers } from './evaluateChain.ts';
 
-/** Draw buffers, one per output slot, reused across objects (grown when `draws` grows). */
-let buffers: Float64Array[] = [];
-function drawBuffers(draws: number): Float64Array[] {
-  if ((buffers[0]?.length ?? 0) !== draws) buffers = Array.from({ length: OUT_SIZE }, () => new Float64Array(draws));
-  return buffers;
-}
+/** Working arrays, reused across objects: one sample for the nominal values, `draws` for the Monte Carlo. */
+const nominalBuffers = createBuffers(1);
+let drawBuffers: ChainBuffers = createBuffers(0);
 
 const finiteOrNull = (x: number): number | null => (Number.isFinite(x) ? x : null);
 
@@ -35,19 +32,21 @@ const finiteOrNull = (x: number): number | null => (Number.isFinite(x) ? x : nul
  */
 export function deriveObject(inputs: ObjectInputs, settings: DeriveSettings, rng: Rng): DerivedObject {
   const plan = planObject(inputs, settings);
-  const scratch = createScratch(plan, settings);
-  const nominal = new Float64Array(OUT_SIZE);
-  evaluateChain(plan, settings, null, scratch, nominal, false);
+  const nb = nominalBuffers;
+  sampleInputs(plan, settings, null, nb);
+  evaluateChain(plan, settings, nb, true);
+  const nominal = (slot: number): number => (nb.out[slot] as Float64Array)[0] as number;
+  const corrected = (i: number): number => (nb.logL[i] as Float64Array)[0] as number;
 
   const logLum: Partial<Record<LineId, number>> = {};
   for (let i = 0; i < plan.sources.length; i++) {
     const s = plan.sources[i] as LumSource;
-    if (s.key === 'halpha' || s.key === 'hbeta' || s.key === 'mgii' || s.key === 'civ') logLum[s.key] = scratch.logL[i] as number;
+    if (s.key === 'halpha' || s.key === 'hbeta' || s.key === 'mgii' || s.key === 'civ') logLum[s.key] = corrected(i);
   }
   const cont5100 = plan.sources.findIndex((s) => s.key === 'l5100');
   const logL5100 =
     cont5100 >= 0
-      ? (scratch.logL[cont5100] as number)
+      ? corrected(cont5100)
       : logLum.halpha !== undefined
         ? logL5100FromLogLHalpha(logLum.halpha)
         : logLum.hbeta !== undefined
@@ -56,46 +55,40 @@ export function deriveObject(inputs: ObjectInputs, settings: DeriveSettings, rng
 
   const flags = plan.flags;
   if (plan.mass) {
-    const l = scratch.logL[plan.mass.source] as number;
+    const l = corrected(plan.mass.source);
     const calL = plan.mass.l5100FromHbeta ? logL5100FromLogLHbeta(l) : l;
     if (!inCalibrationRange(plan.mass.cal, calL, plan.mass.fwhm.value)) flags.add('calibration_out_of_range');
   }
   if (plan.local) {
-    const x = plan.local.xIsSigma ? Math.log10(plan.local.x.value) : plan.local.x.value;
-    if (!inLocalRelationRange(plan.local.rel, x)) flags.add('local_relation_extrapolated');
+    if (!inLocalRelationRange(plan.local.rel, nb.x[0] as number)) flags.add('local_relation_extrapolated');
   }
 
   const draws = Math.max(1, Math.floor(settings.draws));
-  const buf = drawBuffers(draws);
-  const one = new Float64Array(OUT_SIZE);
-  const [bMbh, bLbol, bEdd, , bDelta] = buf as [Float64Array, Float64Array, Float64Array, Float64Array, Float64Array];
+  if (drawBuffers.n !== draws) drawBuffers = createBuffers(draws);
+  const db = drawBuffers;
+  sampleInputs(plan, settings, rng, db);
+  evaluateChain(plan, settings, db, false);
+  const [dMbh, dLbol, dEdd, , dDelta] = db.out as [Float64Array, Float64Array, Float64Array, Float64Array, Float64Array];
   let superEdd = 0;
   let above = 0;
   for (let k = 0; k < draws; k++) {
-    evaluateChain(plan, settings, rng, scratch, one);
-    const edd = one[OUT.logEddRatio] as number;
-    const delta = one[OUT.deltaLocal] as number;
-    bMbh[k] = one[OUT.logMbh] as number;
-    bLbol[k] = one[OUT.logLbol] as number;
-    bEdd[k] = edd;
-    bDelta[k] = delta;
-    if (edd > 0) superEdd++;
-    if (delta > 0) above++;
+    if ((dEdd[k] as number) > 0) superEdd++;
+    if ((dDelta[k] as number) > 0) above++;
   }
-  const pct = (slot: number): Percentiles | null =>
-    Number.isFinite(nominal[slot]) ? percentiles16_50_84(buf[slot] as Float64Array) : null;
-  const pMbh = pct(OUT.logMbh);
+  const pct = (slot: number, values: Float64Array): Percentiles | null =>
+    Number.isFinite(nominal(slot)) ? percentiles16_50_84(values) : null;
+  const pMbh = pct(OUT.logMbh, dMbh);
   // The required seed mass is log M minus a constant for the object (its e-folds), a monotone
   // map, so its percentiles are the mass percentiles mapped through it: no second selection.
   const toSeed = (logM: number): number =>
     logSeedMassRequired(logM, plan.dtSeedGyr, settings.efficiency, settings.lambdaSeed, settings.dutyCycle);
   const pMseed =
-    pMbh && Number.isFinite(nominal[OUT.logMseed]) ? { p16: toSeed(pMbh.p16), p50: toSeed(pMbh.p50), p84: toSeed(pMbh.p84) } : null;
+    pMbh && Number.isFinite(nominal(OUT.logMseed)) ? { p16: toSeed(pMbh.p16), p50: toSeed(pMbh.p50), p84: toSeed(pMbh.p84) } : null;
 
-  const logMbh = finiteOrNull(nominal[OUT.logMbh] as number);
-  const logEddRatio = finiteOrNull(nominal[OUT.logEddRatio] as number);
-  const delta = finiteOrNull(nominal[OUT.deltaLocal] as number);
-  const pDelta = pct(OUT.deltaLocal);
+  const logMbh = finiteOrNull(nominal(OUT.logMbh));
+  const logEddRatio = finiteOrNull(nominal(OUT.logEddRatio));
+  const delta = finiteOrNull(nominal(OUT.deltaLocal));
+  const pDelta = pct(OUT.deltaLocal, dDelta);
   const seedOk = logMbh !== null && !Number.isNaN(plan.dtSeedGyr);
   const lamReq = (seedMsun: number): number | null =>
     seedOk ? finiteOrNull(lambdaRequired(logMbh, Math.log10(seedMsun), plan.dtSeedGyr, settings.efficiency, settings.dutyCycle)) : null;
@@ -112,11 +105,11 @@ export function deriveObject(inputs: ObjectInputs, settings: DeriveSettings, rng
     logL5100: logL5100 !== null ? finiteOrNull(logL5100) : null,
     logMbh,
     mbhMethod: plan.mass ? plan.mass.cal.id : null,
-    logLbol: finiteOrNull(nominal[OUT.logLbol] as number),
+    logLbol: finiteOrNull(nominal(OUT.logLbol)),
     lbolMethod: plan.lbol ? plan.lbol.label : null,
     logEddRatio,
     pSuperEddington: logEddRatio !== null ? superEdd / draws : null,
-    logMseed: finiteOrNull(nominal[OUT.logMseed] as number),
+    logMseed: finiteOrNull(nominal(OUT.logMseed)),
     lambdaReqLight: lamReq(settings.lightSeedMsun),
     lambdaReqHeavy: lamReq(settings.heavySeedMsun),
     deltaLogMbhLocal: delta,
@@ -124,8 +117,8 @@ export function deriveObject(inputs: ObjectInputs, settings: DeriveSettings, rng
     pAboveLocal: delta !== null ? above / draws : null,
     pct: {
       logMbh: pMbh,
-      logLbol: pct(OUT.logLbol),
-      logEddRatio: pct(OUT.logEddRatio),
+      logLbol: pct(OUT.logLbol, dLbol),
+      logEddRatio: pct(OUT.logEddRatio, dEdd),
       logMseed: pMseed,
       deltaLogMbhLocal: pDelta,
     },

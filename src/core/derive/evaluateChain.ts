@@ -1,7 +1,7 @@
 import type { DeriveSettings } from './types.ts';
 import type { LumSource, ObjectPlan } from './objectPlan.ts';
 import type { Rng } from '../random/rng.ts';
-import { standardNormal } from '../random/standardNormal.ts';
+import { fillNormal } from '../random/fillNormal.ts';
 import { ebvFromBalmerDecrement } from '../dust/balmerDecrement.ts';
 import { virialLogMass } from '../virial/virialCalibration.ts';
 import { logL5100FromLogLHbeta } from '../virial/lineContinuumRelations.ts';
@@ -9,42 +9,91 @@ import { logLbolFromHalpha } from '../bolometric/logLbolFromHalpha.ts';
 import { logLbolFromContinuum } from '../bolometric/logLbolFromContinuum.ts';
 import { logSeedMassRequired } from '../growth/salpeterGrowth.ts';
 import { localLogMbh } from '../local/localRelation.ts';
-import { drawMeasured, drawPositive } from './drawPositive.ts';
+import { drawMeasuredInto, drawPositiveInto } from './drawPositive.ts';
 
-/** Slots of the chain's output vector. */
+/** Slots of the chain's outputs. */
 export const OUT = { logMbh: 0, logLbol: 1, logEddRatio: 2, logMseed: 3, deltaLocal: 4 } as const;
 export const OUT_SIZE = 5;
+/** At most four lines and three continuum bands feed a chain. */
+const MAX_SOURCES = 7;
 
 /**
- * Scratch state of one evaluation, reused across draws so the Monte Carlo loop allocates
- * nothing: the corrected log luminosity of each source (NaN where not evaluated).
+ * Working arrays of one evaluation over `n` samples (n = 1 for the nominal values, n = draws
+ * for the Monte Carlo): the sampled inputs, then the outputs. Reused from object to object.
  */
-export interface ChainScratch {
-  logL: Float64Array;
-  /** log10 of the Eddington luminosity per solar mass. */
-  logEddPerMsun: number;
-  /**
-   * The L_bol route as log L_bol = lbolA + lbolB · log L. Every bolometric method here is a
-   * power law in L (fixed corrections, Netzer 2019's c·L^d, Greene & Ho 2005 eq. 1 inverted
-   * times BC5100), hence linear in log L; the draws use this form and skip three log10 calls.
-   * NaN when the route is not linear (checked at a third point), so the draws call the route.
-   */
-  lbolA: number;
-  lbolB: number;
+export interface ChainBuffers {
+  n: number;
+  logMu: Float64Array;
+  ebv: Float64Array;
+  /** Per source of the plan: sampled observed value, then (in place) the corrected log10 luminosity. */
+  logL: Float64Array[];
+  logFwhm: Float64Array;
+  /** Host quantity of the local relation (log M*, or σ* then log σ*). */
+  x: Float64Array;
+  /** Intrinsic scatter of the virial calibration, dex (zeros for the nominal values). */
+  scatter: Float64Array;
+  out: Float64Array[];
 }
 
-export function createScratch(plan: ObjectPlan, settings: DeriveSettings): ChainScratch {
-  let lbolA = NaN;
-  let lbolB = NaN;
-  if (plan.lbol) {
-    const f0 = lbolRoute(plan, settings, 40);
-    const f1 = lbolRoute(plan, settings, 41);
-    if (Math.abs(f0 + 5 * (f1 - f0) - lbolRoute(plan, settings, 45)) < 1e-9) {
-      lbolB = f1 - f0;
-      lbolA = f0 - 40 * lbolB;
-    }
+export function createBuffers(n: number): ChainBuffers {
+  const a = () => new Float64Array(n);
+  return {
+    n,
+    logMu: a(),
+    ebv: a(),
+    logL: Array.from({ length: MAX_SOURCES }, a),
+    logFwhm: a(),
+    x: a(),
+    scatter: a(),
+    out: Array.from({ length: OUT_SIZE }, a),
+  };
+}
+
+/**
+ * Fills the input arrays: with draws of every measurement the chain uses (`rng` given; split
+ * normals, positive quantities truncated at zero, upper-limit fluxes held at their limit, the
+ * calibration's intrinsic scatter), or with the central values and no scatter (`rng` null:
+ * the nominal evaluation, which also fills every source, used or not, for `log_lum_<line>`).
+ * Draws are taken input by input, in a fixed order, so a seeded stream gives fixed results.
+ */
+export function sampleInputs(plan: ObjectPlan, settings: DeriveSettings, rng: Rng | null, b: ChainBuffers): void {
+  const draw = (m: { value: number }, out: Float64Array, positive: boolean) => {
+    if (!rng) out.fill(m.value);
+    else if (positive) drawPositiveInto(rng, m, out);
+    else drawMeasuredInto(rng, m, out);
+  };
+  if (plan.mu) {
+    draw(plan.mu, b.logMu, true);
+    for (let k = 0; k < b.n; k++) b.logMu[k] = Math.log10(b.logMu[k] as number);
+  } else b.logMu.fill(0);
+
+  const dust = plan.dust;
+  if (dust.mode === 'av') {
+    draw(dust.m, b.ebv, false);
+    for (let k = 0; k < b.n; k++) b.ebv[k] = Math.max(0, b.ebv[k] as number) / dust.rv;
+  } else if (dust.mode === 'decrement') {
+    draw(dust.m, b.ebv, true);
+    for (let k = 0; k < b.n; k++) b.ebv[k] = ebvFromBalmerDecrement(b.ebv[k] as number, settings.dustCurve, settings.intrinsicBalmer);
+  } else b.ebv.fill(0);
+
+  const indices = rng ? plan.used : plan.sources.map((_, i) => i);
+  for (const i of indices) {
+    const s = plan.sources[i] as LumSource;
+    if (s.isLimit) (b.logL[i] as Float64Array).fill(s.m.value);
+    else draw(s.m, b.logL[i] as Float64Array, true);
   }
-  return { logL: new Float64Array(plan.sources.length).fill(NaN), logEddPerMsun: Math.log10(settings.eddingtonPerMsun), lbolA, lbolB };
+
+  if (plan.mass) {
+    draw(plan.mass.fwhm, b.logFwhm, true);
+    for (let k = 0; k < b.n; k++) b.logFwhm[k] = Math.log10(b.logFwhm[k] as number);
+    if (rng) fillNormal(rng, b.scatter, 0, plan.mass.cal.scatterDex);
+    else b.scatter.fill(0);
+  }
+
+  if (plan.local) {
+    draw(plan.local.x, b.x, plan.local.xIsSigma);
+    if (plan.local.xIsSigma) for (let k = 0; k < b.n; k++) b.x[k] = Math.log10(b.x[k] as number);
+  }
 }
 
 /** log10 L_bol from the corrected log10 luminosity of the plan's bolometric source. */
@@ -57,72 +106,56 @@ function lbolRoute(plan: ObjectPlan, settings: DeriveSettings, logL: number): nu
 }
 
 /**
- * One pass through the derivation chain: magnification and dust corrections, virial mass,
- * bolometric luminosity, Eddington ratio, required seed mass and offset from the local
- * relation. With `rng = null` it uses the central inputs and no scatter (the nominal value);
- * with an rng it is one Monte Carlo draw, including the calibration's intrinsic scatter.
- * Upper-limit fluxes are held at their limit. Writes log10 values into `out` (slots in OUT;
- * NaN where the quantity has no route) and the corrected luminosities into `scratch.logL`.
+ * The derivation chain over the sampled inputs: magnification and dust corrections, virial
+ * mass, bolometric luminosity, Eddington ratio, required seed mass (nominal only: deriveObject
+ * maps the mass percentiles) and offset from the local relation. The same code gives the
+ * nominal values (n = 1, central inputs) and the Monte Carlo draws. Writes log10 values into
+ * `b.out` (NaN where a quantity has no route) and the corrected luminosities into `b.logL`.
  */
-export function evaluateChain(
-  plan: ObjectPlan,
-  settings: DeriveSettings,
-  rng: Rng | null,
-  scratch: ChainScratch,
-  out: Float64Array,
-  onlyUsed = true,
-): void {
-  const logMu = plan.mu ? Math.log10(rng ? drawPositive(rng, plan.mu) : plan.mu.value) : 0;
-  let ebv = 0;
-  const dust = plan.dust;
-  if (dust.mode === 'av') ebv = Math.max(0, rng ? drawMeasured(rng, dust.m) : dust.m.value) / dust.rv;
-  else if (dust.mode === 'decrement') {
-    const ratio = rng ? drawPositive(rng, dust.m) : dust.m.value;
-    ebv = ebvFromBalmerDecrement(ratio, settings.dustCurve, settings.intrinsicBalmer);
-  }
-
-  const logL = scratch.logL;
-  const n = onlyUsed ? plan.used.length : plan.sources.length;
-  for (let j = 0; j < n; j++) {
-    const i = onlyUsed ? (plan.used[j] as number) : j;
+export function evaluateChain(plan: ObjectPlan, settings: DeriveSettings, b: ChainBuffers, nominal: boolean): void {
+  const n = b.n;
+  const { logMu, ebv, logFwhm, scatter, x } = b;
+  const indices = nominal ? plan.sources.map((_, i) => i) : plan.used;
+  for (const i of indices) {
     const s = plan.sources[i] as LumSource;
-    const obs = rng && !s.isLimit ? drawPositive(rng, s.m) : s.m.value;
-    logL[i] = Math.log10(obs) + (s.isFlux ? plan.logFourPiDl2 : 0) - logMu + 0.4 * s.dustK * ebv;
+    const L = b.logL[i] as Float64Array;
+    const c = s.isFlux ? plan.logFourPiDl2 : 0;
+    const dk = 0.4 * s.dustK;
+    for (let k = 0; k < n; k++) L[k] = Math.log10(L[k] as number) + c - (logMu[k] as number) + dk * (ebv[k] as number);
   }
 
-  let logM = NaN;
+  const [logM, logLbol, logEdd, logMseed, delta] = b.out as [Float64Array, Float64Array, Float64Array, Float64Array, Float64Array];
   const mass = plan.mass;
   if (mass) {
-    const logFwhm = Math.log10(rng ? drawPositive(rng, mass.fwhm) : mass.fwhm.value);
-    const l = logL[mass.source] as number;
-    logM = virialLogMass(mass.cal, mass.l5100FromHbeta ? logL5100FromLogLHbeta(l) : l, logFwhm);
-    if (rng) logM += mass.cal.scatterDex * standardNormal(rng);
-  }
+    const L = b.logL[mass.source] as Float64Array;
+    for (let k = 0; k < n; k++) {
+      const l = L[k] as number;
+      logM[k] = virialLogMass(mass.cal, mass.l5100FromHbeta ? logL5100FromLogLHbeta(l) : l, logFwhm[k] as number) + (scatter[k] as number);
+    }
+  } else logM.fill(NaN);
 
-  let logLbol = NaN;
-  if (plan.lbol) {
-    const l = logL[plan.lbol.source] as number;
-    logLbol = rng && !Number.isNaN(scratch.lbolB) ? scratch.lbolA + scratch.lbolB * l : lbolRoute(plan, settings, l);
-  }
+  const lbol = plan.lbol;
+  if (lbol) {
+    const L = b.logL[lbol.source] as Float64Array;
+    // Every bolometric route here is a power law in L (fixed corrections, Netzer 2019's c·L^d,
+    // Greene & Ho 2005 eq. 1 inverted times BC5100): linear in log L. The draws use that form,
+    // after checking linearity at a third point, and skip the route's log10 calls.
+    const f0 = lbolRoute(plan, settings, 40);
+    const slope = lbolRoute(plan, settings, 41) - f0;
+    const linear = !nominal && Math.abs(f0 + 5 * slope - lbolRoute(plan, settings, 45)) < 1e-9;
+    if (linear) for (let k = 0; k < n; k++) logLbol[k] = f0 + slope * ((L[k] as number) - 40);
+    else for (let k = 0; k < n; k++) logLbol[k] = lbolRoute(plan, settings, L[k] as number);
+  } else logLbol.fill(NaN);
 
-  out[OUT.logMbh] = logM;
-  out[OUT.logLbol] = logLbol;
-  out[OUT.logEddRatio] = logLbol - scratch.logEddPerMsun - logM;
-  // The seed mass is a monotone map of log M: the draws need only the nominal value (deriveObject maps the percentiles).
-  out[OUT.logMseed] =
-    rng || Number.isNaN(plan.dtSeedGyr)
-      ? NaN
-      : logSeedMassRequired(logM, plan.dtSeedGyr, settings.efficiency, settings.lambdaSeed, settings.dutyCycle);
+  const logEddPerMsun = Math.log10(settings.eddingtonPerMsun);
+  for (let k = 0; k < n; k++) logEdd[k] = (logLbol[k] as number) - logEddPerMsun - (logM[k] as number);
 
-  let delta = NaN;
+  if (nominal && !Number.isNaN(plan.dtSeedGyr)) {
+    for (let k = 0; k < n; k++)
+      logMseed[k] = logSeedMassRequired(logM[k] as number, plan.dtSeedGyr, settings.efficiency, settings.lambdaSeed, settings.dutyCycle);
+  } else logMseed.fill(NaN);
+
   const local = plan.local;
-  if (local) {
-    const x = local.xIsSigma
-      ? Math.log10(rng ? drawPositive(rng, local.x) : local.x.value)
-      : rng
-        ? drawMeasured(rng, local.x)
-        : local.x.value;
-    delta = logM - localLogMbh(local.rel, x);
-  }
-  out[OUT.deltaLocal] = delta;
+  if (local) for (let k = 0; k < n; k++) delta[k] = (logM[k] as number) - localLogMbh(local.rel, x[k] as number);
+  else delta.fill(NaN);
 }
