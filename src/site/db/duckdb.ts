@@ -6,6 +6,10 @@
  *
  * Pages call `queryCensus(sql)`; `onDbState` lets them show a loading state while it starts.
  */
+// @duckdb/duckdb-wasm is pinned at 1.28.0 on purpose: measured here, releases from 1.29 on
+// fetch their Parquet reader from a remote extension host at the first query, so a self-hosted
+// site fails offline and depends on a third party; 1.28.0 has the Parquet reader built in and
+// its eh bundle is half the size. Do not call INSTALL or LOAD.
 import * as duckdb from '@duckdb/duckdb-wasm';
 import mvpWasm from '@duckdb/duckdb-wasm/dist/duckdb-mvp.wasm?url';
 import mvpWorker from '@duckdb/duckdb-wasm/dist/duckdb-browser-mvp.worker.js?url';
