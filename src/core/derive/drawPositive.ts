@@ -15,7 +15,7 @@ const MAX_REDRAWS = 64;
  * @returns a value > 0, in the units of `m`.
  */
 export function drawPositive(rng: Rng, m: Measured): number {
-  const lo = m.errLo ?? 0;
+  const lo = m.errLo ?? m.errHi ?? 0;
   const hi = m.errHi ?? lo;
   if (lo === 0 && hi === 0) return m.value;
   for (let i = 0; i < MAX_REDRAWS; i++) {
@@ -34,7 +34,7 @@ export function drawPositive(rng: Rng, m: Measured): number {
  * @param out - receives `out.length` draws.
  */
 export function drawPositiveInto(rng: Rng, m: Measured, out: Float64Array): void {
-  const lo = m.errLo ?? 0;
+  const lo = m.errLo ?? m.errHi ?? 0;
   const hi = m.errHi ?? lo;
   const v = m.value;
   if (lo === 0 && hi === 0) {
@@ -53,7 +53,7 @@ export function drawPositiveInto(rng: Rng, m: Measured, out: Float64Array): void
  * @param m - the measurement.
  */
 export function drawMeasured(rng: Rng, m: Measured): number {
-  const lo = m.errLo ?? 0;
+  const lo = m.errLo ?? m.errHi ?? 0;
   const hi = m.errHi ?? lo;
   return lo === 0 && hi === 0 ? m.value : splitNormal(rng, m.value, lo, hi);
 }
@@ -65,7 +65,7 @@ export function drawMeasured(rng: Rng, m: Measured): number {
  * @param out - receives `out.length` draws.
  */
 export function drawMeasuredInto(rng: Rng, m: Measured, out: Float64Array): void {
-  const lo = m.errLo ?? 0;
+  const lo = m.errLo ?? m.errHi ?? 0;
   const hi = m.errHi ?? lo;
   const v = m.value;
   if (lo === 0 && hi === 0) out.fill(v);

@@ -7,6 +7,7 @@ import { virialLogMass } from '../virial/virialCalibration.ts';
 import { logL5100FromLogLHbeta } from '../virial/lineContinuumRelations.ts';
 import { logLbolFromHalpha } from '../bolometric/logLbolFromHalpha.ts';
 import { logLbolFromContinuum } from '../bolometric/logLbolFromContinuum.ts';
+import { logLbolFixedBC } from '../bolometric/fixedCorrections.ts';
 import { logSeedMassRequired } from '../growth/salpeterGrowth.ts';
 import { localLogMbh } from '../local/localRelation.ts';
 import { drawMeasuredInto, drawPositiveInto } from './drawPositive.ts';
@@ -100,9 +101,9 @@ export function sampleInputs(plan: ObjectPlan, settings: DeriveSettings, rng: Rn
 function lbolRoute(plan: ObjectPlan, settings: DeriveSettings, logL: number): number {
   const lbol = plan.lbol;
   if (!lbol) return NaN;
-  return lbol.route === 'halpha'
-    ? logLbolFromHalpha(logL, settings.bc5100)
-    : logLbolFromContinuum(lbol.route, logL, { band: lbol.band, bc5100: settings.bc5100 });
+  if (lbol.route === 'halpha') return logLbolFromHalpha(logL, settings.bc5100);
+  if (lbol.route === 'hbeta') return logLbolFixedBC(logL5100FromLogLHbeta(logL), settings.bc5100);
+  return logLbolFromContinuum(lbol.route, logL, { band: lbol.band, bc5100: settings.bc5100 });
 }
 
 /**
@@ -138,7 +139,7 @@ export function evaluateChain(plan: ObjectPlan, settings: DeriveSettings, b: Cha
   if (lbol) {
     const L = b.logL[lbol.source] as Float64Array;
     // Every bolometric route here is a power law in L (fixed corrections, Netzer 2019's c·L^d,
-    // Greene & Ho 2005 eq. 1 inverted times BC5100): linear in log L. The draws use that form,
+    // Greene & Ho 2005 eq. 1 or 2 inverted times BC5100): linear in log L. The draws use that form,
     // after checking linearity at a third point, and skip the route's log10 calls.
     const f0 = lbolRoute(plan, settings, 40);
     const slope = lbolRoute(plan, settings, 41) - f0;

@@ -13,11 +13,12 @@ import type { LocalRelation } from '../local/localRelation.ts';
 import { snr } from './drawPositive.ts';
 
 /**
- * A copy of a measurement with both errors filled in. Every measurement the draws touch has
- * this one shape, so the hot loop's property reads stay monomorphic whatever the caller built.
+ * A copy of a measurement with both errors filled in; an error given on one side only is
+ * taken as symmetric (as a bare `_err` is). Every measurement the draws touch has this one
+ * shape, so the hot loop's property reads stay monomorphic whatever the caller built.
  */
 function spec(m: Measured): Measured {
-  const errLo = m.errLo ?? 0;
+  const errLo = m.errLo ?? m.errHi ?? 0;
   return { value: m.value, errLo, errHi: m.errHi ?? errLo };
 }
 
@@ -52,9 +53,10 @@ export interface MassPlan {
 }
 
 export interface LbolPlan {
-  /** Recorded in `lbol_method`, e.g. 'halpha_gh05_bc5100', 'bc3000', 'netzer19_l5100'. */
+  /** Recorded in `lbol_method`, e.g. 'halpha_gh05_bc5100', 'bc3000', 'netzer19_l5100', 'hbeta_gh05_bc5100'. */
   label: string;
-  route: 'halpha' | ContinuumBolometricMethod;
+  /** 'hbeta': L5100 estimated from L(Hβ) by Greene & Ho 2005 eq. 2, times BC5100 (the last resort). */
+  route: 'halpha' | 'hbeta' | ContinuumBolometricMethod;
   band?: ContinuumBand;
   source: number;
 }
@@ -151,8 +153,12 @@ export function planObject(inputs: ObjectInputs, settings: DeriveSettings): Obje
   const lbolLimit = lbol !== null && (sources[lbol.source] as LumSource).isLimit;
   if (lbolLimit) flags.add('lbol_upper_limit');
   if (mass && lbol) {
-    if (lbolLimit) flags.add('edd_ratio_upper_limit');
-    else if ((sources[mass.source] as LumSource).isLimit) flags.add('edd_ratio_lower_limit');
+    const massLimit = (sources[mass.source] as LumSource).isLimit;
+    // Both on limits: from the same flux λ ∝ L^(1−b·…) still rises with L (an upper limit);
+    // from two different limited fluxes it is not bounded either way.
+    if (lbolLimit && massLimit && lbol.source !== mass.source) flags.add('edd_ratio_unconstrained');
+    else if (lbolLimit) flags.add('edd_ratio_upper_limit');
+    else if (massLimit) flags.add('edd_ratio_lower_limit');
   }
 
   return { z, ageGyr, dlMpc, dtSeedGyr, logFourPiDl2, mu, dust, sources, used, mass, lbol, local: planLocal(inputs, settings, flags), flags };
@@ -203,9 +209,13 @@ function planLbol(
     );
   }
   if (method !== 'halpha_gh05_bc5100' && haPlan) candidates.push(haPlan);
+  // Last resort, as for the Hβ mass without a continuum: L5100 from L(Hβ).
+  const hb = lineSource.get('hbeta');
+  if (hb !== undefined) candidates.push({ label: 'hbeta_gh05_bc5100', route: 'hbeta', source: hb });
   const chosen = candidates[0] ?? null;
   if (!chosen) flags.add('no_lbol');
   else if (chosen.route !== (method === 'halpha_gh05_bc5100' ? 'halpha' : method)) flags.add('lbol_fallback');
+  if (chosen?.route === 'hbeta') flags.add('l5100_from_hbeta');
   return chosen;
 }
 

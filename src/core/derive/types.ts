@@ -11,7 +11,8 @@ export type LineId = (typeof LINES)[number];
 
 /**
  * A measured value with 1σ errors. `errLo`/`errHi` may differ (asymmetric, drawn as a
- * split normal); absent or 0 means the value is taken as exact.
+ * split normal); one side given alone is taken as symmetric; both absent or 0 means the
+ * value is taken as exact.
  */
 export interface Measured {
   value: number;

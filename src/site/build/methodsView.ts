@@ -92,6 +92,20 @@ export const BOLOMETRIC_METHODS: Record<string, { text: string; reference: strin
   bc3000: { text: `The measured 3000 Å continuum multiplied by a fixed bolometric correction (${BC_SHEN11.l3000.bc}).`, reference: BC_SHEN11.l3000.reference },
   bc1350: { text: `The measured 1350 Å continuum multiplied by a fixed bolometric correction (${BC_SHEN11.l1350.bc}).`, reference: BC_SHEN11.l1350.reference },
   netzer19: { text: 'Luminosity-dependent bolometric corrections k = c (λL_λ / 10^42 erg s⁻¹)^d, from the first continuum present (5100, 3000, 1350 Å).', reference: NETZER19.l5100.reference },
+  // Labels an object's lbol_method can carry besides the configured method ids.
+  ...Object.fromEntries(
+    (['l5100', 'l3000', 'l1350'] as const).map((band) => [
+      `netzer19_${band}`,
+      {
+        text: `The ${band.slice(1)} Å continuum with the luminosity-dependent correction k = ${NETZER19[band].c} (λL_λ / 10^42 erg s⁻¹)^${NETZER19[band].d}.`,
+        reference: NETZER19[band].reference,
+      },
+    ]),
+  ),
+  hbeta_gh05_bc5100: {
+    text: 'No Hα or continuum: the broad Hβ luminosity gives the 5100 Å continuum (Greene & Ho 2005, ApJ 630, 122, eq. 2, inverted), multiplied by BC5100.',
+    reference: BC5100_RICHARDS06.reference,
+  },
 };
 
 /** The local relation's record: from the sidecar when it recorded one, else the tool's own record of that id. */

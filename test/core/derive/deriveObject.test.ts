@@ -91,6 +91,35 @@ describe('deriveObject corrections', () => {
     expectClose(d.logLbol!, 44 + Math.log10(10.33), { atol: 1e-12, source: 'BC5100 = 10.33 (Richards et al. 2006), closed form' });
   });
 
+  it('gives an Hβ-only object without a continuum its L_bol through L5100 from L(Hβ), flagged', () => {
+    const inputs: ObjectInputs = { id: 'hb', z: 8.5, lines: { hbeta: { fwhmKms: { value: 2500 }, lumErgS: { value: 1e42 } } }, av: { value: 0 } };
+    const d = deriveObject(inputs, settings(), rngFor('hb'));
+    expect(d.lbolMethod).toBe('hbeta_gh05_bc5100');
+    expect(d.flags).toEqual(expect.arrayContaining(['lbol_fallback', 'l5100_from_hbeta']));
+    // Greene & Ho 2005 eq. 2 (coefficients from memory, as in src/core/virial): L_Hβ = 1.425e42 (L5100/1e44)^1.133, inverted; × BC5100 = 10.33
+    const logL5100 = 44 + (42 - Math.log10(1.425e42)) / 1.133;
+    expectClose(d.logLbol!, logL5100 + Math.log10(10.33), { atol: 1e-9, source: 'Greene & Ho 2005 eq. 2 inverted (from memory) × 10.33, closed form' });
+    expectClose(d.logL5100!, logL5100, { atol: 1e-9, source: 'Greene & Ho 2005 eq. 2 inverted (from memory), closed form' });
+  });
+
+  it('flags the Eddington ratio as unconstrained when mass and L_bol rest on two different limited fluxes', () => {
+    const inputs: ObjectInputs = {
+      id: 'two-limits',
+      z: 6,
+      lines: { hbeta: { fwhmKms: { value: 2500 }, fluxCgs: { value: 2e-18 }, fluxIsLimit: true }, halpha: { fluxCgs: { value: 6e-18 }, fluxIsLimit: true } },
+    };
+    const d = deriveObject(inputs, settings({ linePriority: ['hbeta', 'halpha'] }), rngFor('two-limits'));
+    expect(d.flags).toContain('edd_ratio_unconstrained');
+    expect(d.flags).not.toContain('edd_ratio_upper_limit');
+    expect(d.flags).toEqual(expect.arrayContaining(['mbh_upper_limit', 'lbol_upper_limit']));
+  });
+
+  it('takes an error given on one side only as symmetric', () => {
+    const one = deriveObject(haObject('e', 1e43, 2000, { logMstar: { value: 9.5, errHi: 0.3 } }), settings(), rngFor('e'));
+    const both = deriveObject(haObject('e', 1e43, 2000, { logMstar: { value: 9.5, errLo: 0.3, errHi: 0.3 } }), settings(), rngFor('e'));
+    expect(one.pct.deltaLogMbhLocal).toEqual(both.pct.deltaLogMbhLocal);
+  });
+
   it('says so when no line gives a mass and leaves the mass-based quantities empty', () => {
     const d = deriveObject({ id: 'x', z: 5, lines: { halpha: { lumErgS: { value: 1e42 } } } }, settings(), rngFor('x'));
     expect(d.logMbh).toBeNull();
