@@ -5,6 +5,7 @@
  */
 export const FLAG_DESCRIPTIONS = {
   invalid_input: 'An input value failed validation; no quantity was derived (see the rejection report).',
+  mass_line_fallback: 'A line earlier in the priority list has a width but not the luminosity its calibration needs; the mass comes from a later line (see mbh_method).',
   no_mass: 'No broad line had both a width and the luminosity its calibration needs: no black-hole mass.',
   no_lbol: 'No luminosity the bolometric methods can use: no bolometric luminosity.',
   lbol_fallback: 'The configured bolometric method lacked its input; another method was used (see lbol_method).',

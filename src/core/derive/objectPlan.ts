@@ -171,11 +171,15 @@ function planMass(
   bandSource: Map<ContinuumBand, number>,
   flags: Set<FlagId>,
 ): MassPlan | null {
+  // A width measured on a line earlier in the priority whose luminosity is missing: say so
+  // when a later line gives the mass.
+  let skipped = false;
   for (const line of settings.linePriority) {
     const fwhm = inputs.lines[line]?.fwhmKms;
     if (!fwhm) continue;
     const cal = getCalibration(settings.calibrations[line]);
     const source = cal.luminosity === 'line' ? lineSource.get(line) : bandSource.get(cal.luminosity);
+    if (skipped) flags.add('mass_line_fallback');
     if (source !== undefined) return { line, cal, fwhm: spec(fwhm), source, l5100FromHbeta: false };
     // Hβ masses calibrated on L5100 with no continuum measured: estimate L5100 from L(Hβ).
     const hb = lineSource.get('hbeta');
@@ -183,7 +187,9 @@ function planMass(
       flags.add('l5100_from_hbeta');
       return { line, cal, fwhm: spec(fwhm), source: hb, l5100FromHbeta: true };
     }
+    skipped = true;
   }
+  flags.delete('mass_line_fallback');
   flags.add('no_mass');
   return null;
 }

@@ -114,6 +114,19 @@ describe('deriveObject corrections', () => {
     expect(d.flags).toEqual(expect.arrayContaining(['mbh_upper_limit', 'lbol_upper_limit']));
   });
 
+  it('flags a mass taken from a later line when an earlier one has a width but no luminosity', () => {
+    const inputs: ObjectInputs = {
+      id: 'fb',
+      z: 6,
+      lines: { halpha: { fwhmKms: { value: 2000 } }, hbeta: { fwhmKms: { value: 2100 } } },
+      lamL5100: { value: 1e44 },
+    };
+    const d = deriveObject(inputs, settings(), rngFor('fb'));
+    expect(d.mbhMethod).toBe('vp06_hbeta');
+    expect(d.flags).toContain('mass_line_fallback');
+    expect(deriveObject(haObject('nf', 1e43, 2000), settings(), rngFor('nf')).flags).not.toContain('mass_line_fallback');
+  });
+
   it('takes an error given on one side only as symmetric', () => {
     const one = deriveObject(haObject('e', 1e43, 2000, { logMstar: { value: 9.5, errHi: 0.3 } }), settings(), rngFor('e'));
     const both = deriveObject(haObject('e', 1e43, 2000, { logMstar: { value: 9.5, errLo: 0.3, errHi: 0.3 } }), settings(), rngFor('e'));
