@@ -27,8 +27,14 @@ import type { RejectionEntry } from './rejectionReport.ts';
 import type { NormalizedRow } from '../normalize/normalizeChunk.ts';
 import { createWorkerPool } from './workerPool.ts';
 
-/** Rows per chunk read, normalized and sent to a worker. */
-export const DEFAULT_CHUNK_ROWS = 4096;
+/**
+ * Rows per chunk read, normalized and sent to a worker. Small on purpose: the rows of the
+ * chunks in flight (up to 2 × threads + 1) outlive several young-generation collections, so
+ * they reach V8's old generation, whose size V8 lets grow to a few times what is live; with
+ * 4096 rows a chunk the main thread's heap peaked ~250 MB higher, and smaller chunks cost no
+ * measurable time.
+ */
+export const DEFAULT_CHUNK_ROWS = 1024;
 
 /** What a derive run is asked to do. */
 export interface DeriveRunOptions {
@@ -42,7 +48,7 @@ export interface DeriveRunOptions {
   outputPath: string;
   /** Worker threads deriving; 1 derives in this thread. */
   threads: number;
-  /** Rows per chunk (default 4096). */
+  /** Rows per chunk (default DEFAULT_CHUNK_ROWS). */
   chunkRows?: number;
   /** Module exporting deriveObject (default: src/core/derive/deriveObject.ts); tests substitute a stand-in. */
   deriveModule?: string;

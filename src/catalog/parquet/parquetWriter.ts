@@ -36,16 +36,23 @@ export interface ParquetWriter {
 export interface ParquetWriterOptions {
   /** Directory for the scratch DuckDB database (created; the caller removes it). */
   scratchDir: string;
-  /** DuckDB memory limit, e.g. '512MB': the scratch table spills to disk beyond it. */
+  /**
+   * DuckDB memory limit (default '128MB'): DuckDB's buffer pool (the table's blocks, the rows
+   * appended since the last complete row group) is held under it; the table itself is on disk.
+   */
   memoryLimit?: string;
 }
+
+/** Default `memoryLimit` of the scratch database. */
+export const DEFAULT_SCRATCH_MEMORY_LIMIT = '128MB';
 
 const SQL_TYPE: Record<ValueKind, string> = { float: 'DOUBLE', int: 'BIGINT', bool: 'BOOLEAN', string: 'VARCHAR' };
 
 /**
  * Opens a writer for `parquetPath` with the given columns. Rows go to a DuckDB database on disk
  * in `scratchDir`, so a million-row catalog does not sit in memory, and are copied to Parquet by
- * `finish`.
+ * `finish`. Memory held: about one data chunk on the JS side, plus DuckDB's buffer pool
+ * (`memoryLimit`) and the row group COPY is compressing.
  */
 export async function openParquetWriter(
   parquetPath: string,
@@ -56,7 +63,7 @@ export async function openParquetWriter(
   const instance = await DuckDBInstance.create(path.join(options.scratchDir, 'rows.duckdb'), {
     threads: '1',
     preserve_insertion_order: 'true',
-    memory_limit: options.memoryLimit ?? '256MB',
+    memory_limit: options.memoryLimit ?? DEFAULT_SCRATCH_MEMORY_LIMIT,
     temp_directory: path.join(options.scratchDir, 'spill'),
   });
   let connection: DuckDBConnection | null = null;
@@ -76,6 +83,9 @@ export async function openParquetWriter(
     connection = await instance.connect();
     const defs = columns.map((c) => `${sqlIdentifier(c.name)} ${SQL_TYPE[c.kind]}`).join(', ');
     await connection.run(`CREATE TABLE rows (${defs})`);
+    // One transaction for all rows: the appended rows then go straight into the database file
+    // a row group at a time (not through the write-ahead log), and COMMIT in `finish` only links them.
+    await connection.run('BEGIN TRANSACTION');
     appender = await connection.createAppender('rows');
   } catch (error) {
     close();
@@ -97,6 +107,10 @@ export async function openParquetWriter(
     for (const v of vectors) v.flush();
     if (inChunk < VECTOR_ROWS) chunk.rowCount = inChunk;
     app.appendDataChunk(chunk);
+    // The appender keeps what it is given in its own buffer (outside DuckDB's memory limit) until
+    // it holds 100 data chunks, i.e. 204,800 rows: hundreds of MB for a wide catalog. Flushing
+    // each chunk hands the rows to the table at once, where the memory limit holds them.
+    app.flushSync();
     // One chunk, reused: its native memory is invisible to the JS garbage collector, so fresh
     // chunks would pile up unreleased.
     chunk.reset();
@@ -121,6 +135,7 @@ export async function openParquetWriter(
         app.flushSync();
         app.closeSync();
         appender = null;
+        await con.run('COMMIT');
         const kv = Object.entries(kvMetadata)
           .map(([k, v]) => `${sqlString(k)}: ${sqlString(v)}`)
           .join(', ');

@@ -81,6 +81,30 @@ describe('openParquetWriter', () => {
     expect(a.equals(b)).toBe(true);
   });
 
+  it('keeps every row, in order, past one row group under a small memory limit', async () => {
+    // 130,000 rows: more than one DuckDB row group (122,880 rows), so the transaction writes a
+    // complete row group to the scratch file before COMMIT; 16MB is far below the rows' size.
+    const n = 130_000;
+    const file = path.join(dir, 'big.parquet');
+    const w = await openParquetWriter(file, COLUMNS, { scratchDir: path.join(dir, 'scratch-big'), memoryLimit: '16MB' });
+    const buf: CellValue[] = new Array(COLUMNS.length);
+    for (let i = 0; i < n; i++) {
+      buf[0] = `o${i}`;
+      buf[1] = i + 1;
+      buf[2] = i / 3;
+      buf[3] = i % 2 === 0;
+      buf[4] = i % 5 ? -i : null;
+      w.appendRow(buf);
+    }
+    await w.finish({});
+    const [stats] = await query(
+      `SELECT count(*) AS n, count(*) FILTER (WHERE "row" = ordinal AND id = 'o' || (ordinal - 1) AND x = (ordinal - 1) / 3) AS matching,
+              count("odd ""name"", with comma") AS non_null
+       FROM (SELECT *, row_number() OVER () AS ordinal FROM '${file}')`,
+    );
+    expect(stats).toEqual({ n: BigInt(n), matching: BigInt(n), non_null: BigInt(n - Math.ceil(n / 5)) });
+  });
+
   it('writes nothing when aborted', async () => {
     const file = path.join(dir, 'aborted.parquet');
     const w = await openParquetWriter(file, COLUMNS, { scratchDir: path.join(dir, 'scratch') });
