@@ -6,18 +6,10 @@
 import { parseHTML } from 'linkedom';
 import { markClass } from '../../../src/site/charts/markTag.ts';
 import type { CatalogRow } from '../../../src/site/charts/types.ts';
+import { mulberry32 } from '../../../scripts/lib/demoRandom.ts';
 
-/** mulberry32 (public domain), for test data only. */
-export function seededUniform(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+/** Seeded uniform deviates for test data: the demo generator's mulberry32. */
+export const seededUniform = (seed: number): (() => number) => mulberry32(seed);
 
 export interface FakeOptions {
   n: number;
