@@ -8,7 +8,7 @@ export default defineConfig({
       {
         test: {
           name: 'unit',
-          include: ['test/core/**/*.test.ts', 'test/catalog/**/*.test.ts', 'test/site/**/*.test.ts', 'test/scripts/**/*.test.ts'],
+          include: ['test/core/**/*.test.ts', 'test/catalog/**/*.test.ts', 'test/site/**/*.test.ts', 'test/shared/**/*.test.ts', 'test/scripts/**/*.test.ts'],
           testTimeout: 60_000,
         },
       },

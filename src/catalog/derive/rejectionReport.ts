@@ -1,6 +1,6 @@
 import { createWriteStream } from 'node:fs';
 import type { WriteStream } from 'node:fs';
-import { csvField } from './csvField.ts';
+import { csvCell } from '../../shared/text/csvCell.ts';
 
 /** Columns of the rejection report, in order. */
 export const REJECTION_HEADER = ['row', 'id', 'column', 'value', 'reason', 'message'] as const;
@@ -18,6 +18,8 @@ export interface RejectionEntry {
 /**
  * Streams the rejection report (CSV: row, id, column, value, reason, message) to `path`. The
  * header is written even when no row has a problem, so a reader knows the rows were checked.
+ * Cells go through `csvCell`: a value starting like a formula gets a leading `'` and control
+ * characters are escaped, since the report is made to be opened in a spreadsheet.
  */
 export class RejectionReport {
   private readonly stream: WriteStream;
@@ -36,7 +38,7 @@ export class RejectionReport {
   /** Appends one entry (buffered; `flushed` waits for the buffer to drain). */
   add(e: RejectionEntry): void {
     this.count++;
-    this.stream.write(`${[e.row, e.id, e.column, e.value, e.reason, e.message].map(csvField).join(',')}\n`);
+    this.stream.write(`${[e.row, e.id, e.column, e.value, e.reason, e.message].map(csvCell).join(',')}\n`);
   }
 
   /** Resolves once buffered entries are handed to the OS (call now and then to bound memory). */

@@ -2,20 +2,7 @@ import { mkdtemp, readFile, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { csvField } from '../../../src/catalog/derive/csvField.ts';
 import { RejectionReport } from '../../../src/catalog/derive/rejectionReport.ts';
-
-describe('csvField', () => {
-  it('quotes fields with commas, quotes, line breaks or edge blanks and doubles their quotes (RFC 4180)', () => {
-    expect(csvField('plain')).toBe('plain');
-    expect(csvField('a,b')).toBe('"a,b"');
-    expect(csvField('say "hi"')).toBe('"say ""hi"""');
-    expect(csvField('two\nlines')).toBe('"two\nlines"');
-    expect(csvField(' padded')).toBe('" padded"');
-    expect(csvField(null)).toBe('');
-    expect(csvField(-1.5)).toBe('-1.5');
-  });
-});
 
 describe('RejectionReport', () => {
   it('writes the header even with no entries, then one line per entry', async () => {
@@ -31,6 +18,20 @@ describe('RejectionReport', () => {
       expect(r.count).toBe(1);
       expect(await readFile(path.join(dir, 'r.csv'), 'utf8')).toBe(
         'row,id,column,value,reason,message\n3,"X,1",fwhm_halpha,-5,must be positive,"row 3 (id X,1): fwhm_halpha = -5 km/s: must be positive"\n',
+      );
+    } finally {
+      await rm(dir, { recursive: true, force: true });
+    }
+  });
+
+  it('neutralises a formula-like id and escapes control characters in its cells (CSV injection)', async () => {
+    const dir = await mkdtemp(path.join(tmpdir(), 'dc-rej-'));
+    try {
+      const r = new RejectionReport(path.join(dir, 'r.csv'));
+      r.add({ row: 1, id: '=HYPERLINK("http://x")', column: 'z', value: '@1\u001b[2J', reason: 'not a number', message: 'row 1: z = @1\u001b[2J: not a number' });
+      await r.close();
+      expect(await readFile(path.join(dir, 'r.csv'), 'utf8')).toBe(
+        'row,id,column,value,reason,message\n1,"\'=HYPERLINK(""http://x"")",z,\'@1\\x1B[2J,not a number,row 1: z = @1\\x1B[2J: not a number\n',
       );
     } finally {
       await rm(dir, { recursive: true, force: true });

@@ -11,3 +11,15 @@ describe('resultCsv', () => {
     expect(resultCsv(rs, [2, 0, 1])).toBe('x\r\n3\r\n1\r\n2\r\n');
   });
 });
+
+describe('resultCsv in a spreadsheet', () => {
+  it('neutralises text cells that start like a formula and escapes control characters, but leaves numbers and numeric text as they are', () => {
+    const rs = {
+      names: ['id', 'z', 'note'],
+      types: ['Utf8', 'Float64', 'Utf8'],
+      numRows: 2,
+      columns: [['=HYPERLINK("http://x")', '-0042'], [-1.5, 6], ['@SUM(A1)', 'red\u001b[31m']],
+    };
+    expect(resultCsv(rs)).toBe('id,z,note\r\n"\'=HYPERLINK(""http://x"")",-1.5,\'@SUM(A1)\r\n-0042,6,red\\x1B[31m\r\n');
+  });
+});
