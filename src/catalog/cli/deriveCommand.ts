@@ -1,4 +1,3 @@
-import { stat } from 'node:fs/promises';
 import { availableParallelism } from 'node:os';
 import path from 'node:path';
 import { applyOverrides } from '../config/applyOverrides.ts';
@@ -7,6 +6,7 @@ import { defaultConfig } from '../config/defaultConfig.ts';
 import { displayPath, loadConfig } from '../config/loadConfig.ts';
 import { defaultOutputPath, outputPaths } from '../derive/outputPaths.ts';
 import { runDerive } from '../derive/runDerive.ts';
+import { OutputRefused } from '../outputs/OutputRefused.ts';
 import type { DeriveRunOptions, DeriveSummary } from '../derive/runDerive.ts';
 import type { TableFormat } from '../readers/types.ts';
 import type { TextOut } from './cliIo.ts';
@@ -14,6 +14,7 @@ import { formatCount, formatDuration } from './formatting.ts';
 import type { DeriveArgs } from './parseDeriveArgs.ts';
 import { createProgressReporter } from './progressReporter.ts';
 import { UsageError } from './UsageError.ts';
+import { terminalText } from '../../shared/text/terminalText.ts';
 
 /** A derive run fully resolved from the command line and the config. */
 export interface DerivePlan {
@@ -22,6 +23,8 @@ export interface DerivePlan {
   format?: TableFormat;
   outputPath: string;
   threads: number;
+  /** --force: replace outputs this tool did not write. */
+  force: boolean;
 }
 
 /**
@@ -29,8 +32,10 @@ export interface DerivePlan {
  * catalog is never read implicitly) with --draws/--seed applied; the catalog (the argument,
  * else the config's input.path); the output (-o, else the config's output, else
  * `<catalog name>.census.parquet` beside the catalog); the threads (--threads, else every
- * core). Throws UsageError when no catalog is named or the output would overwrite it, and
- * ConfigError for a bad config or override.
+ * core). Throws UsageError when no catalog is named or --threads exceeds the cores without
+ * --force; OutputRefused when the config's output lies outside the config's folder without
+ * --force; ConfigError for a bad config or override. The outputs themselves are checked by
+ * runDerive (checkOutputTargets) before anything is read.
  */
 export async function resolveDerivePlan(args: DeriveArgs): Promise<DerivePlan> {
   const loaded = args.config !== undefined ? await loadConfig(args.config) : defaultConfig();
@@ -50,9 +55,17 @@ export async function resolveDerivePlan(args: DeriveArgs): Promise<DerivePlan> {
   // The config's format describes its own input file, not another one named on the command line.
   const format = catalogAbs === fromConfig ? config.input?.format : undefined;
   const outputPath = args.output !== undefined ? path.resolve(args.output) : (config.output ?? defaultOutputPath(catalogAbs));
-  if (outputPath === catalogAbs) throw new UsageError(`the output ${displayPath(outputPath)} is the catalog itself; choose another with -o`);
-  if ((await stat(outputPath).catch(() => null))?.isDirectory()) {
-    throw new UsageError(`the output ${displayPath(outputPath)} is a folder; give a file name, e.g. ${displayPath(path.join(outputPath, 'catalog.parquet'))}`);
+  if (args.output === undefined && config.output !== undefined && config.configPath !== undefined && !args.force) {
+    const inside = path.relative(path.dirname(config.configPath), config.output);
+    if (inside === '' || inside.startsWith('..') || path.isAbsolute(inside)) {
+      throw new OutputRefused(
+        `${displayPath(config.configPath)} sets output to ${displayPath(config.output)}, outside the config's folder; add --force to write there, or choose the output with -o`,
+      );
+    }
+  }
+  const cores = availableParallelism();
+  if (args.threads !== undefined && args.threads > cores && !args.force) {
+    throw new UsageError(`--threads ${args.threads} is more than the ${cores} ${cores === 1 ? 'core' : 'cores'} of this machine; add --force to run that many anyway`);
   }
   return {
     config,
@@ -60,7 +73,8 @@ export async function resolveDerivePlan(args: DeriveArgs): Promise<DerivePlan> {
     catalogPath: displayPath(catalogAbs),
     ...(format ? { format } : {}),
     outputPath,
-    threads: args.threads ?? availableParallelism(),
+    threads: args.threads ?? cores,
+    force: args.force,
   };
 }
 
@@ -72,7 +86,7 @@ export async function resolveDerivePlan(args: DeriveArgs): Promise<DerivePlan> {
 export async function deriveCommand(
   args: DeriveArgs,
   err: TextOut,
-  extra: Pick<DeriveRunOptions, 'deriveModule' | 'chunkRows' | 'signal'> = {},
+  extra: Pick<DeriveRunOptions, 'deriveModule' | 'chunkRows' | 'signal' | 'batchTimeoutMs'> = {},
 ): Promise<DeriveSummary> {
   const plan = await resolveDerivePlan(args);
   const label = displayPath(plan.catalogPath);
@@ -84,6 +98,9 @@ export async function deriveCommand(
       ...extra,
       onProgress: (p) => reporter.progress(p),
       onRowProblem: (p) => reporter.problem(p),
+      onNotice: (text) => {
+        if (!args.quiet) err.write(`dawn-census: ${terminalText(text)}\n`);
+      },
     });
   } finally {
     reporter.finish(displayPath(outputPaths(plan.outputPath).rejections));
@@ -106,5 +123,5 @@ export function summaryText(s: DeriveSummary, plan: DerivePlan, label: string): 
     `Wrote ${displayPath(s.paths.catalog)} (${rows(s.rows)}, ${s.columns} columns) and ${displayPath(s.paths.meta)}`,
     `Done in ${formatDuration(s.elapsedMs)} (${formatCount(rate)} objects/s)`,
   ];
-  return `${lines.join('\n')}\n`;
+  return `${lines.map(terminalText).join('\n')}\n`;
 }

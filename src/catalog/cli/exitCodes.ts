@@ -6,8 +6,10 @@ export const EXIT = {
   failure: 1,
   /** The catalog or the config is unusable as a whole; nothing was written. */
   catalog: 2,
-  /** The command line is wrong (sysexits EX_USAGE). */
+  /** The command line is wrong, or an output may not be written (sysexits EX_USAGE). */
   usage: 64,
   /** Stopped by Ctrl-C (128 + SIGINT); nothing was written. */
   interrupted: 130,
+  /** Stopped by SIGTERM (128 + SIGTERM); nothing was written. */
+  terminated: 143,
 } as const;

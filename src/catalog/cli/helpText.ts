@@ -25,17 +25,24 @@ Options:
                         <catalog name>.census.parquet beside the catalog)
       --draws <n>       Monte Carlo draws per object (overrides the config)
       --seed <n>        global random seed (overrides the config)
-      --threads <n>     worker threads (default: one per core)
+      --threads <n>     worker threads (default: one per core; more than the cores
+                        needs --force)
+      --force           replace output files this tool did not write, write where a
+                        config's output points outside the config's folder, and allow
+                        more threads than cores. Never writes over the catalog itself,
+                        a folder, or a device, FIFO or file in /dev, /proc or /sys.
   -q, --quiet           print errors only: no progress, row problems or summary
   -h, --help            this help
 
 Writes, beside the output <name>.parquet:
   <name>.meta.json        settings, references, input and config SHA-256, counts, columns
   <name>.rejections.csv   every problem found in a row (header only when there is none)
-All three files are replaced together, and only when the run succeeds.
+All three files are replaced together, and only when the run succeeds. An existing file is
+replaced only when dawn-census wrote it (else add --force).
 
 Rows with problems stay in the output, flagged "invalid_input" with empty derived values.
 
 Exit status: 0 done; 1 unexpected failure; 2 the catalog or config cannot be used as a
-whole (nothing written); 64 wrong command line; 130 interrupted (nothing written).
+whole or changed while it was read (nothing written); 64 wrong command line or an output
+that may not be written; 130 interrupted by Ctrl-C, 143 stopped by SIGTERM (nothing written).
 `;

@@ -9,14 +9,17 @@ import { EXIT } from './exitCodes.ts';
 import { DERIVE_HELP, MAIN_HELP } from './helpText.ts';
 import { parseDeriveArgs } from './parseDeriveArgs.ts';
 import { UsageError } from './UsageError.ts';
+import { OutputRefused } from '../outputs/OutputRefused.ts';
+import { terminalText } from '../../shared/text/terminalText.ts';
 
-/** Substitutions for tests: a stand-in deriveObject module, a smaller chunk size. */
-export type MainOptions = Pick<DeriveRunOptions, 'deriveModule' | 'chunkRows'>;
+/** Substitutions for tests: a stand-in deriveObject module, a smaller chunk size, a shorter stall timeout. */
+export type MainOptions = Pick<DeriveRunOptions, 'deriveModule' | 'chunkRows' | 'batchTimeoutMs'>;
 
 /**
  * The `dawn-census` command: `derive`, `--help`, `--version`. Returns the exit status
  * (see EXIT): 0 done, 1 unexpected failure, 2 catalog or config unusable, 64 wrong usage.
- * Never throws: every error becomes one line on stderr.
+ * Never throws: every error becomes one line on stderr, its control characters shown as escapes
+ * (a catalog value or file name cannot recolour the terminal or add lines).
  */
 export async function main(argv: readonly string[], io: CliIo = processIo(), options: MainOptions = {}): Promise<number> {
   const [command, ...rest] = argv;
@@ -39,14 +42,17 @@ export async function main(argv: readonly string[], io: CliIo = processIo(), opt
       io.stdout.write(DERIVE_HELP);
       return EXIT.ok;
     }
-    // Ctrl-C stops the run between chunks so that its temporary files are removed.
+    // Ctrl-C and SIGTERM stop the run between chunks so that its temporary files are removed.
     const interrupt = new AbortController();
-    const onSigint = (): void => interrupt.abort(new Interrupted());
+    const onSigint = (): void => interrupt.abort(new Interrupted('SIGINT'));
+    const onSigterm = (): void => interrupt.abort(new Interrupted('SIGTERM'));
     process.once('SIGINT', onSigint);
+    process.once('SIGTERM', onSigterm);
     try {
       await deriveCommand(args, io.stderr, { ...options, signal: interrupt.signal });
     } finally {
       process.off('SIGINT', onSigint);
+      process.off('SIGTERM', onSigterm);
     }
     return EXIT.ok;
   } catch (error) {
@@ -54,28 +60,28 @@ export async function main(argv: readonly string[], io: CliIo = processIo(), opt
   }
 }
 
-/** The run was stopped by Ctrl-C. */
+/** The run was stopped by Ctrl-C (SIGINT) or SIGTERM. */
 class Interrupted extends Error {
   override name = 'Interrupted';
-  constructor() {
-    super('interrupted; nothing was written (an earlier output is unchanged)');
+  constructor(readonly signalName: 'SIGINT' | 'SIGTERM') {
+    super(signalName === 'SIGINT' ? 'interrupted; nothing was written (an earlier output is unchanged)' : 'stopped by SIGTERM; nothing was written (an earlier output is unchanged)');
   }
 }
 
 function reportError(error: unknown, io: CliIo): number {
   if (error instanceof Interrupted) {
-    io.stderr.write(`\ndawn-census: ${error.message}\n`);
-    return EXIT.interrupted;
+    io.stderr.write(`\ndawn-census: ${terminalText(error.message)}\n`);
+    return error.signalName === 'SIGINT' ? EXIT.interrupted : EXIT.terminated;
   }
-  if (error instanceof UsageError) {
-    io.stderr.write(`dawn-census: ${error.message}\n`);
+  if (error instanceof UsageError || error instanceof OutputRefused) {
+    io.stderr.write(`dawn-census: ${terminalText(error.message)}\n`);
     return EXIT.usage;
   }
   if (error instanceof CatalogError || error instanceof ConfigError) {
-    io.stderr.write(`${error.message}\n`);
+    io.stderr.write(`${terminalText(error.message)}\n`);
     return EXIT.catalog;
   }
   const message = error instanceof Error ? error.message : String(error);
-  io.stderr.write(`dawn-census: ${message.split('\n')[0]}\n`);
+  io.stderr.write(`dawn-census: ${terminalText(message.split('\n')[0]!)}\n`);
   return EXIT.failure;
 }

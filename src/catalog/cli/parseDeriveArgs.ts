@@ -16,6 +16,8 @@ export interface DeriveArgs {
   threads?: number;
   /** `--quiet`: no progress, problem lines or summary; errors only. */
   quiet: boolean;
+  /** `--force`: replace outputs not written by this tool, allow a config output outside its folder and more threads than cores. */
+  force: boolean;
   /** `--help`. */
   help: boolean;
 }
@@ -35,7 +37,8 @@ const VALUE_OPTIONS: Readonly<Record<string, ValueOption>> = {
   '--threads': 'threads',
 };
 
-const FLAG_OPTIONS: Readonly<Record<string, 'quiet' | 'help'>> = {
+const FLAG_OPTIONS: Readonly<Record<string, 'quiet' | 'help' | 'force'>> = {
+  '--force': 'force',
   '-q': 'quiet',
   '--quiet': 'quiet',
   '-h': 'help',
@@ -56,7 +59,7 @@ function integer(option: string, text: string): number {
  * second catalog. Ranges of `--draws` and `--seed` are checked with the config's rules later.
  */
 export function parseDeriveArgs(argv: readonly string[]): DeriveArgs {
-  const out: DeriveArgs = { quiet: false, help: false };
+  const out: DeriveArgs = { quiet: false, help: false, force: false };
   const seen = new Set<string>();
   let onlyPositional = false;
   for (let i = 0; i < argv.length; i++) {

@@ -2,6 +2,7 @@ import type { DeriveProgress } from '../derive/runDerive.ts';
 import type { RejectionEntry } from '../derive/rejectionReport.ts';
 import type { TextOut } from './cliIo.ts';
 import { formatCount, formatDuration } from './formatting.ts';
+import { terminalText } from '../../shared/text/terminalText.ts';
 
 /** Row problems printed one by one before the rest are only counted. */
 export const PROBLEMS_SHOWN = 20;
@@ -31,7 +32,7 @@ const PLAIN_INTERVAL_MS = 10_000;
  * On a terminal, one line redrawn in place: a bar, rows done, objects per second and the time
  * left. Elsewhere (a log file, CI), a plain line at every 10 % (every 10 s when the row count
  * is unknown). Nothing at all when quiet. Row problems are printed as they come, the first
- * {@link PROBLEMS_SHOWN}, then counted.
+ * {@link PROBLEMS_SHOWN}, then counted; their control characters are shown as escapes.
  */
 export function createProgressReporter(err: TextOut, opts: ProgressOptions): ProgressReporter {
   const now = opts.now ?? (() => performance.now());
@@ -90,7 +91,7 @@ export function createProgressReporter(err: TextOut, opts: ProgressOptions): Pro
       problems++;
       if (opts.quiet || problems > PROBLEMS_SHOWN) return;
       clearLine();
-      err.write(`${opts.label}: ${entry.message}\n`);
+      err.write(`${terminalText(`${opts.label}: ${entry.message}`)}\n`);
     },
     finish(reportPath) {
       clearLine();

@@ -1,5 +1,4 @@
-import { mkdir, writeFile } from 'node:fs/promises';
-import path from 'node:path';
+import { writeFile } from 'node:fs/promises';
 import type { ObjectInputs } from '../../core/derive/types.ts';
 import type { CensusConfig } from '../config/CensusConfig.ts';
 import { displayPath } from '../config/loadConfig.ts';
@@ -11,11 +10,15 @@ import { normalizeChunk } from '../normalize/normalizeChunk.ts';
 import { planColumns } from '../normalize/planColumns.ts';
 import { openParquetWriter } from '../parquet/parquetWriter.ts';
 import type { CellValue, ParquetWriter } from '../parquet/parquetWriter.ts';
-import { StagedFiles } from '../parquet/stagedFiles.ts';
+import { checkOutputTargets } from '../outputs/checkOutputTargets.ts';
+import { OutputSet } from '../outputs/OutputSet.ts';
+import { recoverLeftovers } from '../outputs/recoverLeftovers.ts';
+import { CatalogError } from '../readers/CatalogError.ts';
 import { openTable } from '../readers/openTable.ts';
 import type { TableFormat, TableSource } from '../readers/types.ts';
 import type { BatchDeriver } from './batchDeriver.ts';
 import { DuplicateIds } from './duplicateIds.ts';
+import { checkInputUnchanged, inputIdentity } from './inputIdentity.ts';
 import { createInProcessDeriver } from './inProcessDeriver.ts';
 import { buildOutputColumns, DERIVE_FAILED_FLAG, INVALID_INPUT_FLAG } from './outputColumns.ts';
 import type { OutputColumn, RowContext } from './outputColumns.ts';
@@ -58,6 +61,12 @@ export interface DeriveRunOptions {
   onProgress?: (p: DeriveProgress) => void;
   /** Called for each problem found in a row, in row order. */
   onRowProblem?: (p: RejectionEntry) => void;
+  /** Replace existing outputs even when this tool did not write them (never the input or a special file). */
+  force?: boolean;
+  /** Called with a sentence about something done besides the run (e.g. leftovers of a killed run removed). */
+  onNotice?: (text: string) => void;
+  /** A worker batch not answered within this many milliseconds ends the run (default: see workerPool). */
+  batchTimeoutMs?: number;
 }
 
 /** Progress of a run. */
@@ -95,18 +104,26 @@ interface PendingChunk {
  * Derives a catalog: opens it, plans its columns, streams it in chunks (normalized here,
  * derived on `threads` workers), and writes the rows in input order to a Parquet file with
  * provenance metadata, a `.meta.json` sidecar and a `.rejections.csv` report. All three are
- * written under temporary names and renamed into place only when the whole run succeeded.
+ * written into a temporary folder beside them and committed as a set only when the whole run
+ * succeeded (see OutputSet); leftovers of an earlier killed run for the same output are cleaned
+ * up first (see recoverLeftovers).
  *
- * Throws CatalogError for a problem with the catalog as a whole (unreadable, no id column,
- * duplicate ids, a passthrough column named like a derived one): then nothing is written and an
- * earlier output stays as it was. Problems of single rows do not stop the run: the row is
+ * Throws OutputRefused before reading anything when an output may not be written (the input
+ * itself, a special file, a file this tool did not write without `force`; see
+ * checkOutputTargets). Throws CatalogError for a problem with the catalog as a whole
+ * (unreadable, no id column, duplicate ids, a passthrough column named like a derived one, a
+ * file that changed while it was read): then nothing is written and an earlier output stays as
+ * it was. Problems of single rows do not stop the run: the row is
  * written with the flag `invalid_input` and null derived values, and listed in the report.
  */
 export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> {
   const started = performance.now();
   const settings = opts.config.settings;
   const paths = outputPaths(opts.outputPath);
-  const staged = new StagedFiles();
+  for (const note of await recoverLeftovers(paths)) opts.onNotice?.(note);
+  await checkOutputTargets(opts.catalogPath, paths, opts.force ?? false);
+  const identity = await inputIdentity(opts.catalogPath);
+  let staged: OutputSet | null = null;
   let source: TableSource | null = null;
   let writer: ParquetWriter | null = null;
   let report: RejectionReport | null = null;
@@ -120,15 +137,13 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
     const inputHash = sha256File(opts.catalogPath);
     inputHash.catch(() => undefined);
 
-    await mkdir(path.dirname(path.resolve(paths.catalog)), { recursive: true });
-    const parquetTemp = staged.stage(paths.catalog);
-    const metaTemp = staged.stage(paths.meta);
-    const reportTemp = staged.stage(paths.rejections);
-    writer = await openParquetWriter(parquetTemp, columns, { scratchDir: staged.scratchPath(paths.catalog, '.d') });
-    report = new RejectionReport(reportTemp);
+    const set = await OutputSet.create(paths);
+    staged = set;
+    writer = await openParquetWriter(set.staged('catalog'), columns, { scratchDir: set.scratch('rows') });
+    report = new RejectionReport(set.staged('rejections'));
     deriver =
       opts.threads > 1
-        ? createWorkerPool(opts.threads, settings, opts.deriveModule)
+        ? createWorkerPool(opts.threads, settings, opts.deriveModule, opts.batchTimeoutMs !== undefined ? { batchTimeoutMs: opts.batchTimeoutMs } : {})
         : await createInProcessDeriver(settings, opts.deriveModule);
 
     const label = displayPath(src.path);
@@ -202,10 +217,18 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
     deriver = null;
     await report.close();
     report = null;
+    // The rows derived and the hash recorded must come from the same bytes: the file must be the
+    // one opened (same inode, size and modification time), and hold as many rows as first counted.
+    const sha256 = await inputHash;
+    if (identity) await checkInputUnchanged(opts.catalogPath, label, identity);
+    if (rowsTotal !== undefined && counts.rows !== rowsTotal) {
+      throw new CatalogError(`${label}: the catalog changed while it was being read (${rowsTotal} rows counted when it was opened, ${counts.rows} read); nothing was written — derive again once it is complete`);
+    }
+    if (writer.rowCount !== counts.rows) throw new Error(`wrote ${writer.rowCount} rows for ${counts.rows} read; nothing was written`);
     const metadata = buildCatalogMetadata({
       config: opts.config,
       source: src,
-      inputSha256: await inputHash,
+      inputSha256: sha256,
       provenance,
       counts,
       paths,
@@ -214,8 +237,11 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
     });
     await writer.finish({ [METADATA_KEY]: catalogMetadataJson(metadata) });
     writer = null;
-    await writeFile(metaTemp, `${JSON.stringify(metadata, null, 2)}\n`);
-    await staged.commit();
+    await writeFile(set.staged('meta'), `${JSON.stringify(metadata, null, 2)}\n`);
+    // Files may have appeared at the output paths during the run: the same rules apply to them.
+    await checkOutputTargets(opts.catalogPath, paths, opts.force ?? false);
+    await set.commit();
+    staged = null;
     return {
       paths,
       ...counts,
@@ -227,7 +253,7 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
     await deriver?.close().catch(() => undefined);
     await report?.abandon();
     await writer?.abort();
-    await staged.discard();
+    await staged?.discard();
     throw error;
   } finally {
     await source?.close().catch(() => undefined);

@@ -11,29 +11,51 @@ interface Task {
   message: DeriveTaskMessage;
   resolve: (p: PackedDerived) => void;
   reject: (e: Error) => void;
+  /** The stall timer, while a worker holds the task. */
+  timer?: ReturnType<typeof setTimeout>;
+}
+
+/**
+ * Default time a worker may take over one batch before the run is stopped: ten minutes, far
+ * beyond any batch we measured (1024 objects × 10,000 draws take a few seconds).
+ */
+export const DEFAULT_BATCH_TIMEOUT_MS = 600_000;
+
+/** Options of {@link createWorkerPool}. */
+export interface WorkerPoolOptions {
+  /** A batch not answered within this many ms (from when a worker took it) fails the pool. */
+  batchTimeoutMs?: number;
 }
 
 /**
  * A pool of `threads` worker threads running deriveObject. Each worker takes one batch at a
  * time; further batches wait in a queue. The first failure of a worker (a module that does
- * not load, a crash) rejects every pending batch and every later one.
+ * not load, a crash, an exit in the middle of a batch whatever its exit code, or no answer to a
+ * batch within `batchTimeoutMs`) rejects every pending batch and every later one, with a
+ * one-line message, so the run ends instead of waiting forever.
  */
 export function createWorkerPool(
   threads: number,
   settings: DeriveSettings,
   deriveModule: string = DEFAULT_DERIVE_MODULE,
+  options: WorkerPoolOptions = {},
 ): BatchDeriver {
   const data: DeriveWorkerData = { settings, deriveModule };
+  const timeoutMs = options.batchTimeoutMs ?? DEFAULT_BATCH_TIMEOUT_MS;
   const queue: Task[] = [];
   const idle: Worker[] = [];
   const running = new Map<Worker, Task>();
   let failure: Error | null = null;
+  let closing = false;
   let seq = 0;
 
   const fail = (error: Error): void => {
     if (failure) return;
     failure = error;
-    for (const task of running.values()) task.reject(error);
+    for (const task of running.values()) {
+      clearTimeout(task.timer);
+      task.reject(error);
+    }
     running.clear();
     for (const task of queue.splice(0)) task.reject(error);
   };
@@ -43,6 +65,10 @@ export function createWorkerPool(
       const worker = idle.pop()!;
       const task = queue.shift()!;
       running.set(worker, task);
+      task.timer = setTimeout(() => {
+        const n = task.message.inputs.length.toLocaleString('en-US');
+        fail(new Error(`a derive worker stopped answering: no result for a batch of ${n} objects after ${formatSeconds(timeoutMs)}; the run was stopped`));
+      }, timeoutMs);
       worker.postMessage(task.message);
     }
   };
@@ -54,6 +80,7 @@ export function createWorkerPool(
       running.delete(worker);
       idle.push(worker);
       if (task) {
+        clearTimeout(task.timer);
         if ('packed' in answer) task.resolve(answer.packed);
         else task.reject(new Error(`derive worker failed on a batch: ${answer.error}`));
       }
@@ -61,7 +88,10 @@ export function createWorkerPool(
     });
     worker.on('error', (error) => fail(new Error(`derive worker failed: ${error.message}`)));
     worker.on('exit', (code) => {
-      if (code !== 0) fail(new Error(`derive worker exited with code ${code}`));
+      if (closing) return;
+      if (running.has(worker)) fail(new Error(`a derive worker exited (code ${code}) in the middle of a batch; the run was stopped`));
+      else if (code !== 0) fail(new Error(`derive worker exited with code ${code}`));
+      else fail(new Error('a derive worker exited before the run ended; the run was stopped'));
     });
     idle.push(worker);
     return worker;
@@ -77,8 +107,13 @@ export function createWorkerPool(
       });
     },
     async close(): Promise<void> {
+      closing = true;
       fail(new Error('derive pool closed'));
       await Promise.all(workers.map((w) => w.terminate()));
     },
   };
+}
+
+function formatSeconds(ms: number): string {
+  return ms >= 1000 ? `${(ms / 1000).toLocaleString('en-US')} s` : `${ms} ms`;
 }

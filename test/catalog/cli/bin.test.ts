@@ -44,24 +44,31 @@ describe('bin/dawn-census.js', () => {
     expect(await readdir(dir)).toEqual([]);
   });
 
-  it('stops on Ctrl-C with status 130, removing its temporary files and leaving an earlier output as it was', async () => {
+  it.each([
+    { signal: 'SIGINT', status: 130, message: 'dawn-census: interrupted; nothing was written (an earlier output is unchanged)' },
+    { signal: 'SIGTERM', status: 143, message: 'dawn-census: stopped by SIGTERM; nothing was written (an earlier output is unchanged)' },
+  ] as const)('stops on $signal with status $status, removing its temporary folder and leaving an earlier output set as it was', async ({ signal, status, message }) => {
     const input = path.join(dir, 'many.csv');
+    // An earlier output set at the same path, written by the tool from a small catalog.
+    await writeFile(input, 'id,z,fwhm_halpha,fwhm_halpha_err,lum_halpha,lum_halpha_err\nE-1,5.5,2100,200,4.6e42,0.5e42\n');
+    await run(process.execPath, [BIN, 'derive', input, '--draws', '20', '--threads', '1', '--quiet'], { cwd: dir });
+    const names = ['many.census.meta.json', 'many.census.parquet', 'many.census.rejections.csv'];
+    const earlier = await Promise.all(names.map((n) => readFile(path.join(dir, n))));
     const lines = ['id,z,fwhm_halpha,fwhm_halpha_err,lum_halpha,lum_halpha_err'];
     for (let i = 0; i < 20000; i++) lines.push(`M-${i},${(4 + (i % 60) / 10).toFixed(1)},${1000 + (i % 90) * 30},150,${2 + (i % 9)}e42,0.3e42`);
     await writeFile(input, lines.join('\n'));
-    await writeFile(path.join(dir, 'many.census.parquet'), 'earlier output');
     const child = spawn(process.execPath, [BIN, 'derive', input, '--draws', '2000', '--threads', '2'], { cwd: dir });
     let stderr = '';
     let sent = false;
     child.stderr.on('data', (d: Buffer) => {
       stderr += d.toString();
-      // One Ctrl-C (a second one would end the process at once, as usual).
-      if (!sent && /derive: \d+%/.test(stderr)) sent = child.kill('SIGINT');
+      // One signal (a second Ctrl-C would end the process at once, as usual).
+      if (!sent && /derive: \d+%/.test(stderr)) sent = child.kill(signal);
     });
     const code = await new Promise<number | null>((resolve) => child.on('exit', (c) => resolve(c)));
-    expect(code).toBe(130);
-    expect(stderr).toContain('dawn-census: interrupted; nothing was written (an earlier output is unchanged)');
-    expect((await readdir(dir)).sort()).toEqual(['many.census.parquet', 'many.csv']);
-    expect(await readFile(path.join(dir, 'many.census.parquet'), 'utf8')).toBe('earlier output');
+    expect(code, stderr).toBe(status);
+    expect(stderr).toContain(message);
+    expect((await readdir(dir)).sort()).toEqual([...names, 'many.csv']);
+    for (let i = 0; i < names.length; i++) expect((await readFile(path.join(dir, names[i]!))).equals(earlier[i]!), names[i]).toBe(true);
   });
 });

@@ -11,6 +11,7 @@ describe('parseDeriveArgs', () => {
       seed: 3,
       threads: 2,
       quiet: true,
+      force: false,
       help: false,
     });
   });
@@ -25,7 +26,7 @@ describe('parseDeriveArgs', () => {
   });
 
   it('leaves the catalog out when only a config is given', () => {
-    expect(parseDeriveArgs(['-c', 'c.yaml'])).toEqual({ config: 'c.yaml', quiet: false, help: false });
+    expect(parseDeriveArgs(['-c', 'c.yaml'])).toEqual({ config: 'c.yaml', quiet: false, help: false, force: false });
   });
 
   it('sees --help anywhere', () => {
