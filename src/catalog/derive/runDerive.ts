@@ -8,7 +8,7 @@ import { sha256File } from '../metadata/sha256.ts';
 import { settingsProvenance } from '../metadata/settingsProvenance.ts';
 import { normalizeChunk } from '../normalize/normalizeChunk.ts';
 import { planColumns } from '../normalize/planColumns.ts';
-import { openParquetWriter } from '../parquet/parquetWriter.ts';
+import { MAX_PARQUET_COLUMNS, openParquetWriter } from '../parquet/parquetWriter.ts';
 import type { CellValue, ParquetWriter } from '../parquet/parquetWriter.ts';
 import { checkOutputTargets } from '../outputs/checkOutputTargets.ts';
 import { OutputSet } from '../outputs/OutputSet.ts';
@@ -134,6 +134,12 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
     const plan = planColumns(src, opts.config);
     const provenance = settingsProvenance(settings);
     const columns = buildOutputColumns(plan, provenance);
+    if (columns.length > MAX_PARQUET_COLUMNS) {
+      const n = (x: number): string => x.toLocaleString('en-US');
+      throw new CatalogError(
+        `${displayPath(src.path)}: ${n(plan.passthrough.length)} columns to pass through, ${n(columns.length)} to write in all, more than the ${n(MAX_PARQUET_COLUMNS)} the output can hold; keep fewer columns in the catalog`,
+      );
+    }
     const inputHash = sha256File(opts.catalogPath);
     inputHash.catch(() => undefined);
 

@@ -3,6 +3,8 @@ import type { DeriveSettings, ObjectInputs } from '../../../src/core/derive/type
 
 /** URL of the test stand-in for deriveObject. */
 export const STAND_IN = new URL('./standIns/deriveObjectStandIn.ts', import.meta.url).href;
+/** URL of a stand-in that stalls on the id STALL and exits its worker on the id EXIT. */
+export const MISBEHAVING = new URL('./standIns/misbehavingDeriveModule.ts', import.meta.url).href;
 /** URL of a module that exports no deriveObject. */
 export const BROKEN = new URL('./standIns/brokenDeriveModule.ts', import.meta.url).href;
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { createInProcessDeriver } from '../../../src/catalog/derive/inProcessDeriver.ts';
 import { createWorkerPool } from '../../../src/catalog/derive/workerPool.ts';
-import { BROKEN, STAND_IN, someInputs, testSettings } from './fixtures.ts';
+import { BROKEN, MISBEHAVING, STAND_IN, someInputs, testSettings } from './fixtures.ts';
 
 describe('the derive worker pool', () => {
   it('loads the TypeScript worker through tsx and returns, batch by batch, exactly what the in-process deriver returns', async () => {
@@ -50,5 +50,30 @@ describe('the derive worker pool', () => {
       await pool.close();
     }
     await expect(createInProcessDeriver(testSettings(), BROKEN)).rejects.toThrow(/does not export a deriveObject function/);
+  });
+});
+
+describe('the derive worker pool when a worker misbehaves', () => {
+  it('fails the batch with a message, instead of waiting forever, when a worker stops answering', async () => {
+    const pool = createWorkerPool(2, testSettings(), MISBEHAVING, { batchTimeoutMs: 1500 });
+    try {
+      const inputs = someInputs(3);
+      inputs[1] = { ...inputs[1]!, id: 'STALL' };
+      await expect(pool.derive(inputs)).rejects.toThrow('a derive worker stopped answering: no result for a batch of 3 objects after 1.5 s; the run was stopped');
+      await expect(pool.derive(someInputs(2))).rejects.toThrow('stopped answering');
+    } finally {
+      await pool.close();
+    }
+  });
+
+  it('fails the batch with a message when a worker exits in the middle of it, even with exit status 0', async () => {
+    const pool = createWorkerPool(2, testSettings(), MISBEHAVING);
+    try {
+      const inputs = someInputs(3);
+      inputs[2] = { ...inputs[2]!, id: 'EXIT' };
+      await expect(pool.derive(inputs)).rejects.toThrow('a derive worker exited (code 0) in the middle of a batch; the run was stopped');
+    } finally {
+      await pool.close();
+    }
   });
 });
