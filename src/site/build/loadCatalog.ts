@@ -2,10 +2,12 @@
  * Reads the derived catalog at build time (Node, @duckdb/node-api): every row for the object
  * pages, a summary for the landing page, and the metadata sidecar. Read once per build.
  */
-import { readFileSync } from 'node:fs';
+import { createWriteStream, readFileSync } from 'node:fs';
+import { once } from 'node:events';
 import { DuckDBInstance } from '@duckdb/node-api';
 import { catalogFiles, type CatalogFiles } from './catalogFiles.ts';
 import { normalizeMeta, type SiteMeta } from './siteMeta.ts';
+import { csvCell } from '../../shared/text/csvCell.ts';
 import { objectPagesMode, type ObjectPagesMode } from '../objectLink.ts';
 
 /** A catalog value as the pages see it. */
@@ -112,13 +114,25 @@ export function loadCatalog(): Promise<SiteCatalog> {
   return cached;
 }
 
-/** Writes the catalog as CSV (header line, RFC 4180 quoting) with DuckDB's COPY and returns the bytes. */
+/**
+ * Writes the catalog as CSV (header line, RFC 4180 quoting, `\n` line ends) and returns the
+ * bytes. Cells go through the shared `csvCell`, as the query download does: text that starts
+ * like a spreadsheet formula gets a leading `'` and control characters are escaped; numbers are
+ * written as JavaScript prints them (shortest round-trip form), missing values empty.
+ */
 export async function catalogCsv(parquet: string, csvPath: string): Promise<Buffer> {
   const instance = await DuckDBInstance.create(':memory:');
   const con = await instance.connect();
+  const out = createWriteStream(csvPath, { encoding: 'utf8' });
   try {
-    await con.run(`COPY (SELECT * FROM read_parquet(${quote(parquet)})) TO ${quote(csvPath)} (FORMAT csv, HEADER true)`);
+    const result = await con.stream(`SELECT * FROM read_parquet(${quote(parquet)})`);
+    out.write(`${result.columnNames().map(csvCell).join(',')}\n`);
+    for (let chunk = await result.fetchChunk(); chunk && chunk.rowCount > 0; chunk = await result.fetchChunk()) {
+      const lines = chunk.getRows().map((row) => row.map((v) => (typeof v === 'number' && !Number.isFinite(v) ? '' : csvCell(v))).join(','));
+      if (!out.write(`${lines.join('\n')}\n`)) await once(out, 'drain');
+    }
   } finally {
+    await new Promise<void>((resolve, reject) => out.end((e?: Error | null) => (e ? reject(e) : resolve())));
     con.closeSync();
     instance.closeSync();
   }

@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { DuckDBInstance } from '@duckdb/node-api';
 import { catalogFiles } from '../../../src/site/build/catalogFiles.ts';
 import { catalogCsv, readCatalog } from '../../../src/site/build/loadCatalog.ts';
 import { methodsView } from '../../../src/site/build/methodsView.ts';
@@ -40,6 +41,19 @@ describe('reading the catalog at build time', () => {
     const lines = bytes.toString('utf8').trim().split('\n');
     expect(lines[0]!.split(',')[0]).toBe('id');
     expect(lines).toHaveLength(13);
+  });
+
+  it('makes the CSV download safe for spreadsheets: formula-like text neutralised, control characters escaped, numbers as they are', async () => {
+    const parquet = join(dir, 'hostile.parquet');
+    const db = await DuckDBInstance.create(':memory:');
+    const con = await db.connect();
+    await con.run(
+      `COPY (SELECT * FROM (VALUES ('=HYPERLINK("http://x")', -1.5::DOUBLE, 3::BIGINT, 'a\x1b[31mb'), ('-0042', NULL, -2::BIGINT, '@SUM(A1)')) t(id, log_mbh, n, notes)) TO '${parquet}' (FORMAT parquet)`,
+    );
+    con.closeSync();
+    db.closeSync();
+    const text = (await catalogCsv(parquet, join(dir, 'hostile.csv'))).toString('utf8');
+    expect(text).toBe('id,log_mbh,n,notes\n"\'=HYPERLINK(""http://x"")",-1.5,3,a\\x1B[31mb\n-0042,,-2,\'@SUM(A1)\n');
   });
 
   it('arranges one object for its page: inputs with errors, derived values with 16–84 intervals, flags in words', async () => {
