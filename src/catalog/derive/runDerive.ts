@@ -224,7 +224,8 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
     await report.close();
     report = null;
     // The rows derived and the hash recorded must come from the same bytes: the file must be the
-    // one opened (same inode, size and modification time), and hold as many rows as first counted.
+    // one opened (same inode, size, modification and status-change times), and hold as many rows
+    // as were counted when it was opened.
     const sha256 = await inputHash;
     if (identity) await checkInputUnchanged(opts.catalogPath, label, identity);
     if (rowsTotal !== undefined && counts.rows !== rowsTotal) {
