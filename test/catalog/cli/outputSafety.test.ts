@@ -151,6 +151,8 @@ describe('the run itself', () => {
     const r = await run(['cat.csv', '--threads', String(cores + 1)]);
     expect(r).toEqual({ status: 64, out: '', err: `dawn-census: --threads ${cores + 1} is more than the ${cores} ${cores === 1 ? 'core' : 'cores'} of this machine; add --force to run that many anyway\n` });
     expect(await readdir('.')).toEqual(['cat.csv']);
+    const forced = await run(['cat.csv', '--threads', String(cores + 1), '--force', '--quiet']);
+    expect(forced.status, forced.err).toBe(0);
   });
 
   it('ends with a one-line message, writing nothing, when a worker stalls in the middle of a batch', async () => {
@@ -178,6 +180,8 @@ describe('the run itself', () => {
         'cat.csv: duplicate id "Y\\x1B[2J Z" at rows 2 and 3\n',
     );
     expect(r.err).not.toContain('\u001b');
+    const usage = await run(['a\u001b[31m.csv', 'b\u202e.csv']);
+    expect(usage).toEqual({ status: 64, out: '', err: 'dawn-census: more than one catalog given ("a\\x1B[31m.csv" and "b\\u202E.csv"); derive reads one catalog\n' });
   });
 });
 
