@@ -26,6 +26,11 @@ import { RejectionReport } from './rejectionReport.ts';
 import type { RejectionEntry } from './rejectionReport.ts';
 import type { NormalizedRow } from '../normalize/normalizeChunk.ts';
 import { createWorkerPool } from './workerPool.ts';
+import { defaultReadingsConfig } from '../config/readingsConfig.ts';
+import { READINGS_COLUMNS } from '../readings/readingsColumns.ts';
+import type { ReadingRowContext } from '../readings/readingsColumns.ts';
+import { buildReadingsMetadata, READINGS_METADATA_KEY } from '../readings/readingsMetadata.ts';
+import { summarizeReadings } from '../readings/summarizeReadings.ts';
 
 /**
  * Rows per chunk read, normalized and sent to a worker. Small on purpose: the rows of the
@@ -109,6 +114,7 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
   const staged = new StagedFiles();
   let source: TableSource | null = null;
   let writer: ParquetWriter | null = null;
+  let readingsWriter: ParquetWriter | null = null;
   let report: RejectionReport | null = null;
   let deriver: BatchDeriver | null = null;
   try {
@@ -124,12 +130,20 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
     const parquetTemp = staged.stage(paths.catalog);
     const metaTemp = staged.stage(paths.meta);
     const reportTemp = staged.stage(paths.rejections);
+    const readingsTemp = staged.stage(paths.readings);
     writer = await openParquetWriter(parquetTemp, columns, { scratchDir: staged.scratchPath(paths.catalog, '.d') });
+    readingsWriter = await openParquetWriter(readingsTemp, READINGS_COLUMNS, { scratchDir: staged.scratchPath(paths.readings, '.d') });
     report = new RejectionReport(reportTemp);
+    const readingsConfig = opts.config.readings ?? defaultReadingsConfig();
+    const batchReadings = {
+      primary: readingsConfig.readings.find((r) => r.id === readingsConfig.primary) ?? readingsConfig.readings[0]!,
+      list: readingsConfig.readings,
+    };
     deriver =
       opts.threads > 1
-        ? createWorkerPool(opts.threads, settings, opts.deriveModule)
-        : await createInProcessDeriver(settings, opts.deriveModule);
+        ? createWorkerPool(opts.threads, settings, opts.deriveModule, batchReadings)
+        : await createInProcessDeriver(settings, opts.deriveModule, batchReadings);
+    const readingValues: CellValue[] = new Array<CellValue>(READINGS_COLUMNS.length);
 
     const label = displayPath(src.path);
     const duplicates = new DuplicateIds(label, plan.seenIds);
@@ -167,6 +181,18 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
         const ctx = rowContext(row, own, index);
         fillRow(values, columns, ctx);
         writer!.appendRow(values);
+        batchReadings.list.forEach((r, j) => {
+          const under = ctx.packed?.readings?.[j] ?? null;
+          const rc: ReadingRowContext = {
+            id: row.id,
+            reading: r.id,
+            packed: under,
+            k: index,
+            flags: under ? under.flags[index]! : ctx.flags,
+          };
+          for (let i = 0; i < READINGS_COLUMNS.length; i++) readingValues[i] = READINGS_COLUMNS[i]!.value(rc);
+          readingsWriter!.appendRow(readingValues);
+        });
       }
       counts.rows += chunk.rows.length;
       await report!.flushed();
@@ -202,6 +228,10 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
     deriver = null;
     await report.close();
     report = null;
+    const readingsMeta = buildReadingsMetadata(batchReadings.primary.id, path.basename(paths.readings), batchReadings.list, READINGS_COLUMNS);
+    await readingsWriter.finish({ [READINGS_METADATA_KEY]: JSON.stringify(readingsMeta) });
+    readingsWriter = null;
+    readingsMeta.summary = await summarizeReadings(readingsTemp, batchReadings.list.map((r) => r.id));
     const metadata = buildCatalogMetadata({
       config: opts.config,
       source: src,
@@ -211,6 +241,7 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
       paths,
       columns,
       inputColumns: plan.canonical,
+      readings: readingsMeta,
     });
     await writer.finish({ [METADATA_KEY]: catalogMetadataJson(metadata) });
     writer = null;
@@ -227,6 +258,7 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
     await deriver?.close().catch(() => undefined);
     await report?.abandon();
     await writer?.abort();
+    await readingsWriter?.abort();
     await staged.discard();
     throw error;
   } finally {

@@ -2,6 +2,7 @@ import { Worker } from 'node:worker_threads';
 import type { DeriveSettings, ObjectInputs } from '../../core/derive/types.ts';
 import { DEFAULT_DERIVE_MODULE } from './batchDeriver.ts';
 import type { BatchDeriver } from './batchDeriver.ts';
+import type { BatchReadings } from './deriveBatch.ts';
 import type { DeriveResultMessage, DeriveTaskMessage, DeriveWorkerData } from './deriveWorker.ts';
 import type { PackedDerived } from './packedDerived.ts';
 
@@ -22,8 +23,9 @@ export function createWorkerPool(
   threads: number,
   settings: DeriveSettings,
   deriveModule: string = DEFAULT_DERIVE_MODULE,
+  readings?: BatchReadings,
 ): BatchDeriver {
-  const data: DeriveWorkerData = { settings, deriveModule };
+  const data: DeriveWorkerData = { settings, deriveModule, ...(readings ? { readings } : {}) };
   const queue: Task[] = [];
   const idle: Worker[] = [];
   const running = new Map<Worker, Task>();

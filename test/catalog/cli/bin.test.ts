@@ -24,7 +24,7 @@ describe('bin/dawn-census.js', () => {
     await writeFile(input, 'id,z,fwhm_halpha,fwhm_halpha_err,lum_halpha,lum_halpha_err\nT-1,5.5,2100,200,4.6e42,0.5e42\nT-2,6.5,1200,150,2.3e42,0.3e42\nT-3,5.0,,,,\n');
     const { stderr } = await run(process.execPath, [BIN, 'derive', input, '--draws', '200', '--threads', '2'], { cwd: dir });
     expect(stderr).toContain('Read 3 rows from tiny.csv');
-    expect((await readdir(dir)).sort()).toEqual(['tiny.census.meta.json', 'tiny.census.parquet', 'tiny.census.rejections.csv', 'tiny.csv']);
+    expect((await readdir(dir)).sort()).toEqual(['tiny.census.meta.json', 'tiny.census.parquet', 'tiny.census.readings.parquet', 'tiny.census.rejections.csv', 'tiny.csv']);
     const db = await DuckDBInstance.create(':memory:');
     const con = await db.connect();
     const rows = (await con.runAndReadAll(`SELECT id, log_mbh, log_mbh_p16, log_mbh_p84 FROM '${path.join(dir, 'tiny.census.parquet')}' ORDER BY row`)).getRowObjectsJS();

@@ -93,7 +93,7 @@ describe('dawn-census', () => {
     await writeFile('my.yaml', 'title: Mine\ninput: { path: cat.csv }\noutput: out/mine.parquet\ndraws: 30\nseed: 5\n');
     const r = await run(['derive', '-c', 'my.yaml', '--quiet']);
     expect(r).toEqual({ status: 0, out: '', err: '' });
-    expect((await readdir('out')).sort()).toEqual(['mine.meta.json', 'mine.parquet', 'mine.rejections.csv']);
+    expect((await readdir('out')).sort()).toEqual(['mine.meta.json', 'mine.parquet', 'mine.readings.parquet', 'mine.rejections.csv']);
     const meta = JSON.parse(await readFile('out/mine.meta.json', 'utf8'));
     expect(meta.title).toBe('Mine');
     expect(meta.config.file).toBe('my.yaml');
