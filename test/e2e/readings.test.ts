@@ -115,4 +115,27 @@ describe('readings', () => {
       await site.close();
     }
   });
+
+  it('places a new object under every reading', async () => {
+    const site = await openSite(browser, inject('siteUrl'));
+    try {
+      const { page } = site;
+      await page.goto(new URL('place/', inject('siteUrl')).href);
+      await page.fill('#place-id', 'INVENTED-READINGS-1');
+      await page.fill('#place-z', '6.3');
+      await page.fill('#place-fwhm', '2400');
+      await page.fill('#place-fwhm_err', '200');
+      await page.selectOption('#place-strength_unit', '1e-18 erg s-1 cm-2');
+      await page.fill('#place-strength', '8.5');
+      await page.fill('#place-strength_err', '0.6');
+      await page.click('#place-form button[type=submit]');
+      await page.waitForSelector('[data-place-readings]');
+      expect(await page.locator('[data-place-readings] [data-reading-value]').evaluateAll((rows) => rows.map((r) => (r as HTMLElement).dataset.readingValue))).toEqual(READINGS);
+      const masses = await page.locator('[data-place-readings] tbody tr td:nth-of-type(1)').allTextContents();
+      // The scattering reading (no core width: deflation 10) lowers the Hα mass by 2.06 dex (FWHM exponent 2.06, Reines & Volonteri 2015 eq. 5).
+      expect(Number(masses[0]) - Number(masses[1])).toBeCloseTo(2.06, 1);
+    } finally {
+      await site.close();
+    }
+  });
 });
