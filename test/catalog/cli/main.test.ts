@@ -81,7 +81,7 @@ describe('dawn-census', () => {
     expect(r.err).toContain('Derived 2 (40 draws each, seed 1, 1 thread)\n');
     expect(r.err).toContain('Flagged 1 row with input problems (1 problem): listed in cat.census.rejections.csv\n');
     expect(r.err).toMatch(/Wrote cat\.census\.parquet \(3 rows, \d+ columns\) and cat\.census\.meta\.json\n/);
-    expect((await readdir('.')).sort()).toEqual(['cat.census.meta.json', 'cat.census.parquet', 'cat.census.rejections.csv', 'cat.csv', 'census.config.yaml']);
+    expect((await readdir('.')).sort()).toEqual(['cat.census.meta.json', 'cat.census.parquet', 'cat.census.readings.parquet', 'cat.census.rejections.csv', 'cat.csv', 'census.config.yaml']);
     const meta = JSON.parse(await readFile('cat.census.meta.json', 'utf8'));
     expect(meta.title).toBeUndefined();
     expect(meta.config).toEqual({ file: null, sha256: null });
