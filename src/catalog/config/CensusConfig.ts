@@ -1,5 +1,6 @@
 import type { DeriveSettings } from '../../core/derive/types.ts';
 import type { TableFormat } from '../readers/types.ts';
+import type { ReadingsConfig } from './readingsConfig.ts';
 
 /** How one canonical column is read from the catalog file. */
 export interface ColumnMapping {
@@ -22,6 +23,8 @@ export interface CensusConfig {
   columns: Record<string, ColumnMapping>;
   /** Every choice of the derivation. */
   settings: DeriveSettings;
+  /** Readings of the broad lines to derive under (default: the four built-ins, primary 'standard'). */
+  readings?: ReadingsConfig;
   /** Where the Parquet catalog is written: absolute path. */
   output?: string;
   /** Site options; `base` starts and ends with '/'. */

@@ -7,3 +7,4 @@ export * from './validateConfig.ts';
 export * from './knownIds.ts';
 export * from './checkUnit.ts';
 export * from './closestNames.ts';
+export * from './readingsConfig.ts';

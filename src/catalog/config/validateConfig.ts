@@ -15,12 +15,13 @@ import {
   LOCAL_RELATION_IDS,
 } from './knownIds.ts';
 import { checkUnit } from './checkUnit.ts';
+import { validateReadingsConfig } from './readingsConfig.ts';
 
 /** Top-level keys of a census config. */
 export const CONFIG_KEYS = [
   'title', 'group', 'description', 'licence', 'citation', 'input', 'columns', 'cosmology', 'calibrations',
   'bolometric', 'bc5100', 'eddington_per_msun', 'efficiency', 'z_seed', 'lambda_seed', 'duty_cycle', 'seeds',
-  'local_relation', 'dust_curve', 'intrinsic_balmer', 'line_priority', 'draws', 'seed', 'output', 'site',
+  'local_relation', 'dust_curve', 'intrinsic_balmer', 'line_priority', 'draws', 'seed', 'output', 'site', 'readings',
 ] as const;
 
 /** Largest number of Monte Carlo draws per object. */
@@ -193,6 +194,8 @@ export function validateConfig(doc: unknown, label: string, baseDir: string): Ce
     if (o.trim() === '') fail('output is empty');
     cfg.output = path(o);
   }
+
+  if (has('readings')) cfg.readings = validateReadingsConfig(doc.readings, fail);
 
   if (has('site')) {
     const site = doc.site;

@@ -3,6 +3,14 @@ import { createRng, seedFor } from '../../core/random/index.ts';
 import type { Rng } from '../../core/random/index.ts';
 import { allocatePacked, packInto } from './packedDerived.ts';
 import type { PackedDerived } from './packedDerived.ts';
+import type { Reading } from '../../core/readings/reading.ts';
+import { deriveUnderReading } from '../../core/readings/deriveUnderReading.ts';
+
+/** The readings of a run: the primary one fills the main catalog; `list` fills the readings table. */
+export interface BatchReadings {
+  primary: Reading;
+  list: readonly Reading[];
+}
 
 /** Signature of `deriveObject` (src/core/derive/deriveObject.ts). */
 export type DeriveObjectFn = (inputs: ObjectInputs, settings: DeriveSettings, rng: Rng) => DerivedObject;
@@ -17,15 +25,28 @@ export function deriveBatch(
   inputs: readonly ObjectInputs[],
   settings: DeriveSettings,
   deriveObject: DeriveObjectFn,
+  readings?: BatchReadings,
 ): PackedDerived {
   const packed = allocatePacked(inputs.length);
+  const under = readings ? readings.list.map(() => allocatePacked(inputs.length)) : null;
+  const rngOf = (id: string): Rng => createRng(seedFor(settings.seed, id));
   for (let i = 0; i < inputs.length; i++) {
     const input = inputs[i]!;
     try {
-      packInto(packed, i, deriveObject(input, settings, createRng(seedFor(settings.seed, input.id))));
+      const main = readings ? deriveUnderReading(input, settings, readings.primary, deriveObject, rngOf(input.id)) : deriveObject(input, settings, rngOf(input.id));
+      packInto(packed, i, main);
+      if (readings && under) {
+        // Each reading draws from the object's own stream afresh: the same draws under every reading.
+        readings.list.forEach((r, j) => {
+          const d = r.id === readings.primary.id ? main : deriveUnderReading(input, settings, r, deriveObject, rngOf(input.id));
+          packInto(under[j]!, i, d);
+        });
+      }
     } catch (error) {
       packed.errors[i] = error instanceof Error ? error.message : String(error);
+      if (under) for (const u of under) u.errors[i] = packed.errors[i]!;
     }
   }
+  if (under) packed.readings = under;
   return packed;
 }

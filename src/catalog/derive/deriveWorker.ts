@@ -1,7 +1,7 @@
 import type { MessagePort } from 'node:worker_threads';
 import type { DeriveSettings, ObjectInputs } from '../../core/derive/types.ts';
 import { deriveBatch } from './deriveBatch.ts';
-import type { DeriveObjectFn } from './deriveBatch.ts';
+import type { BatchReadings, DeriveObjectFn } from './deriveBatch.ts';
 import type { PackedDerived } from './packedDerived.ts';
 
 /** What the pool hands each worker at start-up (`workerData`). */
@@ -9,6 +9,8 @@ export interface DeriveWorkerData {
   settings: DeriveSettings;
   /** URL of the module exporting deriveObject. */
   deriveModule: string;
+  /** The run's readings, when it derives any. */
+  readings?: BatchReadings;
 }
 
 /** A batch sent to a worker. */
@@ -28,11 +30,14 @@ export function serveDeriveWorker(port: MessagePort, data: DeriveWorkerData, der
   port.on('message', (task: DeriveTaskMessage) => {
     let answer: DeriveResultMessage;
     try {
-      answer = { seq: task.seq, packed: deriveBatch(task.inputs, data.settings, deriveObject) };
+      answer = { seq: task.seq, packed: deriveBatch(task.inputs, data.settings, deriveObject, data.readings) };
     } catch (error) {
       answer = { seq: task.seq, error: error instanceof Error ? error.message : String(error) };
     }
-    if ('packed' in answer) port.postMessage(answer, [answer.packed.numbers.buffer as ArrayBuffer]);
+    if ('packed' in answer) {
+      const buffers = [answer.packed, ...(answer.packed.readings ?? [])].map((p) => p.numbers.buffer as ArrayBuffer);
+      port.postMessage(answer, buffers);
+    }
     else port.postMessage(answer);
   });
 }

@@ -8,15 +8,17 @@ export interface OutputPaths {
   meta: string;
   /** Rejection report: `<name>.rejections.csv`. */
   rejections: string;
+  /** The readings table: `<name>.readings.parquet` (one row per object and reading). */
+  readings: string;
 }
 
 /**
  * The sidecar paths of a catalog: `<dir>/<name>.parquet` → `<dir>/<name>.meta.json` and
- * `<dir>/<name>.rejections.csv` (a name without `.parquet` keeps its full name as `<name>`).
+ * `<dir>/<name>.rejections.csv`, `<dir>/<name>.readings.parquet` (a name without `.parquet` keeps its full name as `<name>`).
  */
 export function outputPaths(catalogPath: string): OutputPaths {
   const stem = catalogPath.replace(/\.parquet$/i, '');
-  return { catalog: catalogPath, meta: `${stem}.meta.json`, rejections: `${stem}.rejections.csv` };
+  return { catalog: catalogPath, meta: `${stem}.meta.json`, rejections: `${stem}.rejections.csv`, readings: `${stem}.readings.parquet` };
 }
 
 /** Default output of a catalog read without an `output` setting: `<catalog dir>/<name without extension>.census.parquet`. */

@@ -46,6 +46,8 @@ export interface PackedDerived {
   /** Flags of each object joined with ',' ('' when none). */
   flags: string[];
   errors: (string | null)[];
+  /** The same objects under each reading of the run, in the run's reading order (absent when the run has none). */
+  readings?: PackedDerived[];
 }
 
 /** Allocates an all-NaN packed batch for `count` objects. */

@@ -1,4 +1,5 @@
 import { writeFile } from 'node:fs/promises';
+import path from 'node:path';
 import type { ObjectInputs } from '../../core/derive/types.ts';
 import type { CensusConfig } from '../config/CensusConfig.ts';
 import { displayPath } from '../config/loadConfig.ts';
@@ -29,6 +30,11 @@ import { RejectionReport } from './rejectionReport.ts';
 import type { RejectionEntry } from './rejectionReport.ts';
 import type { NormalizedRow } from '../normalize/normalizeChunk.ts';
 import { createWorkerPool } from './workerPool.ts';
+import { defaultReadingsConfig } from '../config/readingsConfig.ts';
+import { READINGS_COLUMNS } from '../readings/readingsColumns.ts';
+import type { ReadingRowContext } from '../readings/readingsColumns.ts';
+import { buildReadingsMetadata, READINGS_METADATA_KEY } from '../readings/readingsMetadata.ts';
+import { summarizeReadings } from '../readings/summarizeReadings.ts';
 
 /**
  * Rows per chunk read, normalized and sent to a worker. Small on purpose: the rows of the
@@ -126,6 +132,7 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
   let staged: OutputSet | null = null;
   let source: TableSource | null = null;
   let writer: ParquetWriter | null = null;
+  let readingsWriter: ParquetWriter | null = null;
   let report: RejectionReport | null = null;
   let deriver: BatchDeriver | null = null;
   try {
@@ -145,12 +152,20 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
 
     const set = await OutputSet.create(paths);
     staged = set;
+    const readingsTemp = set.staged('readings');
     writer = await openParquetWriter(set.staged('catalog'), columns, { scratchDir: set.scratch('rows') });
+    readingsWriter = await openParquetWriter(readingsTemp, READINGS_COLUMNS, { scratchDir: set.scratch('readings') });
     report = new RejectionReport(set.staged('rejections'));
+    const readingsConfig = opts.config.readings ?? defaultReadingsConfig();
+    const batchReadings = {
+      primary: readingsConfig.readings.find((r) => r.id === readingsConfig.primary) ?? readingsConfig.readings[0]!,
+      list: readingsConfig.readings,
+    };
     deriver =
       opts.threads > 1
-        ? createWorkerPool(opts.threads, settings, opts.deriveModule, opts.batchTimeoutMs !== undefined ? { batchTimeoutMs: opts.batchTimeoutMs } : {})
-        : await createInProcessDeriver(settings, opts.deriveModule);
+        ? createWorkerPool(opts.threads, settings, opts.deriveModule, batchReadings, opts.batchTimeoutMs !== undefined ? { batchTimeoutMs: opts.batchTimeoutMs } : {})
+        : await createInProcessDeriver(settings, opts.deriveModule, batchReadings);
+    const readingValues: CellValue[] = new Array<CellValue>(READINGS_COLUMNS.length);
 
     const label = displayPath(src.path);
     const duplicates = new DuplicateIds(label, plan.seenIds);
@@ -188,6 +203,18 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
         const ctx = rowContext(row, own, index);
         fillRow(values, columns, ctx);
         writer!.appendRow(values);
+        batchReadings.list.forEach((r, j) => {
+          const under = ctx.packed?.readings?.[j] ?? null;
+          const rc: ReadingRowContext = {
+            id: row.id,
+            reading: r.id,
+            packed: under,
+            k: index,
+            flags: under ? under.flags[index]! : ctx.flags,
+          };
+          for (let i = 0; i < READINGS_COLUMNS.length; i++) readingValues[i] = READINGS_COLUMNS[i]!.value(rc);
+          readingsWriter!.appendRow(readingValues);
+        });
       }
       counts.rows += chunk.rows.length;
       await report!.flushed();
@@ -232,6 +259,10 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
       throw new CatalogError(`${label}: the catalog changed while it was being read (${rowsTotal} rows counted when it was opened, ${counts.rows} read); nothing was written — derive again once it is complete`);
     }
     if (writer.rowCount !== counts.rows) throw new Error(`wrote ${writer.rowCount} rows for ${counts.rows} read; nothing was written`);
+    const readingsMeta = buildReadingsMetadata(batchReadings.primary.id, path.basename(paths.readings), batchReadings.list, READINGS_COLUMNS);
+    await readingsWriter.finish({ [READINGS_METADATA_KEY]: JSON.stringify(readingsMeta) });
+    readingsWriter = null;
+    readingsMeta.summary = await summarizeReadings(readingsTemp, batchReadings.list.map((r) => r.id));
     const metadata = buildCatalogMetadata({
       config: opts.config,
       source: src,
@@ -241,6 +272,7 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
       paths,
       columns,
       inputColumns: plan.canonical,
+      readings: readingsMeta,
     });
     await writer.finish({ [METADATA_KEY]: catalogMetadataJson(metadata) });
     writer = null;
@@ -260,6 +292,7 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
     await deriver?.close().catch(() => undefined);
     await report?.abandon();
     await writer?.abort();
+    await readingsWriter?.abort();
     await staged?.discard();
     throw error;
   } finally {

@@ -2,6 +2,7 @@ import { Worker } from 'node:worker_threads';
 import type { DeriveSettings, ObjectInputs } from '../../core/derive/types.ts';
 import { DEFAULT_DERIVE_MODULE } from './batchDeriver.ts';
 import type { BatchDeriver } from './batchDeriver.ts';
+import type { BatchReadings } from './deriveBatch.ts';
 import type { DeriveResultMessage, DeriveTaskMessage, DeriveWorkerData } from './deriveWorker.ts';
 import type { PackedDerived } from './packedDerived.ts';
 
@@ -38,9 +39,10 @@ export function createWorkerPool(
   threads: number,
   settings: DeriveSettings,
   deriveModule: string = DEFAULT_DERIVE_MODULE,
+  readings?: BatchReadings,
   options: WorkerPoolOptions = {},
 ): BatchDeriver {
-  const data: DeriveWorkerData = { settings, deriveModule };
+  const data: DeriveWorkerData = { settings, deriveModule, ...(readings ? { readings } : {}) };
   const timeoutMs = options.batchTimeoutMs ?? DEFAULT_BATCH_TIMEOUT_MS;
   const queue: Task[] = [];
   const idle: Worker[] = [];

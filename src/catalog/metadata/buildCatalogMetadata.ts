@@ -9,6 +9,7 @@ import type { CatalogMetadata } from './catalogMetadata.ts';
 import { sha256Text } from './sha256.ts';
 import type { SettingsProvenance } from './settingsProvenance.ts';
 import { toolVersion } from './toolVersion.ts';
+import type { ReadingsMetadata } from '../readings/readingsMetadata.ts';
 
 /** What {@link buildCatalogMetadata} assembles the metadata from. */
 export interface CatalogMetadataParts {
@@ -22,6 +23,8 @@ export interface CatalogMetadataParts {
   columns: readonly ColumnDoc[];
   /** How each canonical column was read: its file column and the unit it was read in. */
   inputColumns: readonly { name: string; sourceName: string; unitIn?: string }[];
+  /** The readings metadata with its summary, when the run derived readings. */
+  readings?: ReadingsMetadata;
 }
 
 /** Flags the catalog build adds on top of deriveObject's. */
@@ -68,6 +71,7 @@ export function buildCatalogMetadata(p: CatalogMetadataParts): CatalogMetadata {
       rejections: path.basename(p.paths.rejections),
     },
     columns: p.columns.map(docOnly),
+    ...(p.readings ? { readings: p.readings } : {}),
   };
 }
 

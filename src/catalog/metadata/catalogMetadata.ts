@@ -1,5 +1,6 @@
 import type { ColumnDoc } from './columnDoc.ts';
 import type { SettingsProvenance } from './settingsProvenance.ts';
+import type { ReadingsMetadata } from '../readings/readingsMetadata.ts';
 
 /** Key of the Parquet key/value metadata entry that holds the catalog metadata (JSON). */
 export const METADATA_KEY = 'dawn_census';
@@ -36,4 +37,6 @@ export interface CatalogMetadata {
   /** File names (same folder) of the catalog, this sidecar and the rejection report. */
   files: { catalog: string; meta: string; rejections: string };
   columns: ColumnDoc[];
+  /** The readings the catalog was also derived under, their provenance and per-reading summary (see readings.parquet). */
+  readings?: ReadingsMetadata;
 }

@@ -1,3 +1,4 @@
+import type { ReadingObjectInputs } from '../../core/readings/readingInputs.ts';
 import { LINES, type LineId, type LineInputs, type Measured, type ObjectInputs } from '../../core/derive/types.ts';
 
 /** Stores one measured quantity into the inputs. */
@@ -9,6 +10,7 @@ const line = (o: ObjectInputs, l: LineId): LineInputs => (o.lines[l] ??= {});
 export const MEASURED_TARGETS: ReadonlyMap<string, Setter> = new Map<string, Setter>([
   ...LINES.flatMap((l): [string, Setter][] => [
     [`fwhm_${l}`, (o, m) => void (line(o, l).fwhmKms = m)],
+    [`fwhm_${l}_core`, (o, m) => void (((o as ReadingObjectInputs).fwhmCoreKms ??= {})[l] = m)],
     [`flux_${l}`, (o, m) => void (line(o, l).fluxCgs = m)],
     [`lum_${l}`, (o, m) => void (line(o, l).lumErgS = m)],
   ]),

@@ -70,6 +70,15 @@ const lineColumns = (line: LineId): BaseColumn[] => [
     measured: true,
   },
   {
+    name: `fwhm_${line}_core`,
+    kind: 'velocity',
+    unitText: 'km/s',
+    description: `Intrinsic core FWHM of the broad ${LINE_LABEL[line]} line, where the group measured one (used by readings that take core widths)`,
+    ucd: 'spect.line.width',
+    limits: [...POSITIVE, { op: '<=', bound: MAX_FWHM_KMS, reason: `must be at most ${MAX_FWHM_KMS} km/s` }],
+    measured: true,
+  },
+  {
     name: `flux_${line}`,
     kind: 'flux',
     unitText: 'erg s-1 cm-2',

@@ -14,6 +14,7 @@ const ROLE_NAME: Record<OutputRole, string> = {
   catalog: 'output',
   meta: 'metadata sidecar',
   rejections: 'rejection report',
+  readings: 'readings table',
 };
 
 /**
@@ -29,7 +30,7 @@ const ROLE_NAME: Record<OutputRole, string> = {
 export async function checkOutputTargets(inputPath: string, paths: OutputPaths, force: boolean): Promise<void> {
   const input = await stat(inputPath).catch(() => null);
   const inputReal = await realpath(inputPath).catch(() => path.resolve(inputPath));
-  for (const role of ['catalog', 'meta', 'rejections'] as const) {
+  for (const role of ['catalog', 'meta', 'rejections', 'readings'] as const) {
     const target = path.resolve(paths[role]);
     const what = role === 'catalog' ? `the output ${displayPath(target)}` : `the ${ROLE_NAME[role]} ${displayPath(target)} (beside the output)`;
     const real = await realTarget(target);

@@ -3,16 +3,17 @@ import path from 'node:path';
 import type { OutputRole } from './toolSignature.ts';
 
 /** Order in which new files are moved into place: the metadata sidecar last, as the set's manifest. */
-export const PLACE_ORDER: readonly OutputRole[] = ['rejections', 'catalog', 'meta'];
+export const PLACE_ORDER: readonly OutputRole[] = ['rejections', 'readings', 'catalog', 'meta'];
 
 /** Name of each new file inside the temporary folder. */
-export const STAGED_NAME: Record<OutputRole, string> = { catalog: 'catalog.parquet', meta: 'meta.json', rejections: 'rejections.csv' };
+export const STAGED_NAME: Record<OutputRole, string> = { catalog: 'catalog.parquet', meta: 'meta.json', rejections: 'rejections.csv', readings: 'readings.parquet' };
 
 /** Name inside the temporary folder of the previous file of each role, moved aside while the new set goes in. */
 export const PREVIOUS_NAME: Record<OutputRole, string> = {
   catalog: 'previous.catalog.parquet',
   meta: 'previous.meta.json',
   rejections: 'previous.rejections.csv',
+  readings: 'previous.readings.parquet',
 };
 
 /** File in the temporary folder saying what a commit replaces (written before the first rename). */

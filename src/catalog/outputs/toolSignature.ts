@@ -1,9 +1,10 @@
 import { open } from 'node:fs/promises';
 import { METADATA_FORMAT, METADATA_KEY } from '../metadata/catalogMetadata.ts';
 import { REJECTION_HEADER } from '../derive/rejectionReport.ts';
+import { READINGS_METADATA_KEY } from '../readings/readingsMetadata.ts';
 
-/** The three files of a derive run. */
-export type OutputRole = 'catalog' | 'meta' | 'rejections';
+/** The files of a derive run. */
+export type OutputRole = 'catalog' | 'meta' | 'rejections' | 'readings';
 
 /** Largest Parquet footer or `.meta.json` read to recognise one of ours (our own are far smaller). */
 const MAX_SIGNATURE_BYTES = 64 << 20;
@@ -16,7 +17,8 @@ const FORMAT_PREFIX = METADATA_FORMAT.slice(0, METADATA_FORMAT.indexOf('/') + 1)
  * - catalog: a Parquet file (PAR1 at both ends) whose footer holds the `dawn_census` key/value
  *   entry with our metadata format;
  * - meta: JSON whose `format` is `dawn-census-catalog/…` and whose `tool.name` is `dawn-census`;
- * - rejections: a CSV whose first line is exactly our header.
+ * - rejections: a CSV whose first line is exactly our header;
+ * - readings: a Parquet file whose footer holds the `dawn_census_readings` key.
  * Reads at most 64 MB; any read error or oversize file counts as "not ours".
  */
 export async function isToolOutput(path: string, role: OutputRole): Promise<boolean> {
@@ -44,6 +46,7 @@ export async function isToolOutput(path: string, role: OutputRole): Promise<bool
     const footerLength = tail.readUInt32LE(0);
     if (footerLength > Math.min(size - 12, MAX_SIGNATURE_BYTES)) return false;
     const footer = await read(size - 8 - footerLength, footerLength);
+    if (role === 'readings') return footer.includes(READINGS_METADATA_KEY, 0, 'latin1');
     return footer.includes(METADATA_KEY, 0, 'latin1') && footer.includes(FORMAT_PREFIX, 0, 'latin1');
   } catch {
     return false;

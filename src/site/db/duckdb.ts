@@ -17,6 +17,7 @@ import ehWasm from '@duckdb/duckdb-wasm/dist/duckdb-eh.wasm?url';
 import ehWorker from '@duckdb/duckdb-wasm/dist/duckdb-browser-eh.worker.js?url';
 import { catalogLoadError, friendlyQueryError } from './friendlyError.ts';
 import type { ResultSet } from './resultSet.ts';
+import { registerReadingsTable } from './readingsTable.ts';
 
 /** The documented name of the catalog table. */
 export const TABLE = 'census';
@@ -86,6 +87,7 @@ async function start(): Promise<duckdb.AsyncDuckDBConnection> {
   } catch (err) {
     throw new CensusDbError(catalogLoadError(CATALOG_PATH, status, err instanceof Error ? err.message : String(err)));
   }
+  await registerReadingsTable(db, conn);
   return conn;
 }
 

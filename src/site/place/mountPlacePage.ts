@@ -5,6 +5,7 @@
  * then shows where it falls and redraws the charts with it.
  */
 import { deriveObject } from '../../core/derive/deriveObject.ts';
+import { showUnderReadings } from '../readings/showUnderReadings.ts';
 import type { DeriveSettings, LineId, ObjectInputs } from '../../core/derive/types.ts';
 import { getLocalRelation } from '../../core/local/index.ts';
 import { createRng, seedFor } from '../../core/random/index.ts';
@@ -138,6 +139,7 @@ export function mountPlacePage(doc: Document): void {
       notes = [...notes, `Without the catalog (${dbFailed(err)}) the object cannot be ranked.`];
     }
     resultBody.replaceChildren(resultView({ id: inputs.id, z: inputs.z, zSeed: settings.zSeed }, derived, placeReport(row, rows), relation, base, notes));
+    showUnderReadings(doc, inputs, settings);
     result.hidden = false;
     result.dataset.placed = inputs.id;
     drawCharts(rows, [row]);

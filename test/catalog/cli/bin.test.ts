@@ -24,7 +24,7 @@ describe('bin/dawn-census.js', () => {
     await writeFile(input, 'id,z,fwhm_halpha,fwhm_halpha_err,lum_halpha,lum_halpha_err\nT-1,5.5,2100,200,4.6e42,0.5e42\nT-2,6.5,1200,150,2.3e42,0.3e42\nT-3,5.0,,,,\n');
     const { stderr } = await run(process.execPath, [BIN, 'derive', input, '--draws', '200', '--threads', '2'], { cwd: dir });
     expect(stderr).toContain('Read 3 rows from tiny.csv');
-    expect((await readdir(dir)).sort()).toEqual(['tiny.census.meta.json', 'tiny.census.parquet', 'tiny.census.rejections.csv', 'tiny.csv']);
+    expect((await readdir(dir)).sort()).toEqual(['tiny.census.meta.json', 'tiny.census.parquet', 'tiny.census.readings.parquet', 'tiny.census.rejections.csv', 'tiny.csv']);
     const db = await DuckDBInstance.create(':memory:');
     const con = await db.connect();
     const rows = (await con.runAndReadAll(`SELECT id, log_mbh, log_mbh_p16, log_mbh_p84 FROM '${path.join(dir, 'tiny.census.parquet')}' ORDER BY row`)).getRowObjectsJS();
@@ -52,12 +52,13 @@ describe('bin/dawn-census.js', () => {
     // An earlier output set at the same path, written by the tool from a small catalog.
     await writeFile(input, 'id,z,fwhm_halpha,fwhm_halpha_err,lum_halpha,lum_halpha_err\nE-1,5.5,2100,200,4.6e42,0.5e42\n');
     await run(process.execPath, [BIN, 'derive', input, '--draws', '20', '--threads', '1', '--quiet'], { cwd: dir });
-    const names = ['many.census.meta.json', 'many.census.parquet', 'many.census.rejections.csv'];
+    const names = ['many.census.meta.json', 'many.census.parquet', 'many.census.readings.parquet', 'many.census.rejections.csv'];
     const earlier = await Promise.all(names.map((n) => readFile(path.join(dir, n))));
     const lines = ['id,z,fwhm_halpha,fwhm_halpha_err,lum_halpha,lum_halpha_err'];
     for (let i = 0; i < 20000; i++) lines.push(`M-${i},${(4 + (i % 60) / 10).toFixed(1)},${1000 + (i % 90) * 30},150,${2 + (i % 9)}e42,0.3e42`);
     await writeFile(input, lines.join('\n'));
-    const child = spawn(process.execPath, [BIN, 'derive', input, '--draws', '2000', '--threads', '2'], { cwd: dir });
+    // 500 draws: every object is derived under the four readings, about the work of 2000 draws under one.
+    const child = spawn(process.execPath, [BIN, 'derive', input, '--draws', '500', '--threads', '2'], { cwd: dir });
     let stderr = '';
     let sent = false;
     child.stderr.on('data', (d: Buffer) => {

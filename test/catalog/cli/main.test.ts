@@ -81,7 +81,7 @@ describe('dawn-census', () => {
     expect(r.err).toContain('Derived 2 (40 draws each, seed 1, 1 thread)\n');
     expect(r.err).toContain('Flagged 1 row with input problems (1 problem): listed in cat.census.rejections.csv\n');
     expect(r.err).toMatch(/Wrote cat\.census\.parquet \(3 rows, \d+ columns\) and cat\.census\.meta\.json\n/);
-    expect((await readdir('.')).sort()).toEqual(['cat.census.meta.json', 'cat.census.parquet', 'cat.census.rejections.csv', 'cat.csv', 'census.config.yaml']);
+    expect((await readdir('.')).sort()).toEqual(['cat.census.meta.json', 'cat.census.parquet', 'cat.census.readings.parquet', 'cat.census.rejections.csv', 'cat.csv', 'census.config.yaml']);
     const meta = JSON.parse(await readFile('cat.census.meta.json', 'utf8'));
     expect(meta.title).toBeUndefined();
     expect(meta.config).toEqual({ file: null, sha256: null });
@@ -93,7 +93,7 @@ describe('dawn-census', () => {
     await writeFile('my.yaml', 'title: Mine\ninput: { path: cat.csv }\noutput: out/mine.parquet\ndraws: 30\nseed: 5\n');
     const r = await run(['derive', '-c', 'my.yaml', '--quiet']);
     expect(r).toEqual({ status: 0, out: '', err: '' });
-    expect((await readdir('out')).sort()).toEqual(['mine.meta.json', 'mine.parquet', 'mine.rejections.csv']);
+    expect((await readdir('out')).sort()).toEqual(['mine.meta.json', 'mine.parquet', 'mine.readings.parquet', 'mine.rejections.csv']);
     const meta = JSON.parse(await readFile('out/mine.meta.json', 'utf8'));
     expect(meta.title).toBe('Mine');
     expect(meta.config.file).toBe('my.yaml');

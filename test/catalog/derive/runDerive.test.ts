@@ -56,7 +56,7 @@ describe('runDerive', () => {
       [2, 'fwhm_halpha'],
       [5, 'z'],
     ]);
-    expect((await readdir(path.join(dir, 'out'))).sort()).toEqual(['cat.meta.json', 'cat.parquet', 'cat.rejections.csv']);
+    expect((await readdir(path.join(dir, 'out'))).sort()).toEqual(['cat.meta.json', 'cat.parquet', 'cat.readings.parquet', 'cat.rejections.csv']);
 
     const rows = await query(`SELECT * FROM '${out}'`);
     expect(rows.map((r) => r.id)).toEqual(['A-1', 'A-2', 'A-3', 'A-4', 'A-5']);
@@ -122,6 +122,9 @@ describe('runDerive', () => {
     expect(bytes[0]!.equals(bytes[2]!)).toBe(true);
     const metas = await Promise.all(outs.map((o) => readFile(o.replace(/parquet$/, 'meta.json'), 'utf8')));
     expect(metas[2]).toBe(metas[0]);
+    const readings = await Promise.all(outs.map((o) => readFile(o.replace(/parquet$/, 'readings.parquet'))));
+    expect(readings[0]!.equals(readings[1]!)).toBe(true);
+    expect(readings[0]!.equals(readings[2]!)).toBe(true);
   });
 
   it('refuses duplicate ids as a catalog error, leaving an earlier output untouched and no temporary file', async () => {
@@ -135,7 +138,7 @@ describe('runDerive', () => {
     const run = runDerive({ catalogPath: input, config: config(), outputPath: out, threads: 2, chunkRows: 2, deriveModule: STAND_IN });
     await expect(run).rejects.toThrow(CatalogError);
     await expect(run).rejects.toThrow(/cat\.csv: duplicate id "A-3" at rows 3 and 6$/);
-    expect((await readdir(dir)).sort()).toEqual(['cat.csv', 'cat.meta.json', 'cat.parquet', 'cat.rejections.csv']);
+    expect((await readdir(dir)).sort()).toEqual(['cat.csv', 'cat.meta.json', 'cat.parquet', 'cat.readings.parquet', 'cat.rejections.csv']);
     const after = await Promise.all(['cat.parquet', 'cat.meta.json', 'cat.rejections.csv'].map((f) => readFile(path.join(dir, f))));
     for (let i = 0; i < 3; i++) expect(after[i]!.equals(before[i]!)).toBe(true);
   });

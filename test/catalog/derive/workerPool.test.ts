@@ -55,7 +55,7 @@ describe('the derive worker pool', () => {
 
 describe('the derive worker pool when a worker misbehaves', () => {
   it('fails the batch with a message, instead of waiting forever, when a worker stops answering', async () => {
-    const pool = createWorkerPool(2, testSettings(), MISBEHAVING, { batchTimeoutMs: 1500 });
+    const pool = createWorkerPool(2, testSettings(), MISBEHAVING, undefined, { batchTimeoutMs: 1500 });
     try {
       const inputs = someInputs(3);
       inputs[1] = { ...inputs[1]!, id: 'STALL' };

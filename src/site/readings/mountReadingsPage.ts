@@ -1,0 +1,230 @@
+/**
+ * The Readings page's client: the reading switcher redraws the population charts and marks the
+ * reading's row in the summary; the comparison draws each object's shift between two readings;
+ * the URL carries the choices so a link reopens the same view.
+ */
+import { connection, CensusDbError } from '../db/duckdb.ts';
+import { mountChart } from '../charts/mountChart.ts';
+import { drawPopulation } from '../population/populationCharts.ts';
+import { objectHrefHere } from '../objectLink.ts';
+import { rowsUnderReading, shiftRows } from './readingRows.ts';
+import { readingShiftChart } from './shiftChart.ts';
+import { parseReadingsState, readingsStateQuery, type CustomReadingParams, type ReadingsPageState } from './readingsUrl.ts';
+import { CUSTOM_READING_ID, customReading } from './customReading.ts';
+import { populationInputs, type PopulationObject } from './populationInputs.ts';
+import { rederivePopulation } from './rederivePopulation.ts';
+import type { RederivedRow } from './rederiveBatch.ts';
+import { summarizeRows } from './summarizeRows.ts';
+import { placeSettings } from '../place/placeSettings.ts';
+import type { ChartRow } from '../population/populationCharts.ts';
+import type { ShiftRow } from './shiftChart.ts';
+import type { ReadingSummary } from '../../core/readings/readingSummary.ts';
+
+interface Option {
+  id: string;
+  label: string;
+}
+
+function note(mount: HTMLElement, text: string): void {
+  const p = document.createElement('p');
+  p.className = 'chart-note';
+  p.textContent = text;
+  mount.replaceChildren(p);
+}
+
+export async function mountReadingsPage(root: HTMLElement): Promise<void> {
+  const base = document.body.dataset.base ?? '/';
+  const options = JSON.parse(root.dataset.readings ?? '[]') as Option[];
+  const have = JSON.parse(root.dataset.columns ?? '[]') as string[];
+  const known = options.map((o) => o.id);
+  const label = (id: string) => options.find((o) => o.id === id)?.label ?? id;
+  const state: ReadingsPageState = parseReadingsState(location.search, known);
+  const charts = root.querySelector<HTMLElement>('#reading-charts')!;
+  const switcher = root.querySelector<HTMLSelectElement>('[data-reading-switch]')!;
+  const selA = root.querySelector<HTMLSelectElement>('[data-compare-a]')!;
+  const selB = root.querySelector<HTMLSelectElement>('[data-compare-b]')!;
+  const shiftMount = root.querySelector<HTMLElement>('[data-shift-chart]')!;
+  const status = root.querySelector<HTMLElement>('[data-reading-status]');
+  const settings = charts.dataset.settings ? (JSON.parse(charts.dataset.settings) as Record<string, unknown>) : undefined;
+  switcher.value = state.reading;
+  selA.value = state.a;
+  selB.value = state.b;
+
+  const saveUrl = () => history.replaceState(null, '', `?${readingsStateQuery(state)}`);
+  const markSummary = () => {
+    for (const tr of root.querySelectorAll<HTMLElement>('[data-reading-row]')) {
+      tr.classList.toggle('is-current', tr.dataset.readingRow === state.reading);
+      if (tr.dataset.readingRow === state.reading) tr.setAttribute('aria-current', 'true');
+      else tr.removeAttribute('aria-current');
+    }
+  };
+
+  let drawing = 0;
+  const drawCharts = async () => {
+    const ticket = ++drawing;
+    charts.dataset.reading = '';
+    markSummary();
+    if (status) status.textContent = `Drawing the population under “${label(state.reading)}”…`;
+    const rows = state.reading === CUSTOM_READING_ID ? customChartRows() : await rowsUnderReading(state.reading, have);
+    if (ticket !== drawing) return;
+    await drawPopulation(charts, rows, { base, settings });
+    if (ticket !== drawing) return;
+    charts.dataset.reading = state.reading;
+    if (status) status.textContent = `${rows.length} objects under “${label(state.reading)}”.`;
+  };
+  const drawShift = async () => {
+    shiftMount.dataset.pair = '';
+    const rows = state.a === CUSTOM_READING_ID || state.b === CUSTOM_READING_ID ? await customShift(state.a, state.b) : await shiftRows(state.a, state.b);
+    const width = Math.max(320, Math.min(760, Math.floor(shiftMount.clientWidth || 640)));
+    const el = readingShiftChart(rows, { labelA: label(state.a), labelB: label(state.b), width, height: Math.round(width * 0.66) });
+    mountChart(shiftMount, el, { fileName: `census-shift-${state.a}-${state.b}`, label: `Shift from ${label(state.a)} to ${label(state.b)}`, base, onOpen: (id) => location.assign(objectHrefHere(id)) });
+    shiftMount.dataset.pair = `${state.a}>${state.b}`;
+  };
+  const guard = (mount: HTMLElement, p: Promise<void>) =>
+    p.catch((err: unknown) => note(mount, err instanceof CensusDbError ? err.message : `This chart could not be drawn: ${String(err)}`));
+
+  // The reader's own reading: derived in web workers from the catalog's inputs.
+  const form = root.querySelector<HTMLFormElement>('[data-custom-form]');
+  const customStatus = root.querySelector<HTMLElement>('[data-custom-status]');
+  let population: PopulationObject[] | null = null;
+  let custom: RederivedRow[] | null = null;
+  const customById = () => new Map((custom ?? []).map((r) => [r.id, r]));
+  const customChartRows = (): ChartRow[] => {
+    const byId = customById();
+    return (population ?? []).flatMap((o) => {
+      const r = byId.get(o.inputs.id);
+      return r ? [{ ...r, z: o.z, log_mstar: o.logMstar } as ChartRow] : [];
+    });
+  };
+  const valuesOf = async (reading: string): Promise<Map<string, { mbh: number | null; edd: number | null }>> => {
+    if (reading === CUSTOM_READING_ID) return new Map((custom ?? []).map((r) => [r.id, { mbh: r.log_mbh, edd: r.log_edd_ratio }]));
+    const rows = await shiftRows(reading, reading);
+    return new Map(rows.map((r) => [r.id, { mbh: r.mbhA, edd: r.eddA }]));
+  };
+  const customShift = async (a: string, b: string): Promise<ShiftRow[]> => {
+    const [va, vb] = await Promise.all([valuesOf(a), valuesOf(b)]);
+    return [...va].flatMap(([id, x]) => {
+      const y = vb.get(id);
+      return y ? [{ id, mbhA: x.mbh, eddA: x.edd, mbhB: y.mbh, eddB: y.edd }] : [];
+    });
+  };
+  const addCustomOption = () => {
+    for (const sel of [switcher, selA, selB]) {
+      if (!sel.querySelector(`option[value="${CUSTOM_READING_ID}"]`)) sel.append(new Option('Your reading', CUSTOM_READING_ID));
+    }
+  };
+  const showCustomSummary = (s: ReadingSummary) => {
+    const table = root.querySelector<HTMLTableElement>('[data-readings-summary] tbody');
+    if (!table) return;
+    table.querySelector(`[data-reading-row="${CUSTOM_READING_ID}"]`)?.remove();
+    const tr = document.createElement('tr');
+    tr.dataset.readingRow = CUSTOM_READING_ID;
+    const pct = (x: number | null) => (x === null ? '—' : `${(100 * x).toFixed(1)} %`);
+    const cell = (text: string, key?: string) => {
+      const td = document.createElement('td');
+      td.className = 'num';
+      if (key) td.dataset.summary = key;
+      td.textContent = text;
+      return td;
+    };
+    const th = document.createElement('th');
+    th.scope = 'row';
+    th.textContent = 'Your reading';
+    tr.append(th, cell(String(s.objects)));
+    for (const k of ['superEddington', 'overMassive', 'needsSuperEddingtonLight'] as const) {
+      const f = s[k];
+      tr.append(cell(`${pct(f.fraction)} (${f.k} of ${f.n}) ${f.lo === null ? '' : `${pct(f.lo)} – ${pct(f.hi)}`}`, k));
+    }
+    tr.append(cell(s.medianLogMbh === null ? '—' : s.medianLogMbh.toFixed(2), 'medianLogMbh'), cell(s.medianLogEddRatio === null ? '—' : s.medianLogEddRatio.toFixed(2), 'medianLogEddRatio'));
+    table.append(tr);
+  };
+  const deriveCustom = async (params: CustomReadingParams) => {
+    let reading;
+    try {
+      reading = customReading(params);
+    } catch (err) {
+      if (customStatus) customStatus.textContent = err instanceof Error ? err.message : String(err);
+      return;
+    }
+    if (customStatus) customStatus.textContent = 'Deriving the population under your reading…';
+    population ??= await populationInputs(have);
+    const { settings: deriveSettings } = placeSettings(JSON.parse(root.dataset.metaSettings ?? '{}') as Record<string, unknown>);
+    const { rows, ms } = await rederivePopulation(population.map((o) => o.inputs), deriveSettings, reading);
+    custom = rows;
+    state.custom = params;
+    // The rows themselves, for scripts and the end-to-end tests that compare them with the CLI's.
+    (window as unknown as { censusCustomReading?: RederivedRow[] }).censusCustomReading = rows;
+    showCustomSummary(summarizeRows(CUSTOM_READING_ID, rows));
+    addCustomOption();
+    root.dataset.customDerived = String(rows.length);
+    if (customStatus) customStatus.textContent = `${rows.length} objects derived under your reading in ${Math.round(ms)} ms (${deriveSettings.draws} draws each).`;
+    saveUrl();
+    if (state.reading === CUSTOM_READING_ID || state.a === CUSTOM_READING_ID || state.b === CUSTOM_READING_ID) {
+      switcher.value = state.reading;
+      selA.value = state.a;
+      selB.value = state.b;
+    }
+    await guard(charts, drawCharts());
+    await guard(shiftMount, drawShift());
+  };
+  const formParams = (): CustomReadingParams => {
+    const data = new FormData(form!);
+    const opt = (k: string) => {
+      const v = String(data.get(k) ?? '').trim();
+      return v === '' ? null : Number(v);
+    };
+    return { deflation: opt('deflation') ?? 1, l5100Ratio: opt('l5100'), dust: data.get('dust') === 'none' ? 'none' : 'standard', efficiency: opt('eff') };
+  };
+  form?.addEventListener('submit', (e) => {
+    e.preventDefault();
+    void deriveCustom(formParams()).catch((err: unknown) => {
+      if (customStatus) customStatus.textContent = `Your reading could not be derived: ${err instanceof Error ? err.message : String(err)}`;
+    });
+  });
+  if (form && state.custom) {
+    (form.elements.namedItem('deflation') as HTMLInputElement).value = String(state.custom.deflation);
+    (form.elements.namedItem('l5100') as HTMLInputElement).value = state.custom.l5100Ratio === null ? '' : String(state.custom.l5100Ratio);
+    (form.elements.namedItem('dust') as HTMLSelectElement).value = state.custom.dust;
+    (form.elements.namedItem('eff') as HTMLInputElement).value = state.custom.efficiency === null ? '' : String(state.custom.efficiency);
+  }
+
+  switcher.addEventListener('change', () => {
+    state.reading = switcher.value;
+    saveUrl();
+    void guard(charts, drawCharts());
+  });
+  for (const sel of [selA, selB]) {
+    sel.addEventListener('change', () => {
+      state.a = selA.value;
+      state.b = selB.value;
+      saveUrl();
+      void guard(shiftMount, drawShift());
+    });
+  }
+
+  try {
+    await connection();
+  } catch (err) {
+    const message = err instanceof CensusDbError ? err.message : String(err);
+    for (const m of [...charts.querySelectorAll<HTMLElement>('[data-chart]'), shiftMount]) note(m, message);
+    return;
+  }
+  const wantsCustom = [state.reading, state.a, state.b].includes(CUSTOM_READING_ID);
+  if (state.custom && wantsCustom) {
+    await deriveCustom(state.custom).catch((err: unknown) => {
+      if (customStatus) customStatus.textContent = `Your reading could not be derived: ${String(err)}`;
+    });
+    if (custom) return;
+  }
+  if (wantsCustom) {
+    state.reading = state.reading === CUSTOM_READING_ID ? (known[0] ?? 'standard') : state.reading;
+    state.a = state.a === CUSTOM_READING_ID ? (known[0] ?? 'standard') : state.a;
+    state.b = state.b === CUSTOM_READING_ID ? (known[1] ?? state.a) : state.b;
+    switcher.value = state.reading;
+    selA.value = state.a;
+    selB.value = state.b;
+  }
+  await guard(charts, drawCharts());
+  await guard(shiftMount, drawShift());
+  if (state.custom && !wantsCustom) void deriveCustom(state.custom).catch(() => undefined);
+}
