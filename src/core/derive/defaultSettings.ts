@@ -17,6 +17,7 @@ export const DEFAULT_SETTINGS: Readonly<DeriveSettings> = Object.freeze({
   cosmology: 'planck18',
   calibrations: { halpha: 'rv15_halpha', hbeta: 'vp06_hbeta', mgii: 's11_mgii', civ: 'vp06_civ' },
   linePriority: ['halpha', 'hbeta', 'mgii', 'civ'],
+  hbetaWithoutContinuum: 'line',
   bolometric: 'halpha_gh05_bc5100',
   bc5100: BC5100_RICHARDS06.bc,
   eddingtonPerMsun: L_EDD_PER_MSUN_CONVENTIONAL,
