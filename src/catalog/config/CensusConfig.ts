@@ -22,6 +22,11 @@ export interface CensusConfig {
   columns: Record<string, ColumnMapping>;
   /** Every choice of the derivation. */
   settings: DeriveSettings;
+  /**
+   * `implausible_medians_intended: true`: the catalog's median line luminosity or FWHM lies
+   * outside what broad lines have, on purpose; derive does not stop (default false).
+   */
+  implausibleMediansIntended?: boolean;
   /** Where the Parquet catalog is written: absolute path. */
   output?: string;
   /** Site options; `base` starts and ends with '/'. */

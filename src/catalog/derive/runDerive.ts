@@ -16,6 +16,7 @@ import { openTable } from '../readers/openTable.ts';
 import type { TableFormat, TableSource } from '../readers/types.ts';
 import type { BatchDeriver } from './batchDeriver.ts';
 import { DuplicateIds } from './duplicateIds.ts';
+import { InputMedians } from './inputMedians.ts';
 import { createInProcessDeriver } from './inProcessDeriver.ts';
 import { buildOutputColumns, DERIVE_FAILED_FLAG, INVALID_INPUT_FLAG } from './outputColumns.ts';
 import type { OutputColumn, RowContext } from './outputColumns.ts';
@@ -98,7 +99,8 @@ interface PendingChunk {
  * written under temporary names and renamed into place only when the whole run succeeded.
  *
  * Throws CatalogError for a problem with the catalog as a whole (unreadable, no id column,
- * duplicate ids, a passthrough column named like a derived one): then nothing is written and an
+ * duplicate ids, a passthrough column named like a derived one, an implausible median line
+ * luminosity or FWHM: see inputMedians.ts): then nothing is written and an
  * earlier output stays as it was. Problems of single rows do not stop the run: the row is
  * written with the flag `invalid_input` and null derived values, and listed in the report.
  */
@@ -133,6 +135,7 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
 
     const label = displayPath(src.path);
     const duplicates = new DuplicateIds(label, plan.seenIds);
+    const medians = new InputMedians(plan, label);
     const counts = { rows: 0, derived: 0, flagged: 0, problems: 0 };
     const values: CellValue[] = new Array<CellValue>(columns.length);
     const queue: PendingChunk[] = [];
@@ -164,6 +167,7 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
           opts.onRowProblem?.(entry);
         }
         if (row.problems.length > 0 || failed) counts.flagged++;
+        medians.add(row, own && failed === null ? own : null, index);
         const ctx = rowContext(row, own, index);
         fillRow(values, columns, ctx);
         writer!.appendRow(values);
@@ -197,6 +201,7 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
       await writeChunk(queue.shift()!);
     }
     opts.signal?.throwIfAborted();
+    medians.check(opts.config.implausibleMediansIntended === true);
 
     await deriver.close();
     deriver = null;

@@ -10,6 +10,7 @@ describe('defaultConfig', () => {
       cosmology: 'planck18',
       calibrations: { halpha: 'rv15_halpha', hbeta: 'vp06_hbeta', mgii: 's11_mgii', civ: 'vp06_civ' },
       linePriority: ['halpha', 'hbeta', 'mgii', 'civ'],
+      hbetaWithoutContinuum: 'line',
       bolometric: 'halpha_gh05_bc5100',
       bc5100: 10.33,
       eddingtonPerMsun: 1.26e38,
