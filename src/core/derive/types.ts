@@ -78,7 +78,7 @@ export interface DeriveSettings {
    */
   hbetaWithoutContinuum: HbetaWithoutContinuum;
   bolometric: BolometricMethodId;
-  /** Fixed bolometric correction at 5100 Å used by 'halpha_gh05_bc5100' and 'bc5100'. */
+  /** Fixed bolometric correction at 5100 Å used by 'halpha_gh05_bc5100', 'bc5100' and the L(Hβ) route (default 9.26, Shen et al. 2011). */
   bc5100: number;
   /** Eddington luminosity per solar mass, erg s^-1. */
   eddingtonPerMsun: number;

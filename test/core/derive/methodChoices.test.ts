@@ -99,9 +99,9 @@ describe('limits are bounds', () => {
     const logL = Math.log10(3e-18 * 4 * Math.PI * dl * dl);
     // Reines & Volonteri 2015, ApJ 813, 82, eq. 5 with ε = 1.075: log M = log ε + 6.57 + 0.47 (log L − 42) + 2.06 log(FWHM/1000)
     expectClose(d.logMbh!, Math.log10(1.075) + 6.57 + 0.47 * (logL - 42) + 2.06 * Math.log10(1.5), { atol: 1e-9, source: 'Reines & Volonteri 2015 eq. 5, closed form' });
-    // Greene & Ho 2005, ApJ 630, 122, eq. 1 inverted (L_Hα = 5.25e42 (L5100/1e44)^1.157) × BC5100 = 10.33
+    // Greene & Ho 2005, ApJ 630, 122, eq. 1 inverted (L_Hα = 5.25e42 (L5100/1e44)^1.157) × BC5100 = 9.26 (Shen et al. 2011, ApJS 194, 45)
     const logL5100 = 44 + (logL - Math.log10(5.25e42)) / 1.157;
-    expectClose(d.logLbol!, logL5100 + Math.log10(10.33), { atol: 1e-9, source: 'Greene & Ho 2005 eq. 1 inverted × 10.33, closed form' });
+    expectClose(d.logLbol!, logL5100 + Math.log10(9.26), { atol: 1e-9, source: 'Greene & Ho 2005 eq. 1 inverted × 9.26, closed form' });
     expectClose(d.logEddRatio!, d.logLbol! - Math.log10(1.26e38) - d.logMbh!, { atol: 1e-12, source: 'closed form, L_Edd = 1.26e38 M/M_sun erg/s' });
   });
 
@@ -222,6 +222,21 @@ describe('physical plausibility', () => {
     expect(d.logEddRatio).toBeNull();
     // Vestergaard & Peterson 2006 eq. 5: 6.91 + 0.5 (36 − 44) + 2 log10 2 = 3.51, inside 2–12
     expectClose(d.logMbh!, 6.91 - 4 + 2 * Math.log10(2), { atol: 1e-12, source: 'Vestergaard & Peterson 2006 eq. 5, closed form' });
+  });
+
+  it('leaves an L_bol empty whose nominal value lies outside its own 16–84 % interval (a luminosity at signal-to-noise 0.2)', () => {
+    // Truncating the draws at zero puts most of them above the nominal flux: Φ(0)−Φ(−0.2) over 1−Φ(−0.2) = 0.137 of the
+    // positive draws lie below it, fewer than 16 % (closed form), so the nominal L_bol (monotone in L, no scatter) is below
+    // the 16th percentile. The mass keeps its value: the calibration's 0.4 dex scatter widens its interval around it.
+    const inputs: ObjectInputs = { id: 'snr', z: 5, lines: { halpha: { lumErgS: { value: 1e43, errLo: 5e43 }, fwhmKms: { value: 2000 } } }, av: { value: 0 } };
+    const d = deriveObject(inputs, settings({ draws: 4000 }), rngFor('snr'));
+    expect(d.flags).toContain('implausible');
+    expect(d.logLbol).toBeNull();
+    expect(d.pct.logLbol).toBeNull();
+    expect(d.logEddRatio).toBeNull();
+    expect(d.logMbh).not.toBeNull();
+    // With fewer than 100 draws the interval is too uncertain to judge by.
+    expect(deriveObject(inputs, settings({ draws: 50 }), rngFor('snr')).logLbol).not.toBeNull();
   });
 
   it('does not flag an ordinary object', () => {
