@@ -78,7 +78,14 @@ describe('deriveObject corrections', () => {
     };
     const d = deriveObject(inputs, settings(), rngFor('u'));
     expect(d.flags).toEqual(expect.arrayContaining(['mbh_upper_limit', 'lbol_upper_limit', 'edd_ratio_upper_limit']));
-    expect(d.logMbh).not.toBeNull();
+    // The bound is the value at the limit flux: L = 4πD_L² F (Planck18, z = 6), then
+    // Reines & Volonteri 2015, ApJ 813, 82, eq. 5 (ε = 1.075) and Greene & Ho 2005 eq. 1 inverted × BC5100 = 9.26 (Shen et al. 2011).
+    const dl = getCosmology('planck18').luminosityDistanceMpc(6) * 3.0856775814913673e24; // cm per Mpc (IAU 2015 parsec)
+    const logL = Math.log10(3e-18 * 4 * Math.PI * dl * dl);
+    expectClose(d.logMbh!, Math.log10(1.075) + 6.57 + 0.47 * (logL - 42) + 2.06 * Math.log10(1.5), { atol: 1e-9, source: 'Reines & Volonteri 2015 eq. 5 at the limit, closed form' });
+    expectClose(d.logLbol!, 44 + (logL - Math.log10(5.25e42)) / 1.157 + Math.log10(9.26), { atol: 1e-9, source: 'Greene & Ho 2005 eq. 1 inverted × 9.26 at the limit, closed form' });
+    expect(d.isLimit.logMbh && d.isLimit.logLbol && d.isLimit.logEddRatio).toBe(true);
+    expect(d.pct.logMbh).toBeNull();
   });
 
   it('takes an Hβ mass from L5100 and falls back to BC5100 for L_bol when there is no Hα', () => {
