@@ -16,7 +16,7 @@ describe('object pages', () => {
   it('show inputs, derived values with intervals, flags in words, provenance, and the object highlighted', async () => {
     const [row] = await nodeQuery(
       inject('demoParquet'),
-      `SELECT id, log_mbh, log_mbh_p16, log_mbh_p84, flags FROM census WHERE log_mbh IS NOT NULL AND log_mstar IS NOT NULL AND flags <> '' ORDER BY id LIMIT 1`,
+      `SELECT id, log_mbh, log_mbh_p16, log_mbh_p84, flags FROM census WHERE log_mbh IS NOT NULL AND NOT log_mbh_is_limit AND log_mstar IS NOT NULL AND flags <> '' ORDER BY id LIMIT 1`,
     );
     const site = await openSite(browser, inject('siteUrl'));
     try {
@@ -32,6 +32,13 @@ describe('object pages', () => {
       await waitForCharts(page);
       expect(await page.locator('[data-chart="mbh-mstar"] g[class*="census-highlighted"]').count()).toBeGreaterThan(0);
       expect(site.foreign()).toEqual([]);
+
+      // A bound: "<" beside the value and no 16–84 % interval.
+      const [limit] = await nodeQuery(inject('demoParquet'), `SELECT id, log_mbh FROM census WHERE log_mbh_is_limit ORDER BY id LIMIT 1`);
+      await page.goto(new URL(`object/${objectSlug(String(limit!.id))}/`, inject('siteUrl')).href);
+      const bound = page.locator('tr[data-column="log_mbh"]');
+      await expect(bound.locator('td').nth(1).textContent()).resolves.toBe(`< ${Number(limit!.log_mbh).toFixed(2)} (upper limit)`);
+      await expect(bound.locator('td').nth(2).textContent()).resolves.toBe('');
     } finally {
       await site.close();
     }

@@ -25,7 +25,7 @@ describe('the demo catalog derived through the CLI', () => {
       const unit = '"1e-18 erg s-1 cm-2"';
       writeFileSync(
         join(dir, 'census.config.yaml'),
-        ['input: { path: cat.csv }', 'columns:', ...['flux_halpha', 'flux_halpha_err', 'flux_hbeta', 'flux_hbeta_err'].map((c) => `  ${c}: { unit: ${unit} }`), 'draws: 16', 'output: out.parquet'].join('\n'),
+        ['input: { path: cat.csv }', 'columns:', ...['flux_halpha', 'flux_halpha_err', 'flux_hbeta', 'flux_hbeta_err'].map((c) => `  ${c}: { unit: ${unit} }`), 'bc5100: 10.33', 'draws: 16', 'output: out.parquet'].join('\n'),
       );
       execFileSync(process.execPath, [join(root, 'bin/dawn-census.js'), 'derive', '-c', join(dir, 'census.config.yaml'), '--threads', '1', '--quiet']);
 

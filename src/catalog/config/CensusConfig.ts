@@ -25,6 +25,11 @@ export interface CensusConfig {
   settings: DeriveSettings;
   /** Readings of the broad lines to derive under (default: the four built-ins, primary 'standard'). */
   readings?: ReadingsConfig;
+  /**
+   * `implausible_medians_intended: true`: the catalog's median line luminosity or FWHM lies
+   * outside what broad lines have, on purpose; derive does not stop (default false).
+   */
+  implausibleMediansIntended?: boolean;
   /** Where the Parquet catalog is written: absolute path. */
   output?: string;
   /** Site options; `base` starts and ends with '/'. */

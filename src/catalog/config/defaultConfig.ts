@@ -5,8 +5,9 @@ import type { CensusConfig } from './CensusConfig.ts';
 /**
  * The derivation settings used when there is no config, and for keys a config leaves out: a
  * fresh, changeable copy of the core's DEFAULT_SETTINGS (Planck18; Hα from rv15_halpha, Hβ
- * vp06_hbeta, Mg II s11_mgii, C IV vp06_civ; bolometric luminosity from Hα via L5100 with
- * BC5100 = 10.33; L_Edd = 1.26e38 erg/s per Msun; ε = 0.1; seeds at z = 20 growing at λ = 1
+ * vp06_hbeta (vp06_hbeta_line without a continuum), Mg II s11_mgii, C IV vp06_civ; bolometric
+ * luminosity from Hα via L5100 with BC5100 = 9.26 (fallbacks BC3000 = 5.15, BC1350 = 3.81: Shen
+ * et al. 2011's one set); L_Edd = 1.26e38 erg/s per Msun; ε = 0.1; seeds at z = 20 growing at λ = 1
  * with duty cycle 1 from 1e2 (light) or 1e5 (heavy) Msun; the rv15_agn local relation;
  * Calzetti (2000) dust with intrinsic Hα/Hβ = 2.86; 2000 draws, seed 1; line priority Hα, Hβ,
  * Mg II, C IV).

@@ -1,4 +1,4 @@
-import { LINES, type BolometricMethodId, type CosmologyId, type DustCurveId, type LineId, type LocalRelationId } from '../../core/derive/types.ts';
+import { LINES, type HbetaWithoutContinuum, type BolometricMethodId, type CosmologyId, type DustCurveId, type LineId, type LocalRelationId } from '../../core/derive/types.ts';
 import { COSMOLOGY_PRESETS } from '../../core/cosmology/presets.ts';
 import { DUST_CURVES } from '../../core/dust/kLambda.ts';
 import { LOCAL_RELATIONS } from '../../core/local/localRelations.ts';
@@ -26,6 +26,9 @@ export const BOLOMETRIC_IDS = [
   'bc1350',
   'netzer19',
 ] as const satisfies readonly BolometricMethodId[];
+
+/** Routes for an Hβ mass without a measured continuum (`hbeta_without_continuum`). */
+export const HBETA_WITHOUT_CONTINUUM_IDS = ['line', 'gh05_eq2'] as const satisfies readonly HbetaWithoutContinuum[];
 
 /** Local black-hole–host relations. */
 export const LOCAL_RELATION_IDS = Object.keys(LOCAL_RELATIONS) as LocalRelationId[];

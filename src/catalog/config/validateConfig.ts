@@ -11,6 +11,7 @@ import {
   CALIBRATION_IDS_BY_LINE,
   COSMOLOGY_IDS,
   DUST_CURVE_IDS,
+  HBETA_WITHOUT_CONTINUUM_IDS,
   INPUT_FORMATS,
   LOCAL_RELATION_IDS,
 } from './knownIds.ts';
@@ -22,6 +23,7 @@ export const CONFIG_KEYS = [
   'title', 'group', 'description', 'licence', 'citation', 'input', 'columns', 'cosmology', 'calibrations',
   'bolometric', 'bc5100', 'eddington_per_msun', 'efficiency', 'z_seed', 'lambda_seed', 'duty_cycle', 'seeds',
   'local_relation', 'dust_curve', 'intrinsic_balmer', 'line_priority', 'draws', 'seed', 'output', 'site', 'readings',
+  'hbeta_without_continuum', 'implausible_medians_intended',
 ] as const;
 
 /** Largest number of Monte Carlo draws per object. */
@@ -149,6 +151,15 @@ export function validateConfig(doc: unknown, label: string, baseDir: string): Ce
       }
       s.calibrations[line] = oneOf(`calibrations.${line}`, v, known, 'calibration');
     }
+  }
+
+  if (has('hbeta_without_continuum')) {
+    s.hbetaWithoutContinuum = oneOf('hbeta_without_continuum', doc.hbeta_without_continuum, HBETA_WITHOUT_CONTINUUM_IDS, 'route');
+  }
+  if (has('implausible_medians_intended')) {
+    const v = doc.implausible_medians_intended;
+    if (typeof v !== 'boolean') fail(`implausible_medians_intended must be true or false, got ${describeValue(v)}`);
+    cfg.implausibleMediansIntended = v as boolean;
   }
 
   if (has('bolometric')) s.bolometric = oneOf('bolometric', doc.bolometric, BOLOMETRIC_IDS, 'bolometric method');

@@ -44,6 +44,7 @@ function derivedColumn(spec: DerivedColumnSpec, provenance: SettingsProvenance |
   let value: OutputColumn['value'];
   if (source === 'flags') value = (c) => c.flags;
   else if (source === 'mbhMethod' || source === 'lbolMethod') value = (c) => (c.packed ? c.packed[source][c.k] : null);
+  else if (spec.kind === 'bool') value = (c) => (c.packed && !c.packed.errors[c.k] ? packedValue(c.packed, c.k, source) === 1 : null);
   else value = (c) => (c.packed ? packedValue(c.packed, c.k, source) : null);
   return { ...doc, group: 'derived', ...(reference ? { reference } : {}), value };
 }

@@ -1,5 +1,8 @@
-import type { DerivedObject, LineId, Percentiles } from '../../core/derive/types.ts';
+import type { DerivedObject, LimitMarks, LineId, Percentiles } from '../../core/derive/types.ts';
 import { LINES } from '../../core/derive/types.ts';
+
+/** The quantities that can be bounds (DerivedObject.isLimit), packed as 1 (bound) or 0. */
+export const LIMIT_KEYS = ['logMbh', 'logLbol', 'logEddRatio', 'logMseed', 'lambdaReq', 'deltaLogMbhLocal'] as const satisfies readonly (keyof LimitMarks)[];
 
 /** The numeric fields of a `DerivedObject`, in the order they sit in a packed record. */
 export const PACKED_FIELDS = [
@@ -20,6 +23,7 @@ export const PACKED_FIELDS = [
   ...(['logMbh', 'logLbol', 'logEddRatio', 'logMseed', 'deltaLogMbhLocal'] as const).flatMap(
     (q) => [`pct.${q}.p16`, `pct.${q}.p50`, `pct.${q}.p84`] as const,
   ),
+  ...LIMIT_KEYS.map((q) => `isLimit.${q}` as const),
 ] as const;
 
 /** Name of one packed numeric field. */
@@ -93,6 +97,7 @@ export function packInto(packed: PackedDerived, i: number, d: DerivedObject): vo
   putPercentiles(o, b + PACKED_OFFSET['pct.logEddRatio.p16'], d.pct.logEddRatio);
   putPercentiles(o, b + PACKED_OFFSET['pct.logMseed.p16'], d.pct.logMseed);
   putPercentiles(o, b + PACKED_OFFSET['pct.deltaLogMbhLocal.p16'], d.pct.deltaLogMbhLocal);
+  for (const q of LIMIT_KEYS) o[b + PACKED_OFFSET[`isLimit.${q}`]] = d.isLimit[q] ? 1 : 0;
   packed.mbhMethod[i] = d.mbhMethod;
   packed.lbolMethod[i] = d.lbolMethod;
   packed.flags[i] = d.flags.join(',');

@@ -20,6 +20,7 @@ import type { TableFormat, TableSource } from '../readers/types.ts';
 import type { BatchDeriver } from './batchDeriver.ts';
 import { DuplicateIds } from './duplicateIds.ts';
 import { checkInputUnchanged, inputIdentity } from './inputIdentity.ts';
+import { InputMedians } from './inputMedians.ts';
 import { createInProcessDeriver } from './inProcessDeriver.ts';
 import { buildOutputColumns, DERIVE_FAILED_FLAG, INVALID_INPUT_FLAG } from './outputColumns.ts';
 import type { OutputColumn, RowContext } from './outputColumns.ts';
@@ -118,8 +119,9 @@ interface PendingChunk {
  * itself, a special file, a file this tool did not write without `force`; see
  * checkOutputTargets). Throws CatalogError for a problem with the catalog as a whole
  * (unreadable, no id column, duplicate ids, a passthrough column named like a derived one, a
- * file that changed while it was read): then nothing is written and an earlier output stays as
- * it was. Problems of single rows do not stop the run: the row is
+ * file that changed while it was read, an implausible median line luminosity or FWHM: see
+ * inputMedians.ts): then nothing is written and an earlier output stays as it was. Problems of
+ * single rows do not stop the run: the row is
  * written with the flag `invalid_input` and null derived values, and listed in the report.
  */
 export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> {
@@ -169,6 +171,7 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
 
     const label = displayPath(src.path);
     const duplicates = new DuplicateIds(label, plan.seenIds);
+    const medians = new InputMedians(plan, label);
     const counts = { rows: 0, derived: 0, flagged: 0, problems: 0 };
     const values: CellValue[] = new Array<CellValue>(columns.length);
     const queue: PendingChunk[] = [];
@@ -200,6 +203,7 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
           opts.onRowProblem?.(entry);
         }
         if (row.problems.length > 0 || failed) counts.flagged++;
+        medians.add(row, own && failed === null ? own : null, index);
         const ctx = rowContext(row, own, index);
         fillRow(values, columns, ctx);
         writer!.appendRow(values);
@@ -245,6 +249,7 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
       await writeChunk(queue.shift()!);
     }
     opts.signal?.throwIfAborted();
+    medians.check(opts.config.implausibleMediansIntended === true);
 
     await deriver.close();
     deriver = null;

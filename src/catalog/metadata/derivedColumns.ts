@@ -1,5 +1,5 @@
 import type { LineId } from '../../core/derive/types.ts';
-import type { PackedField } from '../derive/packedDerived.ts';
+import type { LIMIT_KEYS, PackedField } from '../derive/packedDerived.ts';
 import type { ColumnDoc } from './columnDoc.ts';
 
 /** Which part of the settings a derived column's reference comes from (see derivedReference.ts). */
@@ -55,6 +55,24 @@ export const DERIVED_HEAD: readonly DerivedColumnSpec[] = [
   f('dl_mpc', 'dlMpc', 'Mpc', 'Luminosity distance', 'pos.distance', 'cosmology'),
 ];
 
+const limitColumn = (name: string, q: (typeof LIMIT_KEYS)[number], what: string): DerivedColumnSpec => ({
+  name,
+  kind: 'bool',
+  description: `True where ${what} is a bound, not a measurement (it rests on an upper-limit flux); its percentiles are then empty`,
+  ucd: 'meta.code.qual',
+  source: `isLimit.${q}`,
+});
+
+/** `<quantity>_is_limit` columns, written beside the flags. */
+export const LIMIT_COLUMNS: readonly DerivedColumnSpec[] = [
+  limitColumn('log_mbh_is_limit', 'logMbh', 'log_mbh (an upper limit)'),
+  limitColumn('log_lbol_is_limit', 'logLbol', 'log_lbol (an upper limit)'),
+  limitColumn('log_edd_ratio_is_limit', 'logEddRatio', 'log_edd_ratio (upper or lower: see the flags edd_ratio_upper_limit, edd_ratio_lower_limit)'),
+  limitColumn('log_mseed_is_limit', 'logMseed', 'log_mseed (an upper limit)'),
+  limitColumn('lambda_req_is_limit', 'lambdaReq', 'lambda_req_light and lambda_req_heavy (upper limits)'),
+  limitColumn('delta_log_mbh_local_is_limit', 'deltaLogMbhLocal', 'delta_log_mbh_local and local_offset_sigma (upper limits)'),
+];
+
 /** Derived columns after the per-line luminosities, in output order. */
 export const DERIVED_TAIL: readonly DerivedColumnSpec[] = [
   f('log_l5100', 'logL5100', 'log(erg/s)', 'log10 of the continuum λL_λ at 5100 Å (measured, or from broad Hα), magnification-corrected', 'phys.luminosity;em.opt', 'continuum'),
@@ -63,13 +81,14 @@ export const DERIVED_TAIL: readonly DerivedColumnSpec[] = [
   f('log_lbol', 'logLbol', 'log(erg/s)', 'log10 of the bolometric luminosity', 'phys.luminosity', 'bolometric'),
   { name: 'lbol_method', kind: 'string', description: 'Bolometric correction that gave log_lbol', ucd: 'meta.code', source: 'lbolMethod' },
   f('log_edd_ratio', 'logEddRatio', '', 'log10 of the Eddington ratio L_bol / L_Edd', 'arith.ratio', 'eddington'),
-  f('p_super_eddington', 'pSuperEddington', '', 'Monte Carlo probability that the Eddington ratio exceeds 1', 'stat.probability', 'eddington'),
+  f('p_super_eddington', 'pSuperEddington', '', 'Monte Carlo probability that the Eddington ratio exceeds 1 (empty when log_edd_ratio is a bound or unconstrained)', 'stat.probability', 'eddington'),
   f('log_mseed', 'logMseed', 'log(solMass)', 'log10 of the seed mass at z_seed that grows to the black-hole mass at the assumed Eddington ratio, efficiency and duty cycle', 'phys.mass', 'growth'),
   f('lambda_req_light', 'lambdaReqLight', '', 'Constant Eddington ratio a light seed needs to grow into the black hole by the observed redshift', 'arith.ratio', 'growth'),
   f('lambda_req_heavy', 'lambdaReqHeavy', '', 'Constant Eddington ratio a heavy seed needs to grow into the black hole by the observed redshift', 'arith.ratio', 'growth'),
   f('delta_log_mbh_local', 'deltaLogMbhLocal', 'dex', 'Offset of log_mbh from the local scaling relation at the host stellar mass or velocity dispersion', 'arith.diff;phys.mass', 'local'),
-  f('local_offset_sigma', 'localOffsetSigma', '', 'delta_log_mbh_local in units of the combined scatter (intrinsic and measurement)', undefined, 'local'),
-  f('p_above_local', 'pAboveLocal', '', 'Monte Carlo probability that the black hole lies above the local relation', 'stat.probability', 'local'),
+  f('local_offset_sigma', 'localOffsetSigma', '', "delta_log_mbh_local divided by the relation's intrinsic scatter and the offset's measurement spread (half its 16–84 % width) in quadrature", undefined, 'local'),
+  f('p_above_local', 'pAboveLocal', '', "Monte Carlo probability that the black hole lies above a local black hole of the same host quantity: the relation's intrinsic scatter is included, as in local_offset_sigma (empty when the offset is a bound)", 'stat.probability', 'local'),
+  ...LIMIT_COLUMNS,
   {
     name: 'flags',
     kind: 'string',
@@ -97,7 +116,7 @@ export const DERIVED_PERCENTILES: readonly DerivedColumnSpec[] = PERCENTILE_OF.f
       `${base}_${p}`,
       `pct.${field}.${p}`,
       unit,
-      `${p.slice(1)}th percentile of the Monte Carlo distribution of ${what} (measurement errors and intrinsic scatter)`,
+      `${p.slice(1)}th percentile of the Monte Carlo distribution of ${what} (measurement errors and intrinsic scatter; empty when ${what} is a bound)`,
       p === 'p50' ? `${ucd};stat.median` : undefined,
       topic,
     ),

@@ -7,7 +7,7 @@ import { BC5100_RICHARDS06, BC_SHEN11, NETZER19 } from '../../core/bolometric/in
 import { SALPETER_GROWTH } from '../../core/growth/index.ts';
 import { LOCAL_RELATIONS } from '../../core/local/index.ts';
 import { CALIBRATIONS } from '../../core/virial/calibrations.ts';
-import { GH05_LHALPHA_L5100 } from '../../core/virial/lineContinuumRelations.ts';
+import { GH05_LHALPHA_L5100, GH05_LHBETA_L5100 } from '../../core/virial/lineContinuumRelations.ts';
 
 /**
  * The settings of a run, as recorded in the catalog's metadata: the settings themselves, and
@@ -18,8 +18,18 @@ export interface SettingsProvenance {
   settings: DeriveSettings;
   cosmology: Record<string, unknown>;
   calibrations: Partial<Record<LineId, Record<string, unknown>>>;
-  /** The bolometric method and the records of the corrections it uses. */
-  bolometric: { method: string; bc5100: number; records: Record<string, unknown>[]; reference: string };
+  /**
+   * The bolometric method and the records of the corrections it uses; `routes` gives, for every
+   * value `lbol_method` can take in this run (the configured route and each fallback), the
+   * records of its corrections and their reference.
+   */
+  bolometric: {
+    method: string;
+    bc5100: number;
+    records: Record<string, unknown>[];
+    reference: string;
+    routes: Record<string, { records: Record<string, unknown>[]; reference: string }>;
+  };
   eddington: { lEddPerMsun: number; reference: string };
   localRelation: Record<string, unknown>;
   dustCurve: Record<string, unknown>;
@@ -72,6 +82,47 @@ function bc5100Record(bc: number): Record<string, unknown> {
   return { id: 'config_bc5100', band: 'l5100', bc, reference: 'value set in the config' };
 }
 
+/** The corrections behind one `lbol_method` label. */
+function routeRecords(label: string, settings: DeriveSettings): Record<string, unknown>[] {
+  switch (label) {
+    case 'halpha_gh05_bc5100':
+      return [dataOnly(GH05_LHALPHA_L5100), bc5100Record(settings.bc5100)];
+    case 'hbeta_gh05_bc5100':
+      return [dataOnly(GH05_LHBETA_L5100), bc5100Record(settings.bc5100)];
+    case 'bc5100':
+      return [bc5100Record(settings.bc5100)];
+    case 'bc3000':
+      return [{ ...BC_SHEN11.l3000 }];
+    case 'bc1350':
+      return [{ ...BC_SHEN11.l1350 }];
+    case 'netzer19_l5100':
+      return [{ ...NETZER19.l5100 }];
+    case 'netzer19_l3000':
+      return [{ ...NETZER19.l3000 }];
+    case 'netzer19_l1350':
+      return [{ ...NETZER19.l1350 }];
+    default:
+      return [];
+  }
+}
+
+const referenceOf = (records: Record<string, unknown>[]): string =>
+  [...new Set(records.map((r) => r.reference).filter((r): r is string => typeof r === 'string'))].join('; ');
+
+/** Every `lbol_method` label a run with `settings` can write: the configured route first, then its fallbacks. */
+export function bolometricRouteLabels(settings: DeriveSettings): string[] {
+  const continuum =
+    settings.bolometric === 'netzer19'
+      ? ['netzer19_l5100', 'netzer19_l3000', 'netzer19_l1350']
+      : settings.bolometric === 'bc3000'
+        ? ['bc3000', 'bc5100', 'bc1350']
+        : settings.bolometric === 'bc1350'
+          ? ['bc1350', 'bc3000', 'bc5100']
+          : ['bc5100', 'bc3000', 'bc1350'];
+  const labels = settings.bolometric === 'halpha_gh05_bc5100' ? ['halpha_gh05_bc5100', ...continuum] : [...continuum, 'halpha_gh05_bc5100'];
+  return [...labels, 'hbeta_gh05_bc5100'];
+}
+
 function bolometricRecord(settings: DeriveSettings): SettingsProvenance['bolometric'] {
   const records: Record<string, unknown>[] = [];
   switch (settings.bolometric) {
@@ -91,6 +142,10 @@ function bolometricRecord(settings: DeriveSettings): SettingsProvenance['bolomet
       records.push(...Object.values(NETZER19).map((r) => ({ ...r })));
       break;
   }
-  const reference = [...new Set(records.map((r) => r.reference).filter((r): r is string => typeof r === 'string'))].join('; ');
-  return { method: settings.bolometric, bc5100: settings.bc5100, records, reference };
+  const routes: SettingsProvenance['bolometric']['routes'] = {};
+  for (const label of bolometricRouteLabels(settings)) {
+    const r = routeRecords(label, settings);
+    routes[label] = { records: r, reference: referenceOf(r) };
+  }
+  return { method: settings.bolometric, bc5100: settings.bc5100, records, reference: referenceOf(records), routes };
 }

@@ -1,4 +1,5 @@
-import type { DeriveSettings, DerivedObject, LineId, ObjectInputs, Percentiles } from './types.ts';
+import type { DeriveSettings, DerivedObject, LimitMarks, LineId, ObjectInputs, Percentiles } from './types.ts';
+import { PLAUSIBLE } from './plausibleRanges.ts';
 import type { Rng } from '../random/rng.ts';
 import { percentiles16_50_84 } from '../random/percentiles.ts';
 import { logL5100FromLogLHalpha, logL5100FromLogLHbeta, inCalibrationRange } from '../virial/index.ts';
@@ -11,6 +12,11 @@ import { createBuffers, evaluateChain, sampleInputs, OUT, type ChainBuffers } fr
 const nominalBuffers = createBuffers(1);
 let drawBuffers: ChainBuffers = createBuffers(0);
 
+/** Slack, dex, when testing that a nominal value lies in its interval (rounding of the linear L_bol form). */
+const INTERVAL_TOL = 1e-9;
+/** Fewest draws at which a nominal value outside its 16–84 % interval is taken as implausible. */
+export const MIN_DRAWS_INTERVAL_CHECK = 100;
+
 const finiteOrNull = (x: number): number | null => (Number.isFinite(x) ? x : null);
 
 /**
@@ -19,10 +25,14 @@ const finiteOrNull = (x: number): number | null => (Number.isFinite(x) ? x : nul
  * The plain values are nominal: the chain evaluated at the central inputs with no noise.
  * The percentiles come from `settings.draws` draws of every measurement (split normals for
  * asymmetric errors, positive quantities truncated at zero) plus each virial calibration's
- * intrinsic scatter; upper-limit fluxes stay at their limit and the results are flagged as
- * limits. P(λ_Edd > 1) and P(above the local relation) are fractions of the draws.
- * `local_offset_sigma` divides the nominal offset by the local relation's intrinsic scatter
- * and the draws' half 16–84 width added in quadrature.
+ * intrinsic scatter; upper-limit fluxes stay at their limit, and a quantity resting on one is
+ * a bound (`isLimit`, with no percentiles and no probability). P(λ_Edd > 1) is a fraction of the
+ * draws. "Above the local relation" means above a local black hole of the same host quantity:
+ * `local_offset_sigma` divides the nominal offset by the relation's intrinsic scatter and the
+ * draws' half 16–84 width in quadrature, and P(above) counts draws of offset + N(0, intrinsic
+ * scatter) above zero, so the two agree. A value outside physical bounds (see plausibleRanges.ts)
+ * or outside its own 16–84 % interval (with at least 100 draws) is null and flagged `implausible`,
+ * with what rests on it.
  *
  * The random stream is the caller's: the catalog build seeds it from (global seed, object
  * id) so results do not depend on row order or thread count.
@@ -69,32 +79,81 @@ export function deriveObject(inputs: ObjectInputs, settings: DeriveSettings, rng
   sampleInputs(plan, settings, rng, db);
   evaluateChain(plan, settings, db, false);
   const [dMbh, dLbol, dEdd, , dDelta] = db.out as [Float64Array, Float64Array, Float64Array, Float64Array, Float64Array];
+  const localScatter = db.localScatter;
   let superEdd = 0;
   let above = 0;
   for (let k = 0; k < draws; k++) {
     if ((dEdd[k] as number) > 0) superEdd++;
-    if ((dDelta[k] as number) > 0) above++;
+    // Above a local black hole of the same host quantity: the relation's intrinsic scatter is
+    // part of the comparison, as in local_offset_sigma.
+    if ((dDelta[k] as number) + (localScatter[k] as number) > 0) above++;
   }
-  const pct = (slot: number, values: Float64Array): Percentiles | null =>
-    Number.isFinite(nominal(slot)) ? percentiles16_50_84(values) : null;
-  const pMbh = pct(OUT.logMbh, dMbh);
+
+  // Bounds: a quantity resting on an upper-limit flux is a limit; its Monte Carlo spread
+  // (the limit held fixed) is not an interval, and a probability of it is not defined.
+  const eddUnconstrained = flags.has('edd_ratio_unconstrained');
+  const isLimit: LimitMarks = {
+    logMbh: flags.has('mbh_upper_limit'),
+    logLbol: flags.has('lbol_upper_limit'),
+    logEddRatio: flags.has('edd_ratio_upper_limit') || flags.has('edd_ratio_lower_limit'),
+    logMseed: flags.has('mbh_upper_limit'),
+    lambdaReq: flags.has('mbh_upper_limit'),
+    deltaLogMbhLocal: flags.has('mbh_upper_limit'),
+  };
+  const pct = (slot: number, values: Float64Array, limit: boolean): Percentiles | null =>
+    !limit && Number.isFinite(nominal(slot)) ? percentiles16_50_84(values) : null;
+
+  let logMbh = finiteOrNull(nominal(OUT.logMbh));
+  let pMbh = pct(OUT.logMbh, dMbh, isLimit.logMbh);
+  let logLbol = finiteOrNull(nominal(OUT.logLbol));
+  let pLbol = pct(OUT.logLbol, dLbol, isLimit.logLbol);
+  let logEddRatio = eddUnconstrained ? null : finiteOrNull(nominal(OUT.logEddRatio));
+  let pEdd = eddUnconstrained ? null : pct(OUT.logEddRatio, dEdd, isLimit.logEddRatio);
+  let delta = finiteOrNull(nominal(OUT.deltaLocal));
+  let pDelta = pct(OUT.deltaLocal, dDelta, isLimit.deltaLogMbhLocal);
+
+  // Physical plausibility: a value outside physical bounds, or outside its own 16–84 % interval,
+  // is not written; the values built on it go with it.
+  // The interval test needs enough draws for the interval itself to be sure: with 16 draws the
+  // sample 16th percentile lies above the true median 0.2 % of the time; with 100, 1e-13.
+  const checkInterval = draws >= MIN_DRAWS_INTERVAL_CHECK;
+  const outside = (v: number | null, p: Percentiles | null, lo: number, hi: number): boolean =>
+    v !== null && (v < lo || v > hi || (checkInterval && p !== null && (v < p.p16 - INTERVAL_TOL || v > p.p84 + INTERVAL_TOL)));
+  if (outside(logMbh, pMbh, PLAUSIBLE.logMbh[0], PLAUSIBLE.logMbh[1])) {
+    flags.add('implausible');
+    logMbh = null;
+    pMbh = null;
+  }
+  if (outside(logLbol, pLbol, PLAUSIBLE.logLbol[0], PLAUSIBLE.logLbol[1])) {
+    flags.add('implausible');
+    logLbol = null;
+    pLbol = null;
+  }
+  if (logMbh === null || logLbol === null || outside(logEddRatio, pEdd, -Infinity, Infinity)) {
+    if (logEddRatio !== null && logMbh !== null && logLbol !== null) flags.add('implausible');
+    logEddRatio = null;
+    pEdd = null;
+  }
+  if (logMbh === null || outside(delta, pDelta, -Infinity, Infinity)) {
+    if (delta !== null && logMbh !== null) flags.add('implausible');
+    delta = null;
+    pDelta = null;
+  }
+
   // The required seed mass is log M minus a constant for the object (its e-folds), a monotone
   // map, so its percentiles are the mass percentiles mapped through it: no second selection.
   const toSeed = (logM: number): number =>
     logSeedMassRequired(logM, plan.dtSeedGyr, settings.efficiency, settings.lambdaSeed, settings.dutyCycle);
-  const pMseed =
-    pMbh && Number.isFinite(nominal(OUT.logMseed)) ? { p16: toSeed(pMbh.p16), p50: toSeed(pMbh.p50), p84: toSeed(pMbh.p84) } : null;
+  const logMseed = logMbh !== null ? finiteOrNull(nominal(OUT.logMseed)) : null;
+  const pMseed = pMbh && logMseed !== null ? { p16: toSeed(pMbh.p16), p50: toSeed(pMbh.p50), p84: toSeed(pMbh.p84) } : null;
 
-  const logMbh = finiteOrNull(nominal(OUT.logMbh));
-  const logEddRatio = finiteOrNull(nominal(OUT.logEddRatio));
-  const delta = finiteOrNull(nominal(OUT.deltaLocal));
-  const pDelta = pct(OUT.deltaLocal, dDelta);
   const seedOk = logMbh !== null && !Number.isNaN(plan.dtSeedGyr);
   const lamReq = (seedMsun: number): number | null =>
-    seedOk ? finiteOrNull(lambdaRequired(logMbh, Math.log10(seedMsun), plan.dtSeedGyr, settings.efficiency, settings.dutyCycle)) : null;
+    seedOk ? finiteOrNull(lambdaRequired(logMbh as number, Math.log10(seedMsun), plan.dtSeedGyr, settings.efficiency, settings.dutyCycle)) : null;
   let localOffsetSigma: number | null = null;
-  if (delta !== null && pDelta && plan.local) {
-    const half = (pDelta.p84 - pDelta.p16) / 2;
+  if (delta !== null && plan.local) {
+    // Measurement half-width of the offset: from the draws, or for a bound (no interval) none.
+    const half = pDelta ? (pDelta.p84 - pDelta.p16) / 2 : 0;
     localOffsetSigma = delta / Math.hypot(plan.local.rel.scatterDex, half);
   }
 
@@ -105,22 +164,30 @@ export function deriveObject(inputs: ObjectInputs, settings: DeriveSettings, rng
     logL5100: logL5100 !== null ? finiteOrNull(logL5100) : null,
     logMbh,
     mbhMethod: plan.mass ? plan.mass.cal.id : null,
-    logLbol: finiteOrNull(nominal(OUT.logLbol)),
+    logLbol,
     lbolMethod: plan.lbol ? plan.lbol.label : null,
     logEddRatio,
-    pSuperEddington: logEddRatio !== null ? superEdd / draws : null,
-    logMseed: finiteOrNull(nominal(OUT.logMseed)),
+    pSuperEddington: logEddRatio !== null && !isLimit.logEddRatio ? superEdd / draws : null,
+    logMseed,
     lambdaReqLight: lamReq(settings.lightSeedMsun),
     lambdaReqHeavy: lamReq(settings.heavySeedMsun),
     deltaLogMbhLocal: delta,
     localOffsetSigma,
-    pAboveLocal: delta !== null ? above / draws : null,
+    pAboveLocal: delta !== null && !isLimit.deltaLogMbhLocal ? above / draws : null,
     pct: {
       logMbh: pMbh,
-      logLbol: pct(OUT.logLbol, dLbol),
-      logEddRatio: pct(OUT.logEddRatio, dEdd),
+      logLbol: pLbol,
+      logEddRatio: pEdd,
       logMseed: pMseed,
       deltaLogMbhLocal: pDelta,
+    },
+    isLimit: {
+      logMbh: isLimit.logMbh && logMbh !== null,
+      logLbol: isLimit.logLbol && logLbol !== null,
+      logEddRatio: isLimit.logEddRatio && logEddRatio !== null,
+      logMseed: isLimit.logMseed && logMseed !== null,
+      lambdaReq: isLimit.lambdaReq && seedOk,
+      deltaLogMbhLocal: isLimit.deltaLogMbhLocal && delta !== null,
     },
     flags: [...flags].sort(),
   };

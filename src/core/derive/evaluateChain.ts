@@ -33,6 +33,8 @@ export interface ChainBuffers {
   x: Float64Array;
   /** Intrinsic scatter of the virial calibration, dex (zeros for the nominal values). */
   scatter: Float64Array;
+  /** Intrinsic scatter of the local relation, dex (zeros for the nominal values): a local black hole's place about the relation. */
+  localScatter: Float64Array;
   out: Float64Array[];
 }
 
@@ -46,6 +48,7 @@ export function createBuffers(n: number): ChainBuffers {
     logFwhm: a(),
     x: a(),
     scatter: a(),
+    localScatter: a(),
     out: Array.from({ length: OUT_SIZE }, a),
   };
 }
@@ -53,7 +56,8 @@ export function createBuffers(n: number): ChainBuffers {
 /**
  * Fills the input arrays: with draws of every measurement the chain uses (`rng` given; split
  * normals, positive quantities truncated at zero, upper-limit fluxes held at their limit, the
- * calibration's intrinsic scatter), or with the central values and no scatter (`rng` null:
+ * calibration's and the local relation's intrinsic scatter; a Balmer decrement formed from the
+ * given Hα and Hβ fluxes is formed from each draw's fluxes), or with the central values and no scatter (`rng` null:
  * the nominal evaluation, which also fills every source, used or not, for `log_lum_<line>`).
  * Draws are taken input by input, in a fixed order, so a seeded stream gives fixed results.
  */
@@ -83,6 +87,13 @@ export function sampleInputs(plan: ObjectPlan, settings: DeriveSettings, rng: Rn
     if (s.isLimit) (b.logL[i] as Float64Array).fill(s.m.value);
     else draw(s.m, b.logL[i] as Float64Array, true);
   }
+  if (dust.mode === 'fluxes') {
+    // The decrement of each draw from that draw's own Hα and Hβ fluxes (still observed fluxes here).
+    const ha = b.logL[dust.ha] as Float64Array;
+    const hb = b.logL[dust.hb] as Float64Array;
+    for (let k = 0; k < b.n; k++)
+      b.ebv[k] = ebvFromBalmerDecrement((ha[k] as number) / (hb[k] as number), settings.dustCurve, settings.intrinsicBalmer);
+  }
 
   if (plan.mass) {
     draw(plan.mass.fwhm, b.logFwhm, true);
@@ -94,6 +105,8 @@ export function sampleInputs(plan: ObjectPlan, settings: DeriveSettings, rng: Rn
   if (plan.local) {
     draw(plan.local.x, b.x, plan.local.xIsSigma);
     if (plan.local.xIsSigma) for (let k = 0; k < b.n; k++) b.x[k] = Math.log10(b.x[k] as number);
+    if (rng) fillNormal(rng, b.localScatter, 0, plan.local.rel.scatterDex);
+    else b.localScatter.fill(0);
   }
 }
 

@@ -40,7 +40,12 @@ export interface LumSource {
 export type DustPlan =
   | { mode: 'none' }
   | { mode: 'av'; m: Measured; rv: number }
-  | { mode: 'decrement'; m: Measured };
+  | { mode: 'decrement'; m: Measured }
+  /** The decrement is F(Hα)/F(Hβ) of the fluxes given: formed per draw from sources `ha` and `hb`. */
+  | { mode: 'fluxes'; ha: number; hb: number };
+
+/** Relative difference below which a given Balmer decrement is taken as the ratio of the given fluxes (a 3-digit rounding). */
+const SAME_RATIO_RTOL = 5e-3;
 
 export interface MassPlan {
   line: LineId;
@@ -48,7 +53,7 @@ export interface MassPlan {
   fwhm: Measured;
   /** Index into ObjectPlan.sources. */
   source: number;
-  /** The calibration's luminosity is L5100 estimated from L(Hβ) (Greene & Ho 2005 eq. 2). */
+  /** The calibration's luminosity is L5100 estimated from L(Hβ) (Greene & Ho 2005 eq. 2 inverted; only with hbetaWithoutContinuum 'gh05_eq2'). */
   l5100FromHbeta: boolean;
 }
 
@@ -120,13 +125,6 @@ export function planObject(inputs: ObjectInputs, settings: DeriveSettings): Obje
   if (mu && mu.value !== 1) flags.add('lensed');
 
   const curve = settings.dustCurve;
-  let dust: DustPlan = { mode: 'none' };
-  if (inputs.av) dust = { mode: 'av', m: spec(inputs.av), rv: getDustCurve(curve).rv };
-  else if (inputs.balmerDecrement) {
-    dust = { mode: 'decrement', m: spec(inputs.balmerDecrement) };
-    if (inputs.balmerDecrement.value < settings.intrinsicBalmer) flags.add('balmer_below_intrinsic');
-  } else flags.add('no_dust_correction');
-
   const sources: LumSource[] = [];
   const lineSource = new Map<LineId, number>();
   for (const line of ['halpha', 'hbeta', 'mgii', 'civ'] as const) {
@@ -144,12 +142,16 @@ export function planObject(inputs: ObjectInputs, settings: DeriveSettings): Obje
     sources.push({ key: band, m: spec(m), isFlux: false, dustK: kLambda(curve, BAND_ANGSTROM[band]), isLimit: false });
   }
 
-  const mass = planMass(inputs, settings, lineSource, bandSource, flags);
-  const lbol = planLbol(settings, lineSource, bandSource, flags);
-  const used = [...new Set([mass?.source, lbol?.source].filter((i): i is number => i !== undefined))];
+  const dust = planDust(inputs, settings, sources, lineSource, flags);
+  const mass = planMass(inputs, settings, sources, lineSource, bandSource, flags);
+  const lbol = planLbol(settings, sources, lineSource, bandSource, flags);
+  const dustSources = dust.mode === 'fluxes' ? [dust.ha, dust.hb] : [];
+  const used = [...new Set([mass?.source, lbol?.source, ...dustSources].filter((i): i is number => i !== undefined))];
   for (const i of used) if (snr((sources[i] as LumSource).m) < 2 && !(sources[i] as LumSource).isLimit) flags.add('low_snr');
   if (mass && snr(mass.fwhm) < 2) flags.add('low_snr');
   if (mass && (sources[mass.source] as LumSource).isLimit) flags.add('mbh_upper_limit');
+  const local = planLocal(inputs, settings, flags);
+  if (mass && local && mass.cal.massScale !== local.rel.massScale) flags.add('local_relation_mass_scale');
   const lbolLimit = lbol !== null && (sources[lbol.source] as LumSource).isLimit;
   if (lbolLimit) flags.add('lbol_upper_limit');
   if (mass && lbol) {
@@ -161,41 +163,68 @@ export function planObject(inputs: ObjectInputs, settings: DeriveSettings): Obje
     else if (massLimit) flags.add('edd_ratio_lower_limit');
   }
 
-  return { z, ageGyr, dlMpc, dtSeedGyr, logFourPiDl2, mu, dust, sources, used, mass, lbol, local: planLocal(inputs, settings, flags), flags };
+  return { z, ageGyr, dlMpc, dtSeedGyr, logFourPiDl2, mu, dust, sources, used, mass, lbol, local, flags };
 }
 
 function planMass(
   inputs: ObjectInputs,
   settings: DeriveSettings,
+  sources: readonly LumSource[],
   lineSource: Map<LineId, number>,
   bandSource: Map<ContinuumBand, number>,
   flags: Set<FlagId>,
 ): MassPlan | null {
-  // A width measured on a line earlier in the priority whose luminosity is missing: say so
-  // when a later line gives the mass.
-  let skipped = false;
-  for (const line of settings.linePriority) {
-    const fwhm = inputs.lines[line]?.fwhmKms;
-    if (!fwhm) continue;
-    const cal = getCalibration(settings.calibrations[line]);
-    const source = cal.luminosity === 'line' ? lineSource.get(line) : bandSource.get(cal.luminosity);
-    if (skipped) flags.add('mass_line_fallback');
-    if (source !== undefined) return { line, cal, fwhm: spec(fwhm), source, l5100FromHbeta: false };
-    // Hβ masses calibrated on L5100 with no continuum measured: estimate L5100 from L(Hβ).
-    const hb = lineSource.get('hbeta');
-    if (line === 'hbeta' && cal.luminosity === 'l5100' && hb !== undefined) {
-      flags.add('l5100_from_hbeta');
-      return { line, cal, fwhm: spec(fwhm), source: hb, l5100FromHbeta: true };
+  // First pass: only measured luminosities; a limit never outranks a measurement. Second
+  // pass (nothing measured): limits too, giving an upper-limit mass.
+  for (const allowLimit of [false, true]) {
+    // A width measured on a line earlier in the priority whose luminosity is missing (or only
+    // a limit): say so when a later line gives the mass.
+    let skipped = false;
+    let skippedLimit = false;
+    for (const line of settings.linePriority) {
+      const fwhm = inputs.lines[line]?.fwhmKms;
+      if (!fwhm) continue;
+      const plan = massRoute(line, spec(fwhm), settings, lineSource, bandSource);
+      if (!plan) {
+        skipped = true;
+        continue;
+      }
+      if (!allowLimit && (sources[plan.source] as LumSource).isLimit) {
+        skippedLimit = true;
+        continue;
+      }
+      if (skipped) flags.add('mass_line_fallback');
+      if (skippedLimit) flags.add('measured_over_limit');
+      if (plan.l5100FromHbeta) flags.add('l5100_from_hbeta');
+      return plan;
     }
-    skipped = true;
   }
-  flags.delete('mass_line_fallback');
   flags.add('no_mass');
   return null;
 }
 
+/** The mass route of one line with a width, or null when the luminosity its calibration needs is missing. */
+function massRoute(
+  line: LineId,
+  fwhm: Measured,
+  settings: DeriveSettings,
+  lineSource: Map<LineId, number>,
+  bandSource: Map<ContinuumBand, number>,
+): MassPlan | null {
+  const cal = getCalibration(settings.calibrations[line]);
+  const source = cal.luminosity === 'line' ? lineSource.get(line) : bandSource.get(cal.luminosity);
+  if (source !== undefined) return { line, cal, fwhm, source, l5100FromHbeta: false };
+  // Hβ masses calibrated on L5100 with no continuum measured: by default the calibration on
+  // L(Hβ) itself; as an option, λL5100 estimated from L(Hβ) (Greene & Ho 2005 eq. 2 inverted).
+  const hb = lineSource.get('hbeta');
+  if (line !== 'hbeta' || cal.luminosity !== 'l5100' || hb === undefined) return null;
+  if (settings.hbetaWithoutContinuum === 'gh05_eq2') return { line, cal, fwhm, source: hb, l5100FromHbeta: true };
+  return { line, cal: getCalibration('vp06_hbeta_line'), fwhm, source: hb, l5100FromHbeta: false };
+}
+
 function planLbol(
   settings: DeriveSettings,
+  sources: readonly LumSource[],
   lineSource: Map<LineId, number>,
   bandSource: Map<ContinuumBand, number>,
   flags: Set<FlagId>,
@@ -218,11 +247,43 @@ function planLbol(
   // Last resort, as for the Hβ mass without a continuum: L5100 from L(Hβ).
   const hb = lineSource.get('hbeta');
   if (hb !== undefined) candidates.push({ label: 'hbeta_gh05_bc5100', route: 'hbeta', source: hb });
-  const chosen = candidates[0] ?? null;
+  // A measured luminosity always outranks a limited one, whatever the order of preference.
+  const measured = candidates.find((c) => !(sources[c.source] as LumSource).isLimit);
+  const chosen = measured ?? candidates[0] ?? null;
+  if (chosen && chosen !== candidates[0]) flags.add('measured_over_limit');
   if (!chosen) flags.add('no_lbol');
   else if (chosen.route !== (method === 'halpha_gh05_bc5100' ? 'halpha' : method)) flags.add('lbol_fallback');
   if (chosen?.route === 'hbeta') flags.add('l5100_from_hbeta');
   return chosen;
+}
+
+function planDust(
+  inputs: ObjectInputs,
+  settings: DeriveSettings,
+  sources: readonly LumSource[],
+  lineSource: Map<LineId, number>,
+  flags: Set<FlagId>,
+): DustPlan {
+  if (inputs.av) return { mode: 'av', m: spec(inputs.av), rv: getDustCurve(settings.dustCurve).rv };
+  const bd = inputs.balmerDecrement;
+  if (!bd) {
+    flags.add('no_dust_correction');
+    return { mode: 'none' };
+  }
+  if (bd.value < settings.intrinsicBalmer) flags.add('balmer_below_intrinsic');
+  // A decrement that is the ratio of the broad fluxes given shares their errors (Hα's error
+  // enters the luminosity and the dust correction): draw the fluxes, form the ratio per draw.
+  const ha = lineSource.get('halpha');
+  const hb = lineSource.get('hbeta');
+  if (ha !== undefined && hb !== undefined) {
+    const a = sources[ha] as LumSource;
+    const b = sources[hb] as LumSource;
+    if (a.isFlux && b.isFlux && !a.isLimit && !b.isLimit && Math.abs(a.m.value / b.m.value / bd.value - 1) <= SAME_RATIO_RTOL) {
+      flags.add('balmer_from_line_fluxes');
+      return { mode: 'fluxes', ha, hb };
+    }
+  }
+  return { mode: 'decrement', m: spec(bd) };
 }
 
 function planLocal(inputs: ObjectInputs, settings: DeriveSettings, flags: Set<FlagId>): LocalPlan | null {

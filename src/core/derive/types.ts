@@ -60,6 +60,7 @@ export type BolometricMethodId =
   | 'bc3000'
   | 'bc1350'
   | 'netzer19'; // Netzer 2019 luminosity-dependent corrections, from the first continuum present (5100, 3000, 1350)
+export type HbetaWithoutContinuum = 'line' | 'gh05_eq2';
 export type LocalRelationId = 'rv15_agn' | 'rv15_early' | 'kh13_mbulge' | 'kh13_sigma';
 
 /** Every choice a derivation makes. The catalog records these in its metadata. */
@@ -67,10 +68,17 @@ export interface DeriveSettings {
   cosmology: CosmologyId;
   /** Virial calibration id for each line (see src/core/virial/calibrations.ts). */
   calibrations: Record<LineId, string>;
-  /** Which line's mass becomes `log_mbh` when several are measured: the first present. */
+  /** Which line's mass becomes `log_mbh` when several are measured: the first present with a measured (not limited) luminosity. */
   linePriority: LineId[];
+  /**
+   * An Hβ width whose calibration takes λL5100, with no continuum measured: 'line' uses the
+   * calibration on L(Hβ) itself (Vestergaard & Peterson 2006 eq. 6, `vp06_hbeta_line`);
+   * 'gh05_eq2' estimates λL5100 from L(Hβ) by inverting Greene & Ho 2005 eq. 2 (flagged
+   * `l5100_from_hbeta`).
+   */
+  hbetaWithoutContinuum: HbetaWithoutContinuum;
   bolometric: BolometricMethodId;
-  /** Fixed bolometric correction at 5100 Å used by 'halpha_gh05_bc5100' and 'bc5100'. */
+  /** Fixed bolometric correction at 5100 Å used by 'halpha_gh05_bc5100', 'bc5100' and the L(Hβ) route (default 9.26, Shen et al. 2011). */
   bc5100: number;
   /** Eddington luminosity per solar mass, erg s^-1. */
   eddingtonPerMsun: number;
@@ -90,6 +98,16 @@ export interface DeriveSettings {
   intrinsicBalmer: number;
   draws: number;
   seed: number;
+}
+
+/** Which derived quantities are bounds rather than measurements. */
+export interface LimitMarks {
+  logMbh: boolean;
+  logLbol: boolean;
+  logEddRatio: boolean;
+  logMseed: boolean;
+  lambdaReq: boolean;
+  deltaLogMbhLocal: boolean;
 }
 
 /** 16th, 50th and 84th percentiles of a Monte Carlo distribution. */
@@ -115,13 +133,19 @@ export interface DerivedObject {
   logLbol: number | null;
   lbolMethod: string | null;
   logEddRatio: number | null;
+  /** Fraction of draws with λ_Edd > 1; null when the Eddington ratio is a bound or unconstrained. */
   pSuperEddington: number | null;
   logMseed: number | null;
   lambdaReqLight: number | null;
   lambdaReqHeavy: number | null;
   deltaLogMbhLocal: number | null;
-  /** Offset from the local relation in units of the combined scatter (intrinsic ⊕ measurement). */
+  /** Offset from the local relation in units of the combined scatter (the relation's intrinsic scatter ⊕ measurement). */
   localOffsetSigma: number | null;
+  /**
+   * Probability that the black hole lies above a local black hole of the same host quantity:
+   * the fraction of draws with offset + N(0, intrinsic scatter) > 0 (the same combined scatter
+   * as `localOffsetSigma`, so P ≈ Φ(localOffsetSigma)). Null when the offset is a bound.
+   */
   pAboveLocal: number | null;
   pct: {
     logMbh: Percentiles | null;
@@ -130,6 +154,12 @@ export interface DerivedObject {
     logMseed: Percentiles | null;
     deltaLogMbhLocal: Percentiles | null;
   };
+  /**
+   * True where the value is a bound, not a measurement (its percentiles are then null): an
+   * upper limit for logMbh, logLbol, logMseed, lambdaReq (both seeds) and deltaLogMbhLocal;
+   * upper or lower for logEddRatio (see the flags edd_ratio_upper_limit / edd_ratio_lower_limit).
+   */
+  isLimit: LimitMarks;
   /** Short machine-readable flags, e.g. 'mbh_upper_limit', 'no_host_mass', 'calibration_out_of_range', 'no_dust_correction'. */
   flags: string[];
 }

@@ -1,4 +1,5 @@
 import type { LocalRelationId } from '../derive/types.ts';
+import type { MassScale } from '../virial/massScale.ts';
 
 /** Which host quantity a local relation takes: log10 of M_star or M_bulge in M_sun, or log10 of σ_star in km s⁻¹. */
 export type LocalRelationInput = 'logMstar' | 'logMbulge' | 'logSigma';
@@ -20,6 +21,8 @@ export interface LocalRelation {
   readonly scatterDex: number;
   readonly scatterProvenance: 'published' | 'from memory';
   readonly reference: string;
+  /** The mass scale of the black-hole masses the relation was fitted to. */
+  readonly massScale: MassScale;
   /** Approximate range of x covered by the fitted sample (from memory: not published limits). */
   readonly validity: { readonly x: readonly [number, number] };
   readonly notes?: string;

@@ -12,6 +12,7 @@ export const LOCAL_RELATIONS: Readonly<Record<LocalRelationId, LocalRelation>> =
     scatterDex: 0.55, // rms scatter, from memory: confirm against RV15
     scatterProvenance: 'from memory',
     reference: `${RV15}, eq. 4 (AGN sample)`,
+    massScale: 'rv15_f4.3', // their single-epoch Hα masses (their eq. 5)
     validity: { x: [9.5, 12] },
     notes: 'Total stellar mass of the host, not the bulge.',
   },
@@ -21,6 +22,7 @@ export const LOCAL_RELATIONS: Readonly<Record<LocalRelationId, LocalRelation>> =
     scatterDex: 0.47, // from memory: confirm against RV15
     scatterProvenance: 'from memory',
     reference: `${RV15}, eq. 4 with the elliptical/classical-bulge coefficients`,
+    massScale: 'dynamical',
     validity: { x: [10, 12.5] },
     notes: 'Coefficients and scatter from memory; confirm against the paper.',
   },
@@ -32,6 +34,7 @@ export const LOCAL_RELATIONS: Readonly<Record<LocalRelationId, LocalRelation>> =
     scatterDex: 0.29, // KH13 quote 0.28–0.29 dex intrinsic scatter (published-checks.md)
     scatterProvenance: 'published',
     reference: `${KH13}, eq. 10`,
+    massScale: 'dynamical',
     validity: { x: [9.5, 12.5] },
     notes: 'Bulge mass of classical bulges and ellipticals. Passing the total M* treats it as the bulge mass (an upper limit on M_bulge).',
   },
@@ -42,6 +45,7 @@ export const LOCAL_RELATIONS: Readonly<Record<LocalRelationId, LocalRelation>> =
     scatterDex: 0.29,
     scatterProvenance: 'published',
     reference: `${KH13}, eq. 7`,
+    massScale: 'dynamical',
     validity: { x: [Math.log10(70), Math.log10(400)] },
   },
 };

@@ -1,4 +1,5 @@
 import type { LineId } from '../derive/types.ts';
+import type { MassScale } from './massScale.ts';
 
 /** Which luminosity a calibration takes: the line's own, or the continuum λL_λ at 5100, 3000 or 1350 Å. */
 export type VirialLuminosityKind = 'line' | 'l5100' | 'l3000' | 'l1350';
@@ -30,6 +31,8 @@ export interface VirialCalibration {
   readonly scatterDex: number;
   readonly scatterProvenance: ValueProvenance;
   readonly reference: string;
+  /** The mass scale the calibration's zero point rests on (compared with the local relation's). */
+  readonly massScale: MassScale;
   /**
    * Where the calibration sample lies: log10 L in erg s⁻¹ (of the kind in `luminosity`) and
    * FWHM in km s⁻¹. Approximate ranges of the calibrating samples, not published limits.

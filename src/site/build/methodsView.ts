@@ -5,7 +5,7 @@
  * The sidecar records the settings (DeriveSettings) and, beside them, the records behind each
  * id (src/catalog/metadata/settingsProvenance.ts); this reads either layout.
  */
-import { BC5100_RICHARDS06, BC_SHEN11, NETZER19 } from '../../core/bolometric/index.ts';
+import { BC_SHEN11, NETZER19 } from '../../core/bolometric/index.ts';
 import { LOCAL_RELATIONS } from '../../core/local/index.ts';
 import type { SiteMeta } from './siteMeta.ts';
 
@@ -35,7 +35,7 @@ export interface MethodsView {
   cosmology: { id: string; name?: string; params: NamedValue[]; reference?: string };
   calibrations: CalibrationView[];
   linePriority: string[];
-  bolometric: { id: string; params: NamedValue[]; reference?: string };
+  bolometric: { id: string; params: NamedValue[]; reference?: string; routes: { label: string; text: string; reference?: string }[] };
   eddington: NamedValue[];
   growth: { params: NamedValue[]; formula?: string; reference?: string };
   local: { id: string; label?: string; formula?: string; reference?: string; params: NamedValue[] };
@@ -86,7 +86,7 @@ function values(r: unknown, skip: string[] = []): NamedValue[] {
 export const BOLOMETRIC_METHODS: Record<string, { text: string; reference: string }> = {
   halpha_gh05_bc5100: {
     text: 'The broad Hα luminosity gives the 5100 Å continuum (Greene & Ho 2005, ApJ 630, 122, eq. 1, inverted), multiplied by a fixed bolometric correction BC5100.',
-    reference: BC5100_RICHARDS06.reference,
+    reference: 'Greene & Ho 2005, ApJ 630, 122, eq. 1, with the bc5100 setting (9.26, Shen et al. 2011, by default)',
   },
   bc5100: { text: 'The measured 5100 Å continuum multiplied by a fixed bolometric correction BC5100.', reference: BC_SHEN11.l5100.reference },
   bc3000: { text: `The measured 3000 Å continuum multiplied by a fixed bolometric correction (${BC_SHEN11.l3000.bc}).`, reference: BC_SHEN11.l3000.reference },
@@ -104,7 +104,7 @@ export const BOLOMETRIC_METHODS: Record<string, { text: string; reference: strin
   ),
   hbeta_gh05_bc5100: {
     text: 'No Hα or continuum: the broad Hβ luminosity gives the 5100 Å continuum (Greene & Ho 2005, ApJ 630, 122, eq. 2, inverted), multiplied by BC5100.',
-    reference: BC5100_RICHARDS06.reference,
+    reference: 'Greene & Ho 2005, ApJ 630, 122, eq. 2 (coefficients from memory), with the bc5100 setting',
   },
 };
 
@@ -165,6 +165,14 @@ export function methodsView(meta: SiteMeta): MethodsView {
       id: id(s.bolometric) || id(bolRec),
       params: [...pick('bc5100'), ...values(bolRec, ['id', 'reference'])],
       reference: str(bolRec.reference) ?? BOLOMETRIC_METHODS[id(s.bolometric) || id(bolRec)]?.reference,
+      // Every label lbol_method can carry in this catalog, with the reference the build recorded for it.
+      routes: isRec(bolRec.routes)
+        ? Object.entries(bolRec.routes).map(([label, r]) => ({
+            label,
+            text: BOLOMETRIC_METHODS[label]?.text ?? label,
+            reference: isRec(r) ? str(r.reference) : undefined,
+          }))
+        : [],
     },
     eddington: [
       ...(s.eddingtonPerMsun !== undefined ? [{ name: 'L_Edd per solar mass', value: String(s.eddingtonPerMsun), unit: 'erg/s', reference: str(edd.reference) }] : []),

@@ -7,6 +7,7 @@
 import { columnLabel, unitText } from '../text/columnLabels.ts';
 import { flagText, splitFlags } from '../text/flagText.ts';
 import { formatValue, MISSING } from '../text/formatValue.ts';
+import { limitMark } from '../text/limitMark.ts';
 import type { CatalogRow } from './loadCatalog.ts';
 import type { SiteMeta } from './siteMeta.ts';
 
@@ -20,6 +21,8 @@ export interface ViewLine {
   description: string;
   /** True when the value is an upper limit. */
   limit?: boolean;
+  /** A derived bound: '<' upper or '>' lower limit (then `spread` is empty). */
+  limitMark?: '<' | '>';
   /** True when the value is a number (right-aligned). */
   numeric: boolean;
 }
@@ -85,7 +88,10 @@ export function objectView(row: CatalogRow, columns: readonly string[], meta: Pi
     if (!columns.includes(c)) continue;
     const p16 = row[`${c}_p16`];
     const p84 = row[`${c}_p84`];
-    derived.push(line(c, isNum(p16) && isNum(p84) ? `${formatValue(c, p16)} – ${formatValue(c, p84)}` : ''));
+    const mark = row[c] === null || row[c] === undefined ? '' : limitMark(c, row);
+    // A bound never shows an interval, even from a catalog written before percentiles of bounds were left empty.
+    if (mark) derived.push({ ...line(c, ''), limitMark: mark });
+    else derived.push(line(c, isNum(p16) && isNum(p84) ? `${formatValue(c, p16)} – ${formatValue(c, p84)}` : ''));
   }
 
   const other: ViewLine[] = [];

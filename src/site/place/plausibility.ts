@@ -8,6 +8,15 @@ import type { InputProblem } from './normalizeOne.ts';
  */
 export const MAX_PLAUSIBLE_FLUX_CGS = 1e-10;
 
+/**
+ * Faintest broad-line flux taken as real, erg s^-1 cm^-2: the deepest spectra reach ~1e-19; a
+ * smaller value is usually a flux in W m^-2 (1e-3 of cgs) or scaled twice (common practice, no source).
+ */
+export const MIN_PLAUSIBLE_FLUX_CGS = 1e-22;
+
+/** Brightest broad-line luminosity taken as real, erg s^-1: the most luminous quasars' broad lines stay below ~1e46 (common practice, no source). */
+export const MAX_PLAUSIBLE_LUM_ERG_S = 1e47;
+
 /** Faintest broad-line luminosity taken as real, erg s^-1: smaller values are usually logs typed as linear (common practice, no source). */
 export const MIN_PLAUSIBLE_LUM_ERG_S = 1e30;
 
@@ -26,9 +35,18 @@ export function implausibleInputs(inputs: ObjectInputs): InputProblem[] {
         message: `${f} erg s-1 cm-2 is brighter than any broad line at high redshift: is it in units of 1e-18 (or 1e-17) erg s-1 cm-2? Choose the flux unit.`,
       });
     }
+    if (f !== undefined && f < MIN_PLAUSIBLE_FLUX_CGS) {
+      out.push({
+        column: `flux_${line}`,
+        message: `${f} erg s-1 cm-2 is fainter than any broad line a spectrum can detect: is it in W m-2, or already scaled? Choose the flux unit.`,
+      });
+    }
     const l = li?.lumErgS?.value;
     if (l !== undefined && l < MIN_PLAUSIBLE_LUM_ERG_S) {
       out.push({ column: `lum_${line}`, message: `${l} erg s-1 is far too faint for a broad line: is it log10 of the luminosity? Choose the log unit.` });
+    }
+    if (l !== undefined && l > MAX_PLAUSIBLE_LUM_ERG_S) {
+      out.push({ column: `lum_${line}`, message: `${l} erg s-1 is brighter than any broad line: is it in units of 1e-7 (W) or scaled twice? Choose the luminosity unit.` });
     }
   }
   return out;

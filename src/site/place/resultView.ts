@@ -44,13 +44,22 @@ export function resultView(
   const values = el('table', { class: 'data values' }, el('caption', { class: 'visually-hidden' }, 'Derived values of the new object'));
   values.append(el('thead', {}, el('tr', {}, el('th', { scope: 'col' }, 'Quantity'), el('th', { scope: 'col', class: 'num' }, 'Value'), el('th', { scope: 'col', class: 'num' }, '16–84 % interval'))));
   const tb = el('tbody');
-  const row = (label: string, v: number | null, p: { p16: number; p84: number } | null, unit: string) =>
-    tb.append(el('tr', {}, el('th', { scope: 'row' }, `${label} `, el('span', { class: 'unit' }, unit)), el('td', { class: 'num' }, f2(v)), el('td', { class: 'num' }, p ? `${f2(p.p16)} – ${f2(p.p84)}` : '—')));
-  row('Black-hole mass', d.logMbh, d.pct.logMbh, 'log M☉');
-  row('Bolometric luminosity', d.logLbol, d.pct.logLbol, 'log erg s⁻¹');
-  row('Eddington ratio', d.logEddRatio, d.pct.logEddRatio, 'log λ_Edd');
-  row('Required seed mass', d.logMseed, d.pct.logMseed, `log M☉ at z = ${object.zSeed}`);
-  row('Offset from the local relation', d.deltaLogMbhLocal, d.pct.deltaLogMbhLocal, 'dex');
+  // A bound shows its sign and no interval.
+  const row = (label: string, v: number | null, p: { p16: number; p84: number } | null, unit: string, mark: '<' | '>' | '') =>
+    tb.append(
+      el('tr', {},
+        el('th', { scope: 'row' }, `${label} `, el('span', { class: 'unit' }, unit)),
+        el('td', { class: 'num' }, v !== null && mark ? `${mark} ${f2(v)}` : f2(v)),
+        el('td', { class: 'num' }, mark && v !== null ? (mark === '<' ? 'upper limit' : 'lower limit') : p ? `${f2(p.p16)} – ${f2(p.p84)}` : '—'),
+      ),
+    );
+  const up = (b: boolean): '<' | '' => (b ? '<' : '');
+  const eddMark = d.flags.includes('edd_ratio_lower_limit') ? '>' : up(d.isLimit.logEddRatio);
+  row('Black-hole mass', d.logMbh, d.pct.logMbh, 'log M☉', up(d.isLimit.logMbh));
+  row('Bolometric luminosity', d.logLbol, d.pct.logLbol, 'log erg s⁻¹', up(d.isLimit.logLbol));
+  row('Eddington ratio', d.logEddRatio, d.pct.logEddRatio, 'log λ_Edd', eddMark);
+  row('Required seed mass', d.logMseed, d.pct.logMseed, `log M☉ at z = ${object.zSeed}`, up(d.isLimit.logMseed));
+  row('Offset from the local relation', d.deltaLogMbhLocal, d.pct.deltaLogMbhLocal, 'dex', up(d.isLimit.deltaLogMbhLocal));
   values.append(tb);
   root.append(el('div', { class: 'table-wrap' }, values));
   if (d.pSuperEddington !== null) root.append(el('p', { class: 'small' }, `Probability that it accretes above the Eddington limit: ${(100 * d.pSuperEddington).toFixed(0)} %.`));

@@ -63,6 +63,7 @@ describe('parseConfig', () => {
       cosmology: 'wmap9',
       calibrations: { halpha: 'gh05_halpha', hbeta: 'vp06_hbeta', mgii: 'vo09_mgii', civ: 'vp06_civ' },
       linePriority: ['mgii', 'halpha'],
+      hbetaWithoutContinuum: 'line',
       bolometric: 'bc5100',
       bc5100: 9.26,
       eddingtonPerMsun: 1.3e38,
@@ -82,6 +83,13 @@ describe('parseConfig', () => {
     expect(cfg.site).toEqual({ base: '/census/' });
     expect(cfg.configPath).toBe(here);
     expect(cfg.configText).toBe(FULL);
+  });
+
+  it('reads the Hβ route without a continuum and the intended-medians switch', () => {
+    const cfg = parse('hbeta_without_continuum: gh05_eq2\nimplausible_medians_intended: true\n');
+    expect(cfg.settings.hbetaWithoutContinuum).toBe('gh05_eq2');
+    expect(cfg.implausibleMediansIntended).toBe(true);
+    expect(parse('').settings.hbetaWithoutContinuum).toBe('line');
   });
 
   it('fills keys a config leaves out with the defaults', () => {
@@ -181,6 +189,8 @@ describe('parseConfig rejects a bad config with one line naming the file and the
     ['columns: [id, z]', 'census.config.yaml: columns must be a mapping of canonical column names, got a list'],
     ['columns: { id: { unit: km/s } }', 'census.config.yaml: columns.id.unit: id is text and takes no unit, got "km/s"'],
     ['- a\n- b', 'census.config.yaml: must be a mapping of keys to values, got a list'],
+    ['hbeta_without_continuum: gh05', 'census.config.yaml: hbeta_without_continuum: unknown route "gh05"; known: line, gh05_eq2'],
+    ['implausible_medians_intended: yes please', 'census.config.yaml: implausible_medians_intended must be true or false, got "yes please"'],
   ])('%s', (text, message) => {
     expect(messageOf(text)).toBe(message);
   });

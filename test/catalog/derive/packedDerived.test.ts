@@ -26,6 +26,7 @@ const derived: DerivedObject = {
     logMseed: null,
     deltaLogMbhLocal: { p16: 0.8, p50: 1.2, p84: 1.6 },
   },
+  isLimit: { logMbh: false, logLbol: true, logEddRatio: true, logMseed: false, lambdaReq: false, deltaLogMbhLocal: false },
   flags: ['no_host_mass', 'calibration_out_of_range'],
 };
 
@@ -49,5 +50,13 @@ describe('packed derived results', () => {
     expect(packedValue(p, 0, 'logMbh')).toBeNaN();
     expect(packedValue(p, 2, 'ageGyr')).toBeNaN();
     expect(p.flags[0]).toBe('');
+  });
+
+  it('pack which quantities are bounds as 1 and the others as 0', () => {
+    const p = allocatePacked(1);
+    packInto(p, 0, derived);
+    expect(packedValue(p, 0, 'isLimit.logLbol')).toBe(1);
+    expect(packedValue(p, 0, 'isLimit.logEddRatio')).toBe(1);
+    expect(packedValue(p, 0, 'isLimit.logMbh')).toBe(0);
   });
 });

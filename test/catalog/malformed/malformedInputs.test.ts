@@ -329,9 +329,10 @@ const rowCases: RowCase[] = [
   },
   {
     what: 'widths beyond 30000 km/s',
-    files: { 'wide.csv': csv(BAD_ROWS_HEADER, 'A,5.5,45000,,1e42,', 'B,6,30000,,1e42,') },
+    // Two ordinary widths keep the catalog's median plausible (else derive stops: see inputMedians.ts).
+    files: { 'wide.csv': csv(BAD_ROWS_HEADER, 'A,5.5,45000,,1e42,', 'B,6,30000,,1e42,', 'C,6,2000,,1e42,', 'D,6,2100,,1e42,') },
     catalog: 'wide.csv',
-    rows: 2,
+    rows: 4,
     problems: ['row 1 (id A): fwhm_halpha = 45000 km/s: must be at most 30000 km/s'],
   },
   {

@@ -7,7 +7,8 @@ describe('derivedColumnSpecs', () => {
     expect(derivedColumnSpecs(['halpha', 'civ']).map((c) => c.name)).toEqual([
       'age_gyr', 'dl_mpc', 'log_lum_halpha', 'log_lum_civ', 'log_l5100', 'log_mbh', 'mbh_method', 'log_lbol', 'lbol_method',
       'log_edd_ratio', 'p_super_eddington', 'log_mseed', 'lambda_req_light', 'lambda_req_heavy', 'delta_log_mbh_local',
-      'local_offset_sigma', 'p_above_local', 'flags',
+      'local_offset_sigma', 'p_above_local',
+      'log_mbh_is_limit', 'log_lbol_is_limit', 'log_edd_ratio_is_limit', 'log_mseed_is_limit', 'lambda_req_is_limit', 'delta_log_mbh_local_is_limit', 'flags',
       'log_mbh_p16', 'log_mbh_p50', 'log_mbh_p84', 'log_lbol_p16', 'log_lbol_p50', 'log_lbol_p84',
       'log_edd_ratio_p16', 'log_edd_ratio_p50', 'log_edd_ratio_p84', 'log_mseed_p16', 'log_mseed_p50', 'log_mseed_p84',
       'delta_log_mbh_local_p16', 'delta_log_mbh_local_p50', 'delta_log_mbh_local_p84',

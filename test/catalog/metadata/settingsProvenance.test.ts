@@ -1,7 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { defaultSettings } from '../../../src/catalog/config/defaultConfig.ts';
 import { settingsProvenance } from '../../../src/catalog/metadata/settingsProvenance.ts';
-import type { DeriveSettings } from '../../../src/core/derive/types.ts';
+import type { DeriveSettings, ObjectInputs } from '../../../src/core/derive/types.ts';
+import { deriveObject } from '../../../src/core/derive/deriveObject.ts';
+import { createRng } from '../../../src/core/random/createRng.ts';
 
 const settings = (over: Partial<DeriveSettings> = {}): DeriveSettings => ({ ...defaultSettings(), ...over });
 
@@ -28,6 +30,29 @@ describe('settingsProvenance', () => {
     expect(settingsProvenance(settings({ bolometric: 'bc3000' })).bolometric.records).toEqual([expect.objectContaining({ bc: 5.15 })]);
     expect(settingsProvenance(settings({ bolometric: 'netzer19' })).bolometric.records).toHaveLength(3);
     expect(settingsProvenance(settings({ bolometric: 'bc5100', bc5100: 8 })).bolometric.records).toEqual([expect.objectContaining({ bc: 8, reference: 'value set in the config' })]);
+  });
+
+  it('records the correction and reference of every route an object can fall back to', () => {
+    const objects: ObjectInputs[] = [
+      { id: 'ha', z: 5, lines: { halpha: { lumErgS: { value: 1e43 }, fwhmKms: { value: 2000 } } } },
+      { id: 'hb', z: 8, lines: { hbeta: { lumErgS: { value: 1e42 }, fwhmKms: { value: 2000 } } } },
+      { id: 'c5', z: 6, lines: {}, lamL5100: { value: 1e44 } },
+      { id: 'c3', z: 6, lines: {}, lamL3000: { value: 1e44 } },
+      { id: 'c1', z: 6, lines: {}, lamL1350: { value: 1e44 } },
+    ];
+    for (const bolometric of ['halpha_gh05_bc5100', 'bc5100', 'bc3000', 'bc1350', 'netzer19'] as const) {
+      const s = settings({ bolometric, draws: 4 });
+      const routes = settingsProvenance(s).bolometric.routes;
+      for (const o of objects) {
+        const method = deriveObject(o, s, createRng(1)).lbolMethod!;
+        expect(routes[method], `${bolometric}: ${o.id} → ${method}`).toBeDefined();
+        expect(routes[method]!.reference, `${bolometric}: ${method}`).not.toBe('');
+      }
+    }
+    // Greene & Ho 2005 (ApJ 630, 122) eq. 2 behind the Hβ route, with the BC5100 of the settings.
+    const hb = settingsProvenance(settings()).bolometric.routes.hbeta_gh05_bc5100!;
+    expect(hb.reference).toMatch(/Greene & Ho 2005.*eq\. 2/);
+    expect(hb.records).toContainEqual(expect.objectContaining({ bc: settings().bc5100 }));
   });
 
   it('names the source of the Eddington constant, the local relation, the dust curve and the growth model', () => {

@@ -46,8 +46,8 @@ afterAll(async () => {
 
 describe('published values recomputed through dawn-census derive', () => {
   // The redshifts below are placeholders: a luminosity given directly makes mass and L_bol independent of z.
-  it('reproduces Matthee et al. 2024 masses and L_bol with the defaults (no config)', async () => {
-    const rows = await derive('id,z,fwhm_halpha,lum_halpha\nGOODS-N-4014,5.2,2103,4.6e42\nJ0148-12884,5.2,1166,2.3e42\n');
+  it('reproduces Matthee et al. 2024 masses and L_bol with their BC5100 = 10.33 set in the config', async () => {
+    const rows = await derive('id,z,fwhm_halpha,lum_halpha\nGOODS-N-4014,5.2,2103,4.6e42\nJ0148-12884,5.2,1166,2.3e42\n', 'bc5100: 10.33');
     const src = 'Matthee et al. 2024, ApJ 963, 129 (RV15 with ε = 1.075; two decimals published)';
     expectClose(rows.get('GOODS-N-4014')!.log_mbh!, 7.58, { atol: 0.005, source: src });
     expectClose(rows.get('J0148-12884')!.log_mbh!, 6.91, { atol: 0.005, source: src });
@@ -58,7 +58,7 @@ describe('published values recomputed through dawn-census derive', () => {
   it('reproduces Harikane et al. 2023 masses and an Eddington ratio with Greene & Ho 2005 eq. 6 and 1.3e38 chosen in the config', async () => {
     const rows = await derive(
       'id,z,fwhm_halpha,lum_halpha,lam_l_5100\nCEERS-01244,4.5,2228,7.7e42,\nGLASS-160133,4.0,1028,1.2e42,1.0648e44\n',
-      ['calibrations: { halpha: gh05_halpha }', 'bolometric: bc5100', 'eddington_per_msun: 1.3e38'].join('\n'),
+      ['calibrations: { halpha: gh05_halpha }', 'bolometric: bc5100', 'bc5100: 10.33', 'eddington_per_msun: 1.3e38'].join('\n'),
     );
     const src = 'Harikane et al. 2023, ApJ 959, 39 (Greene & Ho 2005 eq. 6; two digits published)';
     expectClose(10 ** rows.get('CEERS-01244')!.log_mbh!, 3.2e7, { rtol: 0.016, source: src });

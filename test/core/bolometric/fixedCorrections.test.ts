@@ -4,14 +4,15 @@ import { expectClose } from '../../helpers/expectClose.ts';
 
 describe('fixed bolometric corrections', () => {
   it('are 9.26, 5.15 and 3.81 at 5100, 3000 and 1350 Å (Shen et al. 2011 from Richards et al. 2006)', () => {
-    // published-checks.md: Richards et al. 2006 mean SED as used by Shen et al. 2011.
+    // Shen et al. 2011, ApJS 194, 45 (bolometric luminosities, section not rechecked), from the Richards et al. 2006,
+    // ApJS 166, 470 mean quasar SED: BC5100 = 9.26, BC3000 = 5.15, BC1350 = 3.81.
     expect(BC_SHEN11.l5100.bc).toBe(9.26);
     expect(BC_SHEN11.l3000.bc).toBe(5.15);
     expect(BC_SHEN11.l1350.bc).toBe(3.81);
   });
 
   it('include BC5100 = 10.33 of recent high-redshift papers', () => {
-    // published-checks.md: BC5100 = 10.33 (Richards et al. 2006) with L5100 from broad Hα.
+    // Richards et al. 2006, ApJS 166, 470 mean SED, BC5100 = 10.33, as Matthee et al. 2024, ApJ 963, 129 apply it to L5100 from broad Hα.
     expect(BC5100_RICHARDS06.bc).toBe(10.33);
   });
 

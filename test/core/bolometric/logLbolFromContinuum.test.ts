@@ -5,7 +5,7 @@ import { expectClose } from '../../helpers/expectClose.ts';
 
 describe('logLbolFromContinuum', () => {
   it('applies 9.26, 5.15 and 3.81 for bc5100, bc3000 and bc1350', () => {
-    // Shen et al. 2011 / Richards et al. 2006 (published-checks.md).
+    // Shen et al. 2011, ApJS 194, 45, from the Richards et al. 2006, ApJS 166, 470 mean SED: 9.26, 5.15, 3.81.
     expectClose(logLbolFromContinuum('bc5100', 44), 44 + Math.log10(9.26), { atol: 1e-12, source: 'Shen 2011 BC5100' });
     expectClose(logLbolFromContinuum('bc3000', 44), 44 + Math.log10(5.15), { atol: 1e-12, source: 'Shen 2011 BC3000' });
     expectClose(logLbolFromContinuum('bc1350', 44), 44 + Math.log10(3.81), { atol: 1e-12, source: 'Shen 2011 BC1350' });

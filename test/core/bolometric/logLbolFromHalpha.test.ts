@@ -4,7 +4,7 @@ import { expectClose } from '../../helpers/expectClose.ts';
 
 describe('L_bol from broad Hα', () => {
   it('maps L_Hα = 5.25e42 to λL5100 = 1e44 (Greene & Ho 2005 eq. 1 inverted)', () => {
-    // Greene & Ho 2005 eq. 1 normalisation (published-checks.md).
+    // Greene & Ho 2005, ApJ 630, 122, eq. 1: L_Hα = 5.25e42 (λL5100/1e44)^1.157 erg/s.
     expectClose(logL5100FromLogLHalpha(Math.log10(5.25e42)), 44, { atol: 1e-12, source: 'Greene & Ho 2005 eq. 1' });
   });
 

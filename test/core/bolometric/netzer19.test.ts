@@ -4,7 +4,7 @@ import { expectClose } from '../../helpers/expectClose.ts';
 
 describe('Netzer 2019 luminosity-dependent corrections', () => {
   it('carry (c, d) = (40, −0.2), (19, −0.2), (7, −0.1) at 5100, 3000, 1400 Å', () => {
-    // published-checks.md, Netzer 2019 Table 1 from a code transcription: confirm against the paper.
+    // Netzer 2019, MNRAS 488, 5185, Table 1, k = c (λL/1e42)^d; from a code transcription (not from the paper): confirm.
     expect([NETZER19.l5100.c, NETZER19.l5100.d]).toEqual([40, -0.2]);
     expect([NETZER19.l3000.c, NETZER19.l3000.d]).toEqual([19, -0.2]);
     expect([NETZER19.l1350.c, NETZER19.l1350.d]).toEqual([7, -0.1]);

@@ -33,7 +33,8 @@ const haObject = (id: string, lum: number, fwhm: number, extra: Partial<ObjectIn
 
 describe('deriveObject against published high-redshift values', () => {
   it('recomputes the Matthee et al. 2024 mass and L_bol of GOODS-N-4014 from its published inputs', () => {
-    const d = deriveObject(haObject('g', 4.6e42, 2103), settings(), rngFor('g'));
+    // Matthee et al. 2024 multiply by BC5100 = 10.33 (Richards et al. 2006), not the default 9.26.
+    const d = deriveObject(haObject('g', 4.6e42, 2103), settings({ bc5100: 10.33 }), rngFor('g'));
     // Matthee et al. 2024, ApJ 963, 129, Table 2: log M = 7.58 (two decimals published)
     expectClose(d.logMbh!, 7.58, { atol: 0.005, source: 'Matthee et al. 2024 ApJ 963, 129, GOODS-N-4014, RV15 with ε = 1.075' });
     // Same table: L_bol = 9.3e44 (two digits); the rounded input 4.6e42 gives 9.22e44, within the two roundings (1.5 %)
@@ -77,7 +78,14 @@ describe('deriveObject corrections', () => {
     };
     const d = deriveObject(inputs, settings(), rngFor('u'));
     expect(d.flags).toEqual(expect.arrayContaining(['mbh_upper_limit', 'lbol_upper_limit', 'edd_ratio_upper_limit']));
-    expect(d.logMbh).not.toBeNull();
+    // The bound is the value at the limit flux: L = 4πD_L² F (Planck18, z = 6), then
+    // Reines & Volonteri 2015, ApJ 813, 82, eq. 5 (ε = 1.075) and Greene & Ho 2005 eq. 1 inverted × BC5100 = 9.26 (Shen et al. 2011).
+    const dl = getCosmology('planck18').luminosityDistanceMpc(6) * 3.0856775814913673e24; // cm per Mpc (IAU 2015 parsec)
+    const logL = Math.log10(3e-18 * 4 * Math.PI * dl * dl);
+    expectClose(d.logMbh!, Math.log10(1.075) + 6.57 + 0.47 * (logL - 42) + 2.06 * Math.log10(1.5), { atol: 1e-9, source: 'Reines & Volonteri 2015 eq. 5 at the limit, closed form' });
+    expectClose(d.logLbol!, 44 + (logL - Math.log10(5.25e42)) / 1.157 + Math.log10(9.26), { atol: 1e-9, source: 'Greene & Ho 2005 eq. 1 inverted × 9.26 at the limit, closed form' });
+    expect(d.isLimit.logMbh && d.isLimit.logLbol && d.isLimit.logEddRatio).toBe(true);
+    expect(d.pct.logMbh).toBeNull();
   });
 
   it('takes an Hβ mass from L5100 and falls back to BC5100 for L_bol when there is no Hα', () => {
@@ -88,7 +96,7 @@ describe('deriveObject corrections', () => {
     expect(d.mbhMethod).toBe('vp06_hbeta');
     expect(d.lbolMethod).toBe('bc5100');
     expect(d.flags).toContain('lbol_fallback');
-    expectClose(d.logLbol!, 44 + Math.log10(10.33), { atol: 1e-12, source: 'BC5100 = 10.33 (Richards et al. 2006), closed form' });
+    expectClose(d.logLbol!, 44 + Math.log10(9.26), { atol: 1e-12, source: 'BC5100 = 9.26 (Shen et al. 2011, ApJS 194, 45), closed form' });
   });
 
   it('gives an Hβ-only object without a continuum its L_bol through L5100 from L(Hβ), flagged', () => {
@@ -96,9 +104,9 @@ describe('deriveObject corrections', () => {
     const d = deriveObject(inputs, settings(), rngFor('hb'));
     expect(d.lbolMethod).toBe('hbeta_gh05_bc5100');
     expect(d.flags).toEqual(expect.arrayContaining(['lbol_fallback', 'l5100_from_hbeta']));
-    // Greene & Ho 2005 eq. 2 (coefficients from memory, as in src/core/virial): L_Hβ = 1.425e42 (L5100/1e44)^1.133, inverted; × BC5100 = 10.33
+    // Greene & Ho 2005 eq. 2 (coefficients from memory, as in src/core/virial): L_Hβ = 1.425e42 (L5100/1e44)^1.133, inverted; × BC5100 = 9.26 (Shen et al. 2011)
     const logL5100 = 44 + (42 - Math.log10(1.425e42)) / 1.133;
-    expectClose(d.logLbol!, logL5100 + Math.log10(10.33), { atol: 1e-9, source: 'Greene & Ho 2005 eq. 2 inverted (from memory) × 10.33, closed form' });
+    expectClose(d.logLbol!, logL5100 + Math.log10(9.26), { atol: 1e-9, source: 'Greene & Ho 2005 eq. 2 inverted (from memory) × 9.26 (Shen et al. 2011), closed form' });
     expectClose(d.logL5100!, logL5100, { atol: 1e-9, source: 'Greene & Ho 2005 eq. 2 inverted (from memory), closed form' });
   });
 

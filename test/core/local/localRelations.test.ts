@@ -7,7 +7,7 @@ const lg = Math.log10;
 
 describe('local black-hole relations', () => {
   it('give Kormendy & Ho 2013 eq. 7: M = 0.309e9 (σ/200)^4.38', () => {
-    // Kormendy & Ho 2013, ARA&A 51, 511, eq. 7 (published-checks.md); computed in linear form here.
+    // Kormendy & Ho 2013, ARA&A 51, 511, eq. 7: M/1e9 = 0.309 (σ/200 km/s)^4.38; computed in linear form here.
     const rel = getLocalRelation('kh13_sigma');
     expectClose(localLogMbh(rel, lg(200)), lg(0.309e9), { atol: 1e-12, source: 'KH13 eq. 7' });
     expectClose(localLogMbh(rel, lg(150)), lg(0.309e9 * 0.75 ** 4.38), { atol: 1e-12, source: 'KH13 eq. 7' });
@@ -21,19 +21,20 @@ describe('local black-hole relations', () => {
   });
 
   it('give Reines & Volonteri 2015 AGN: log M = 7.45 + 1.05 log(M*/1e11)', () => {
-    // RV15 (ApJ 813, 82), published-checks.md.
+    // Reines & Volonteri 2015, ApJ 813, 82, eq. 4 with the AGN-sample coefficients (α = 7.45, β = 1.05).
     const rel = getLocalRelation('rv15_agn');
-    expectClose(localLogMbh(rel, 11), 7.45, { atol: 1e-12, source: 'RV15 AGN relation' });
-    expectClose(localLogMbh(rel, 9.5), 7.45 - 1.05 * 1.5, { atol: 1e-12, source: 'RV15 AGN relation' });
+    expectClose(localLogMbh(rel, 11), 7.45, { atol: 1e-12, source: 'Reines & Volonteri 2015, ApJ 813, 82, eq. 4 (AGN)' });
+    expectClose(localLogMbh(rel, 9.5), 7.45 - 1.05 * 1.5, { atol: 1e-12, source: 'Reines & Volonteri 2015, ApJ 813, 82, eq. 4 (AGN)' });
   });
 
   it('give Reines & Volonteri 2015 early types: log M = 8.95 + 1.40 log(M*/1e11) (from memory)', () => {
-    // From memory (brief): confirm against RV15.
-    expectClose(localLogMbh(getLocalRelation('rv15_early'), 10), 8.95 - 1.4, { atol: 1e-12, source: 'RV15 early-type relation (from memory)' });
+    // Reines & Volonteri 2015, ApJ 813, 82, eq. 4 with the elliptical/classical-bulge coefficients, from memory: confirm.
+    expectClose(localLogMbh(getLocalRelation('rv15_early'), 10), 8.95 - 1.4, { atol: 1e-12, source: 'Reines & Volonteri 2015 eq. 4, early types (from memory)' });
   });
 
   it('record the intrinsic scatter: 0.55 (RV15 AGN, from memory), 0.47 (RV15 early, from memory), 0.29 (KH13)', () => {
-    // published-checks.md: RV15 AGN 0.55 dex rms (from memory); KH13 0.29 dex.
+    // Reines & Volonteri 2015 §4 rms scatter of the AGN relation 0.55 dex (from memory) and of the early types 0.47 dex
+    // (from memory); Kormendy & Ho 2013, ARA&A 51, 511, eqs. 7 and 10, intrinsic scatter 0.29 dex (published).
     expect(LOCAL_RELATIONS.rv15_agn.scatterDex).toBe(0.55);
     expect(LOCAL_RELATIONS.rv15_agn.scatterProvenance).toBe('from memory');
     expect(LOCAL_RELATIONS.rv15_early.scatterDex).toBe(0.47);

@@ -10,7 +10,7 @@ import { expectClose } from '../../helpers/expectClose.ts';
 
 describe('Greene & Ho 2005 line–continuum relations', () => {
   it('give L_Hα = 5.25e42 at λL5100 = 1e44 and slope 1.157 (eq. 1)', () => {
-    // Greene & Ho 2005 eq. 1 (published-checks.md).
+    // Greene & Ho 2005, ApJ 630, 122, eq. 1: L_Hα = 5.25e42 (λL5100/1e44)^1.157 erg/s.
     expectClose(logLHalphaFromLogL5100(44), Math.log10(5.25e42), { atol: 1e-12, source: 'Greene & Ho 2005 eq. 1' });
     expectClose(logLHalphaFromLogL5100(45) - logLHalphaFromLogL5100(44), 1.157, { atol: 1e-12, source: 'Greene & Ho 2005 eq. 1' });
   });

@@ -4,7 +4,7 @@ import { expectClose } from '../../helpers/expectClose.ts';
 
 const toy: VirialCalibration = {
   id: 'toy', line: 'hbeta', label: 'toy', logEps: 0.1, a: 7, b: 0.5, c: 2, luminosity: 'line', logLpivot: 42,
-  scatterDex: 0.3, scatterProvenance: 'common practice', reference: 'none (test fixture)',
+  scatterDex: 0.3, scatterProvenance: 'common practice', reference: 'none (test fixture)', massScale: 'vp06_f5.5',
   validity: { logL: [41, 43], fwhmKms: [1000, 5000] },
 };
 

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { calibrationFormula, localFormula, methodsView } from '../../../src/site/build/methodsView.ts';
 import { normalizeMeta } from '../../../src/site/build/siteMeta.ts';
+import type { SiteMeta } from '../../../src/site/build/siteMeta.ts';
 
 // A sidecar in the shape the CLI writes (src/catalog/metadata/settingsProvenance.ts): the settings, and the records behind each id.
 const sidecar = {
@@ -35,11 +36,36 @@ describe('methodsView', () => {
   it('fills the local relation and the bolometric reference from the tool records when the sidecar names only the id', () => {
     expect(m.local.reference).toMatch(/Reines & Volonteri 2015/);
     expect(m.local.formula).toBe('log(M_BH/M☉) = 7.450 + 1.05 · (log(M*/M☉) − 11)');
-    expect(m.bolometric.reference).toMatch(/Richards et al. 2006/);
+    expect(m.bolometric.reference).toMatch(/Greene & Ho 2005.*eq\. 1/);
   });
 
   it('gives no formula for records without coefficients', () => {
     expect(calibrationFormula({ id: 'x' })).toBeUndefined();
     expect(localFormula({})).toBeUndefined();
+  });
+});
+
+describe('methodsView bolometric routes', () => {
+  it('lists every fallback route the sidecar records, with its reference', () => {
+    const m = methodsView({
+      raw: {
+        settings: {
+          settings: { bolometric: 'halpha_gh05_bc5100', bc5100: 9.26 },
+          bolometric: {
+            method: 'halpha_gh05_bc5100',
+            routes: {
+              halpha_gh05_bc5100: { records: [], reference: 'Greene & Ho 2005, ApJ 630, 122, eq. 1; Shen et al. 2011' },
+              bc3000: { records: [], reference: 'Shen et al. 2011, ApJS 194, 45' },
+            },
+          },
+        },
+      },
+      columns: {},
+    } as unknown as SiteMeta);
+    expect(m.bolometric.routes.map((r) => [r.label, r.reference])).toEqual([
+      ['halpha_gh05_bc5100', 'Greene & Ho 2005, ApJ 630, 122, eq. 1; Shen et al. 2011'],
+      ['bc3000', 'Shen et al. 2011, ApJS 194, 45'],
+    ]);
+    expect(m.bolometric.routes[1]!.text).toMatch(/3000 Å continuum/);
   });
 });

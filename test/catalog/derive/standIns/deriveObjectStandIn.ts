@@ -31,6 +31,7 @@ export function deriveObject(inputs: ObjectInputs, settings: DeriveSettings, rng
     localOffsetSigma: null,
     pAboveLocal: null,
     pct: { logMbh: pct, logLbol: null, logEddRatio: null, logMseed: null, deltaLogMbhLocal: null },
+    isLimit: { logMbh: false, logLbol: false, logEddRatio: false, logMseed: false, lambdaReq: false, deltaLogMbhLocal: false },
     flags: logMbh === null ? ['no_mass_line'] : [],
   };
 }

@@ -1,0 +1,134 @@
+import { LINES, type LineId } from '../../core/derive/types.ts';
+import type { ColumnPlan, PlannedColumn } from '../normalize/ColumnPlan.ts';
+import type { NormalizedRow } from '../normalize/normalizeChunk.ts';
+import { CatalogError } from '../readers/CatalogError.ts';
+import type { PackedDerived } from './packedDerived.ts';
+import { packedValue } from './packedDerived.ts';
+
+/**
+ * Medians a catalog of broad-line AGN must have (common practice, no source): broad-line
+ * luminosities of 1e39–1e46 erg/s and widths of 300–20000 km/s. A median outside is almost
+ * always a unit mistake (fluxes in 1e-18 erg s⁻¹ cm⁻² read as erg s⁻¹ cm⁻², widths in m/s).
+ */
+export const PLAUSIBLE_MEDIAN = {
+  logLumErgS: [39, 46],
+  fwhmKms: [300, 20000],
+} as const;
+
+/** Histogram bins per dex: the median is known to 0.01 dex. */
+const BINS_PER_DEX = 100;
+const LOG_MIN = -40;
+const LOG_MAX = 80;
+
+/** A median in log10 from a fixed histogram: bounded memory whatever the row count. */
+class LogMedian {
+  private readonly counts = new Uint32Array((LOG_MAX - LOG_MIN) * BINS_PER_DEX);
+  n = 0;
+  add(logX: number): void {
+    if (!Number.isFinite(logX)) return;
+    const i = Math.min(this.counts.length - 1, Math.max(0, Math.floor((logX - LOG_MIN) * BINS_PER_DEX)));
+    this.counts[i]!++;
+    this.n++;
+  }
+  /** log10 of the median (bin centre), or NaN when empty. */
+  median(): number {
+    if (this.n === 0) return NaN;
+    let seen = 0;
+    for (let i = 0; i < this.counts.length; i++) {
+      seen += this.counts[i]!;
+      if (seen * 2 >= this.n) return LOG_MIN + (i + 0.5) / BINS_PER_DEX;
+    }
+    return NaN;
+  }
+}
+
+const fmt = (logX: number): string => (10 ** logX).toPrecision(2);
+
+/**
+ * The catalog-level plausibility check of derive: the median broad-line luminosity (from the
+ * derived `log_lum_<line>`) and the median FWHM (as read, including widths the row checks
+ * refused) of each line. `check()` throws a one-line CatalogError naming the column, the
+ * median and the unit the values were probably in, unless the config says they are intended.
+ */
+export class InputMedians {
+  private readonly lum = new Map<LineId, LogMedian>();
+  private readonly fwhm = new Map<LineId, LogMedian>();
+  private readonly lumColumn = new Map<LineId, PlannedColumn>();
+  private readonly fwhmColumn = new Map<LineId, PlannedColumn>();
+
+  constructor(
+    plan: ColumnPlan,
+    private readonly label: string,
+  ) {
+    const byName = new Map(plan.canonical.map((c) => [c.name, c]));
+    for (const line of LINES) {
+      const lumCol = byName.get(`flux_${line}`) ?? byName.get(`lum_${line}`);
+      if (lumCol) {
+        this.lumColumn.set(line, lumCol);
+        this.lum.set(line, new LogMedian());
+      }
+      const w = byName.get(`fwhm_${line}`);
+      if (w) {
+        this.fwhmColumn.set(line, w);
+        this.fwhm.set(line, new LogMedian());
+      }
+    }
+  }
+
+  /** Adds one row: its widths (valid or refused by the row checks) and, when derived, its line luminosities. */
+  add(row: NormalizedRow, packed: PackedDerived | null, k: number): void {
+    for (const [line, m] of this.fwhm) {
+      const v = row.canonical[`fwhm_${line}`];
+      if (typeof v === 'number') m.add(Math.log10(v));
+      else {
+        const problem = row.problems.find((p) => p.column === `fwhm_${line}`);
+        const raw = problem ? Number(problem.value) : NaN;
+        if (raw > 0) m.add(Math.log10(this.fwhmColumn.get(line)!.convert(raw)));
+      }
+    }
+    if (!packed) return;
+    for (const [line, m] of this.lum) {
+      if (row.inputs?.lines[line]?.fluxIsLimit) continue;
+      m.add(packedValue(packed, k, `logLum.${line}`));
+    }
+  }
+
+  /** Throws CatalogError at the first implausible median, unless `intended`. */
+  check(intended: boolean): void {
+    if (intended) return;
+    for (const [line, m] of this.lum) {
+      const med = m.median();
+      const [lo, hi] = PLAUSIBLE_MEDIAN.logLumErgS;
+      if (!(med < lo || med > hi)) continue;
+      const col = this.lumColumn.get(line)!;
+      const isFlux = col.name.startsWith('flux_');
+      const shift = Math.round(med - 42.5);
+      const likely = isFlux
+        ? `the fluxes look like they are in units of 1e${-shift} erg s-1 cm-2`
+        : med < lo
+          ? 'the values look like log10 of the luminosity (log(erg/s))'
+          : `the luminosities look like they are in units of 1e${-shift} erg s-1`;
+      throw new CatalogError(
+        `${this.label}: column ${col.label}, read in ${col.unitLabel}: the median broad-line luminosity is ${fmt(med)} erg/s, ` +
+          `outside 1e${lo}–1e${hi}: ${likely}; set columns.${col.name}.unit in the config, or implausible_medians_intended: true if the values are right`,
+      );
+    }
+    for (const [line, m] of this.fwhm) {
+      const med = m.median();
+      const [lo, hi] = PLAUSIBLE_MEDIAN.fwhmKms;
+      if (!(10 ** med < lo || 10 ** med > hi)) continue;
+      const col = this.fwhmColumn.get(line)!;
+      const v = 10 ** med;
+      const likely =
+        v > hi
+          ? v / 1e5 >= lo && v / 1e5 <= hi
+            ? 'the widths look like cm/s'
+            : 'the widths look like m/s'
+          : 'the widths look like they are in 1000 km/s or in Å';
+      throw new CatalogError(
+        `${this.label}: column ${col.label}, read in ${col.unitLabel}: the median FWHM is ${fmt(med)} km/s, outside ${lo}–${hi} km/s: ` +
+          `${likely}; set columns.${col.name}.unit in the config, or implausible_medians_intended: true if the values are right`,
+      );
+    }
+  }
+}
