@@ -1,6 +1,7 @@
 /**
  * Recognising and converting the text of one cell (CSV, TSV, ECSV and VOTable share these rules).
  */
+import type { Cell } from './types.ts';
 
 const INT_RE = /^[+-]?\d+$/;
 const FLOAT_RE = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
@@ -40,4 +41,16 @@ export function parseBoolText(s: string): boolean | null {
   if (TRUE_RE.test(s)) return true;
   if (FALSE_RE.test(s)) return false;
   return null;
+}
+
+/** A cell as text: numbers in JavaScript's shortest round-trip form, booleans as `true`/`false`. */
+export function cellAsText(cell: Cell): Cell {
+  return cell === null || typeof cell === 'string' ? cell : String(cell);
+}
+
+const LEADING_ZERO_RE = /^[+-]?0\d/;
+
+/** True for number text with a leading zero before another digit (`007`, `-00.5`): its spelling carries meaning a number would lose. */
+export function hasLeadingZero(s: string): boolean {
+  return LEADING_ZERO_RE.test(s);
 }

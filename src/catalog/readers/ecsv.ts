@@ -60,7 +60,7 @@ export async function openEcsv(path: string): Promise<TableSource> {
     if (c.ucd !== undefined) info.ucd = c.ucd;
     return info;
   });
-  return delimitedSource(path, 'ecsv', columns, nRows, header.meta, header.delimiter, 1);
+  return delimitedSource(path, 'ecsv', columns, nRows, header.meta, { delimiter: header.delimiter, label: path }, 1);
 }
 
 /** Reads the leading `#` lines (the ECSV header block) without reading the rest of the file. */

@@ -61,8 +61,8 @@ export async function openParquet(path: string): Promise<TableSource> {
       const kv = await query(con, `SELECT key, value FROM parquet_kv_metadata(${sqlString(path)})`, path);
       const columns: ColumnInfo[] = names.map((name, i) => ({ name, kind: kinds[i]! }));
       const meta = kvMeta(kv.getRows() as unknown[][], columns);
-      const select = names.map((n, i) => selectExpr(n, kinds[i]!, typeIds[i]!)).join(', ');
-      return parquetSource(path, inst, columns, nRows, meta, `SELECT ${select} FROM ${src}`);
+      const sql = () => `SELECT ${names.map((n, i) => selectExpr(n, columns[i]!.kind, typeIds[i]!)).join(', ')} FROM ${src}`;
+      return parquetSource(path, inst, columns, nRows, meta, sql);
     } finally {
       con.closeSync();
     }
@@ -72,16 +72,19 @@ export async function openParquet(path: string): Promise<TableSource> {
   }
 }
 
-function parquetSource(path: string, inst: DuckDBInstance, columns: ColumnInfo[], nRows: number, meta: Record<string, unknown>, sql: string): TableSource {
+function parquetSource(path: string, inst: DuckDBInstance, columns: ColumnInfo[], nRows: number, meta: Record<string, unknown>, sql: () => string): TableSource {
   let closed = false;
   return {
     path, format: 'parquet', columns, nRows, meta,
+    keepAsText(index: number) {
+      columns[index]!.kind = 'string';
+    },
     async *chunks(chunkRows?: number): AsyncGenerator<TableChunk> {
       if (closed) throw new Error(`${path}: chunks() called after close()`);
       const builder = new ChunkBuilder(columns.length, checkChunkRows(chunkRows));
       const con = await inst.connect();
       try {
-        const result = await con.stream(sql).catch((e: unknown) => { throw readError(path, e); });
+        const result = await con.stream(sql()).catch((e: unknown) => { throw readError(path, e); });
         for (;;) {
           const chunk = await result.fetchChunk().catch((e: unknown) => { throw readError(path, e); });
           if (chunk === null || chunk.rowCount === 0) break;
@@ -120,6 +123,9 @@ async function checkMagic(path: string): Promise<void> {
     const head = Buffer.alloc(4);
     const tail = Buffer.alloc(4);
     await fh.read(head, 0, 4, 0);
+    if (head[0] === 0x1f && head[1] === 0x8b) {
+      throw new CatalogError(`${path}: gzip-compressed Parquet is not read (Parquet compresses its own pages); decompress it first (gunzip)`);
+    }
     if (head.toString('latin1') !== 'PAR1') throw new CatalogError(`${path}: not a Parquet file: it does not begin with "PAR1"`);
     if (size >= 12) await fh.read(tail, 0, 4, size - 4);
     if (size < 12 || tail.toString('latin1') !== 'PAR1') {

@@ -88,9 +88,9 @@ const cases: Bad[] = [
     write: (p) => writeFileSync(p, fitsBinTable([{ name: 'x', tform: 'D', values: [0] }], { tableCards: [['TFIELDS', '1']] }).toString('latin1').replace('NAXIS1  =                    8', 'NAXIS1  =                   12')),
     message: (p) => `${p}: HDU 2: the columns' TFORMs add up to 8 bytes per row but NAXIS1 = 12`,
   },
-  { what: 'a gzip-compressed file', file: 'packed.fits.gz', write: (p) => writeFileSync(p, Buffer.from([0x1f, 0x8b, 8, 0, 0, 0, 0, 0])), message: (p) => `${p}: gzip-compressed FITS is not supported; decompress it first (gunzip)` },
+  { what: 'a truncated gzip-compressed file', file: 'packed.fits.gz', write: (p) => writeFileSync(p, Buffer.from([0x1f, 0x8b, 8, 0, 0, 0, 0, 0])), message: (p) => `${p}: corrupt gzip data (unexpected end of file)` },
   // VOTable
-  { what: 'a BINARY serialization', file: 'binary.vot', write: (p) => writeFileSync(p, vot(FIELDS_XY, '').replace('<TABLEDATA>\n\n</TABLEDATA>', '<BINARY><STREAM encoding="base64">AAAA</STREAM></BINARY>')), message: (p) => `${p}: VOTable serialization BINARY is not supported; re-save as TABLEDATA` },
+  { what: 'a BINARY serialization', file: 'binary.vot', write: (p) => writeFileSync(p, vot(FIELDS_XY, '').replace('<TABLEDATA>\n\n</TABLEDATA>', '<BINARY><STREAM encoding="base64">AAAA</STREAM></BINARY>')), message: (p) => `${p}: the BINARY stream ends inside row 1 (truncated or corrupt data)` },
   { what: 'a mismatched closing tag', file: 'nest.vot', write: (p) => writeFileSync(p, vot(FIELDS_XY, '<TR><TD>1</TD><TD>2</TD></TR>\n<TR><TD>1</TR>')), message: (p) => `${p}: line 9: closing tag </TR> does not match <TD>` },
   {
     what: 'a document cut after an element', file: 'cut.vot',

@@ -24,10 +24,17 @@ describe('the CSV reader', () => {
     expect(src.columns[1]!.kind).toBe('string');
   });
 
-  it('skips comment lines at the top and between rows but keeps # inside quoted fields', async () => {
-    const { src, columns } = await read('# produced by hand\n#  second note\na,b\n1,"x\n# not a comment"\n# between rows\n2,y\n#last');
+  it('skips the comment lines above the header and reads a # line after it as data', async () => {
+    const { src, columns } = await read('# produced by hand\n#  second note\nid,b\n1,"x\n# not a comment"\n#9,y\n#last,z');
     expect(src.meta).toEqual({ comments: ['produced by hand', 'second note'] });
-    expect(columns).toEqual([[1, 2], ['x\n# not a comment', 'y']]);
+    expect(columns).toEqual([['1', '#9', '#last'], ['x\n# not a comment', 'y', 'z']]);
+  });
+
+  it('skips lines starting with the configured comment prefix anywhere, and keeps other # lines as data', async () => {
+    const path = join(dir, 'prefix.csv');
+    writeFileSync(path, '% note\nid,b\n1,x\n% between rows\n#2,y\n');
+    const src = await openTable(path, { commentPrefix: '%' });
+    expect((await readAll(src)).columns).toEqual([['1', '#2'], ['x', 'y']]);
   });
 
   it('reads UTF-8 with a byte-order mark and CRLF line ends', async () => {
