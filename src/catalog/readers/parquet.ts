@@ -10,6 +10,9 @@ import { toPlain } from './ecsvHeader.ts';
 /** DuckDB settings for reading one file: bounded memory on a shared 2-core machine. */
 const DUCKDB_OPTIONS = { memory_limit: '1GB', threads: '2' };
 
+/** Decimal digits a double holds exactly: DECIMAL(p, s) with p up to this is read as a float. */
+const MAX_EXACT_DECIMAL_DIGITS = 15;
+
 const SMALL_INT = new Set([DuckDBTypeId.TINYINT, DuckDBTypeId.SMALLINT, DuckDBTypeId.INTEGER, DuckDBTypeId.UTINYINT, DuckDBTypeId.USMALLINT, DuckDBTypeId.UINTEGER]);
 const WIDE_INT = new Set([DuckDBTypeId.BIGINT, DuckDBTypeId.UBIGINT, DuckDBTypeId.HUGEINT, DuckDBTypeId.UHUGEINT]);
 const FLOAT = new Set([DuckDBTypeId.FLOAT, DuckDBTypeId.DOUBLE, DuckDBTypeId.DECIMAL]);
@@ -24,7 +27,9 @@ const AS_TEXT = new Set([
  *
  * Kinds: BOOLEAN → bool; 8–32-bit integers → int; 64/128-bit integers → int when every value is
  * within ±(2^53 − 1) (checked with one min/max query), else `string` with exact digits;
- * FLOAT/DOUBLE/DECIMAL → float (NaN stays NaN: Parquet has real nulls); VARCHAR, ENUM, UUID and
+ * FLOAT/DOUBLE → float (NaN stays NaN: Parquet has real nulls); DECIMAL(p, s) → float for
+ * p ≤ 15 (exact once rounded back to s places), else `string` with its exact digits (`12.3400`);
+ * `fileType` keeps DuckDB's name of each column's type (`DECIMAL(18,4)`, `BIGINT`); VARCHAR, ENUM, UUID and
  * dates/times → string (ISO text). Nested types (LIST, STRUCT, MAP, ARRAY), BLOB, INTERVAL and
  * others raise a CatalogError naming the column. `meta` holds the file's key-value metadata as
  * strings (except the binary `ARROW:schema`); an Astropy `table_meta_yaml` entry is parsed for
@@ -42,8 +47,11 @@ export async function openParquet(path: string): Promise<TableSource> {
       const schema = await query(con, `SELECT * FROM ${src} LIMIT 0`, path);
       const names = settleColumnNames(schema.columnNames(), path);
       const typeIds = schema.columnTypes().map((t) => t.typeId);
+      const types = schema.columnTypes();
       const kinds: ColumnKind[] = typeIds.map((id, i) => {
         if (id === DuckDBTypeId.BOOLEAN) return 'bool';
+        // A DECIMAL wider than a double's 15 exact digits is read as its exact decimal text.
+        if (id === DuckDBTypeId.DECIMAL && (types[i] as { width?: number }).width! > MAX_EXACT_DECIMAL_DIGITS) return 'string';
         if (SMALL_INT.has(id) || WIDE_INT.has(id)) return 'int';
         if (FLOAT.has(id)) return 'float';
         if (AS_TEXT.has(id)) return 'string';
@@ -59,7 +67,7 @@ export async function openParquet(path: string): Promise<TableSource> {
       const countRes = await query(con, `SELECT num_rows FROM parquet_file_metadata(${sqlString(path)})`, path);
       const nRows = Number(countRes.value(0, 0) ?? 0);
       const kv = await query(con, `SELECT key, value FROM parquet_kv_metadata(${sqlString(path)})`, path);
-      const columns: ColumnInfo[] = names.map((name, i) => ({ name, kind: kinds[i]! }));
+      const columns: ColumnInfo[] = names.map((name, i) => ({ name, kind: kinds[i]!, fileType: types[i]!.toString() }));
       const meta = kvMeta(kv.getRows() as unknown[][], columns);
       const sql = () => `SELECT ${names.map((n, i) => selectExpr(n, columns[i]!.kind, typeIds[i]!)).join(', ')} FROM ${src}`;
       return parquetSource(path, inst, columns, nRows, meta, sql);

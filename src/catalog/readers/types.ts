@@ -18,6 +18,12 @@ export interface ColumnInfo {
   description?: string;
   /** IVOA Unified Content Descriptor, where the format carries one. */
   ucd?: string;
+  /**
+   * The column's type as the file declares it, where the kind alone loses it (Parquet:
+   * `BIGINT`, `DECIMAL(18,4)`, `INTEGER`, ...; ECSV: `int64`, `float32`, ...), so a writer can
+   * give a passed-through column back its own type.
+   */
+  fileType?: string;
 }
 
 /**

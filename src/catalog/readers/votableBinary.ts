@@ -140,7 +140,9 @@ function decodeCell(l: Layout, buf: Buffer, p: number, count: number): Cell {
       const c = buf[p];
       return c === 84 || c === 116 || c === 49 ? true : c === 70 || c === 102 || c === 48 ? false : null;
     }
-    case 'bit': return (buf[p]! & 0x80) !== 0;
+    // The standard puts a scalar bit in the most significant bit (0x80); astropy 5.2.1 writes and
+    // reads it as 0x08 (converters.py, Bit.binparse). The other bits are padding, so any set bit is true.
+    case 'bit': return buf[p]! !== 0;
     case 'unsignedByte': return intOrNull(buf[p]!, l);
     case 'short': return intOrNull(buf.readInt16BE(p), l);
     case 'int': return intOrNull(buf.readInt32BE(p), l);
