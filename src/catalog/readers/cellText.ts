@@ -48,9 +48,12 @@ export function cellAsText(cell: Cell): Cell {
   return cell === null || typeof cell === 'string' ? cell : String(cell);
 }
 
-const LEADING_ZERO_RE = /^[+-]?0\d/;
-
 /** True for number text with a leading zero before another digit (`007`, `-00.5`): its spelling carries meaning a number would lose. */
 export function hasLeadingZero(s: string): boolean {
-  return LEADING_ZERO_RE.test(s);
+  // Character tests rather than a regular expression: this runs on every cell of the first pass.
+  const c0 = s.charCodeAt(0);
+  const i = c0 === 43 || c0 === 45 ? 1 : 0;
+  if (s.charCodeAt(i) !== 48) return false;
+  const c = s.charCodeAt(i + 1);
+  return c >= 48 && c <= 57;
 }
