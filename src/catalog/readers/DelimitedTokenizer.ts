@@ -1,5 +1,5 @@
 import { CatalogError } from './CatalogError.ts';
-import { MAX_COLUMNS, MAX_COMMENT_CHARS, MAX_FIELD_CHARS } from './limits.ts';
+import { MAX_COLUMNS, MAX_COMMENT_CHARS, MAX_FIELD_CHARS, MAX_RECORD_CHARS } from './limits.ts';
 
 /** Options of {@link DelimitedTokenizer}. */
 export interface DelimitedOptions {
@@ -34,8 +34,8 @@ const S = { RecordStart: 0, FieldStart: 1, Unquoted: 2, Quoted: 3, QuoteInQuoted
  * - Lines beginning with `#` before the first record are comments; after it, a line beginning
  *   with `#` is data (an id such as `#9`), unless `commentPrefix` is `#`. Lines beginning with
  *   `commentPrefix` are comments everywhere. Blank lines are skipped.
- * - Bounds: a field longer than MAX_FIELD_CHARS characters or a record of more than MAX_COLUMNS
- *   fields is a CatalogError naming the line; comment text is kept up to MAX_COMMENT_CHARS.
+ * - Bounds: a field longer than MAX_FIELD_CHARS characters, a record of more than MAX_COLUMNS
+ *   fields or of more than MAX_RECORD_CHARS characters is a CatalogError naming the line; comment text is kept up to MAX_COMMENT_CHARS.
  * - CRLF, LF and lone CR all end a record. Unquoted fields are trimmed of surrounding blanks.
  * - With delimiter `' '`, runs of spaces/tabs separate fields and leading/trailing blanks are ignored.
  *
@@ -58,6 +58,7 @@ export class DelimitedTokenizer {
 
   private commentText = '';
   private records = 0;
+  private recordChars = 0;
   private readonly commentCode: number;
 
   private readonly opts: DelimitedOptions;
@@ -215,6 +216,10 @@ export class DelimitedTokenizer {
     if (this.fields.length >= MAX_COLUMNS) {
       throw new CatalogError(`${this.opts.label}: line ${this.recordLine}: more than ${MAX_COLUMNS} fields in one record (the limit for columns)`);
     }
+    this.recordChars += this.field.length;
+    if (this.recordChars > MAX_RECORD_CHARS) {
+      throw new CatalogError(`${this.opts.label}: line ${this.recordLine}: a record longer than ${MAX_RECORD_CHARS} characters (the limit for one row)`);
+    }
     this.fields.push(this.fieldQuoted ? this.field : this.field.trim());
     this.field = '';
     this.fieldQuoted = false;
@@ -225,6 +230,7 @@ export class DelimitedTokenizer {
     const f = this.fields;
     const quoted = this.recordQuoted;
     this.fields = [];
+    this.recordChars = 0;
     this.recordQuoted = false;
     this.state = S.RecordStart;
     if (f.length === 0 || (f.length === 1 && f[0] === '' && !quoted)) return; // blank line

@@ -10,6 +10,9 @@ export const MAX_COLUMNS = 10_000;
 /** Longest cell, in characters, of a text format (CSV, TSV, ECSV, VOTable TD) or a VOTable BINARY string. */
 export const MAX_FIELD_CHARS = 4 << 20;
 
+/** Most characters in one row of a text format (all its cells together). */
+export const MAX_RECORD_CHARS = 32 << 20;
+
 /** Longest piece of XML markup (one tag, comment or declaration) or pending text. */
 export const MAX_XML_PENDING_CHARS = 8 << 20;
 

@@ -7,7 +7,7 @@ import { XmlTokenizer, type XmlHandler } from './XmlTokenizer.ts';
 import { votColumnInfo, votKind, votParser, votTextParser, type VotField, type VotParser } from './votableFields.ts';
 import { VotBinaryDecoder } from './votableBinary.ts';
 import { cellAsText } from './cellText.ts';
-import { MAX_COLUMNS, MAX_FIELD_CHARS } from './limits.ts';
+import { MAX_COLUMNS, MAX_FIELD_CHARS, MAX_RECORD_CHARS } from './limits.ts';
 import type { Cell } from './types.ts';
 
 /**
@@ -89,6 +89,7 @@ class VotHandler implements XmlHandler {
   private collect: TextTarget = null;
   private buf = '';
   private cells: string[] = [];
+  private rowChars = 0;
   private scanParsers: VotParser[] = [];
   private binary: 'BINARY' | 'BINARY2' | null = null;
   private decoder: VotBinaryDecoder | null = null;
@@ -105,7 +106,7 @@ class VotHandler implements XmlHandler {
     const parent = this.path[this.path.length - 1];
     this.path.push(name);
     if (this.inTableData) {
-      if (name === 'TR') this.cells = [];
+      if (name === 'TR') { this.cells = []; this.rowChars = 0; }
       else if (name === 'TD') {
         if (this.cells.length >= MAX_COLUMNS) throw this.tok.error(`a row with more than ${MAX_COLUMNS} TD cells`);
         this.collect = 'td';
@@ -199,7 +200,12 @@ class VotHandler implements XmlHandler {
     }
     if (name === 'BINARY' || name === 'BINARY2') this.binary = null;
     if (this.inTableData) {
-      if (name === 'TD' && this.collect === 'td') { this.cells.push(this.buf); this.collect = null; }
+      if (name === 'TD' && this.collect === 'td') {
+        this.rowChars += this.buf.length;
+        if (this.rowChars > MAX_RECORD_CHARS) throw this.tok.error(`a row longer than ${MAX_RECORD_CHARS} characters (the limit for one row)`);
+        this.cells.push(this.buf);
+        this.collect = null;
+      }
       else if (name === 'TR') this.row();
       else if (name === 'TABLEDATA') this.inTableData = false;
       return;

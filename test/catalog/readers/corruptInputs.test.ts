@@ -99,6 +99,11 @@ const cases: Bad[] = [
     message: (p) => `${p}: line 3: a field longer than 4194304 characters (the limit for one cell; is a quote left open?)`,
   },
   {
+    what: 'a row of 40 MB in 4 MB fields', file: 'longrow.csv',
+    write: (p) => writeFileSync(p, `${Array.from({ length: 10 }, (_, i) => `c${i}`).join(',')}\n${Array.from({ length: 10 }, () => 'x'.repeat(4 << 20)).join(',')}\n`),
+    message: (p) => `${p}: line 2: a record longer than 33554432 characters (the limit for one row)`,
+  },
+  {
     what: 'a header of 10001 columns', file: 'manycols.csv',
     write: (p) => writeFileSync(p, `${Array.from({ length: 10001 }, (_, i) => `c${i}`).join(',')}
 `),
