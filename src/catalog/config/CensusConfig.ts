@@ -17,8 +17,12 @@ export interface CensusConfig {
   description?: string;
   licence?: string;
   citation?: string;
-  /** The catalog file: absolute path, and its format when the extension does not say. */
-  input?: { path: string; format?: TableFormat };
+  /**
+   * The catalog file: absolute path, its format when the extension does not say, and for CSV/TSV
+   * a one-character comment prefix valid on every line (without it only `#` lines above the
+   * header are comments).
+   */
+  input?: { path: string; format?: TableFormat; comment?: string };
   /** Canonical column name → where and in which unit it is in the file. */
   columns: Record<string, ColumnMapping>;
   /** Every choice of the derivation. */

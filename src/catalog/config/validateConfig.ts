@@ -99,12 +99,17 @@ export function validateConfig(doc: unknown, label: string, baseDir: string): Ce
     if (typeof input === 'string') input = { path: input };
     if (!isObj(input)) fail(`input must be a mapping with path and format, got ${describeValue(input)}`);
     const i = input as Obj;
-    checkKeys(i, ['path', 'format'], 'input.');
+    checkKeys(i, ['path', 'format', 'comment'], 'input.');
     const p = str('input.path', i.path, 'the catalog file name (relative to the config file)');
     if (p.trim() === '') fail('input.path is empty');
     cfg.input = { path: path(p) };
     if (i.format !== undefined && i.format !== null) {
       cfg.input.format = oneOf<TableFormat>('input.format', i.format, INPUT_FORMATS, 'format');
+    }
+    if (i.comment !== undefined && i.comment !== null) {
+      const c = str('input.comment', i.comment, 'one character that starts a comment line, e.g. "%"');
+      if ([...c].length !== 1 || c.length !== 1 || /[\s",]/.test(c)) fail(`input.comment must be one character other than a blank, quote or comma, got ${JSON.stringify(c)}`);
+      cfg.input.comment = c;
     }
   }
 

@@ -138,7 +138,8 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
   let report: RejectionReport | null = null;
   let deriver: BatchDeriver | null = null;
   try {
-    const src = await openTable(opts.catalogPath, opts.format ? { format: opts.format } : {});
+    const comment = opts.config.input?.comment;
+    const src = await openTable(opts.catalogPath, { ...(opts.format ? { format: opts.format } : {}), ...(comment ? { commentPrefix: comment } : {}) });
     source = src;
     const plan = planColumns(src, opts.config);
     const provenance = settingsProvenance(settings);

@@ -7,13 +7,17 @@ import type { TableSource } from '../readers/types.ts';
 import { CANONICAL_COLUMNS, type CanonicalColumn } from './canonicalColumns.ts';
 import type { ColumnPlan, PassthroughColumn, PlannedColumn } from './ColumnPlan.ts';
 import { errorScale } from './errorScale.ts';
+import { fileUnitSpelling } from './fileUnitSpelling.ts';
 
 /**
  * Decides how every column of `source` is read: which file column holds each canonical input
  * (the config's `columns.<name>.source`, else the canonical name matched exactly, then
  * case-insensitively), its unit (the config's `columns.<name>.unit`, else the file's metadata;
  * an error column without either takes its value's unit; none means the canonical unit) and
- * the converter to canonical units. Every other file column is passed through.
+ * the converter to canonical units. Every other file column is passed through. The id column
+ * is read as text exactly as written (`source.keepAsText`): `007`, `1e3` and `3.0` stay so.
+ * A file unit's power-of-ten factor is read in the CDS and FITS spellings astropy writes
+ * (`10-20erg.s-1.cm-2`, `10**-20 cm-2 erg s-1`; see {@link fileUnitSpelling}).
  *
  * Throws CatalogError (one line) when there is no id or no z column, a column named in the
  * config is not in the file (listing close matches), two file columns match one canonical name
@@ -78,7 +82,7 @@ export function planColumns(source: TableSource, config: CensusConfig): ColumnPl
     if (def.kind === 'text' || def.kind === 'bool') unitIn = undefined;
     unitOf.set(def.name, unitIn);
     checkKind(def, info.kind, info.name, fail);
-    const conv = converterFor(unitIn, def.kind, def.name);
+    const conv = converterFor(unitIn !== undefined && cfgUnit === undefined ? fileUnitSpelling(unitIn) : unitIn, def.kind, def.name);
     if ('problem' in conv) {
       if (cfgUnit !== undefined) throw new CatalogError(`${cfgLabel}: columns.${def.name}.unit: ${conv.problem}`);
       return fail(`column "${info.name}" (${def.name}): ${conv.problem}`);
@@ -104,6 +108,8 @@ export function planColumns(source: TableSource, config: CensusConfig): ColumnPl
       label: sameName ? def.name : `${def.name} (column ${info.name})`,
     });
   }
+
+  source.keepAsText(found.get('id')!);
 
   const passthrough: PassthroughColumn[] = [];
   source.columns.forEach((info, i) => {

@@ -20,9 +20,14 @@ export function cellResult(): CellResult {
 }
 
 /**
- * Reads a numeric cell into `out`: null or blank text is empty; numbers and decimal text
- * (`12`, ` -3.5e4 `) are numbers; NaN, ±Infinity and their spellings (`nan`, `inf`, `-Infinity`)
- * are not finite; anything else (including hex such as `0x1F`) is not a number.
+ * Reads a numeric cell into `out`: null, blank text, NaN and its spellings (`nan`, `NaN`) are
+ * empty, i.e. missing; numbers and decimal text (`12`, ` -3.5e4 `) are numbers; ±Infinity and
+ * its spellings (`inf`, `-Infinity`) are not finite; anything else (including hex such as
+ * `0x1F`) is not a number.
+ *
+ * NaN is missing because every format writes missing values its own way and astropy turns a
+ * masked float into NaN when a format has no mask (FITS, VOTable BINARY) but into an empty cell
+ * or `nan` text in CSV and ECSV: one catalog must mean the same thing in each.
  */
 export function readNumber(cell: Cell, out: CellResult): void {
   if (cell === null) {
@@ -31,7 +36,7 @@ export function readNumber(cell: Cell, out: CellResult): void {
   }
   if (typeof cell === 'number') {
     out.num = cell;
-    out.status = Number.isFinite(cell) ? CELL_OK : CELL_NOT_FINITE;
+    out.status = Number.isFinite(cell) ? CELL_OK : Number.isNaN(cell) ? CELL_EMPTY : CELL_NOT_FINITE;
     return;
   }
   if (typeof cell !== 'string') {
@@ -55,14 +60,16 @@ export function readNumber(cell: Cell, out: CellResult): void {
     out.status = CELL_NOT_FINITE;
     return;
   }
-  out.status = isNonFiniteWord(t) ? CELL_NOT_FINITE : CELL_NOT_A_NUMBER;
+  out.status = nonFiniteWordStatus(t);
 }
 
-function isNonFiniteWord(t: string): boolean {
-  if (t.length > 9) return false;
+/** CELL_EMPTY for a NaN spelling, CELL_NOT_FINITE for an infinity spelling, else CELL_NOT_A_NUMBER. */
+function nonFiniteWordStatus(t: string): number {
+  if (t.length > 9) return CELL_NOT_A_NUMBER;
   const s = t.toLowerCase();
   const u = s.charCodeAt(0) === 43 || s.charCodeAt(0) === 45 ? s.slice(1) : s;
-  return u === 'nan' || u === 'inf' || u === 'infinity';
+  if (u === 'nan') return CELL_EMPTY;
+  return u === 'inf' || u === 'infinity' ? CELL_NOT_FINITE : CELL_NOT_A_NUMBER;
 }
 
 /**

@@ -1,4 +1,5 @@
 import { CatalogError } from './CatalogError.ts';
+import { MAX_COLUMNS, MAX_COMMENT_CHARS, MAX_FIELD_CHARS, MAX_RECORD_CHARS } from './limits.ts';
 
 /** Options of {@link DelimitedTokenizer}. */
 export interface DelimitedOptions {
@@ -6,6 +7,11 @@ export interface DelimitedOptions {
   delimiter: string;
   /** File name for error messages. */
   label: string;
+  /**
+   * One character that starts a comment line anywhere in the file (the config's
+   * `input.comment`). Without it only the `#` lines before the first record are comments.
+   */
+  commentPrefix?: string;
 }
 
 /** Receives each record: its fields and the 1-based line on which it starts. */
@@ -25,7 +31,11 @@ const S = { RecordStart: 0, FieldStart: 1, Unquoted: 2, Quoted: 3, QuoteInQuoted
  * - Quoted fields may hold delimiters, `""` (a literal quote) and line breaks; a quote in the
  *   middle of an unquoted field is kept literally; text right after a closing quote is appended
  *   (`"ab"c` reads as `abc`, as Python's csv module does).
- * - Lines beginning with `#` (outside quotes) are comments; blank lines are skipped.
+ * - Lines beginning with `#` before the first record are comments; after it, a line beginning
+ *   with `#` is data (an id such as `#9`), unless `commentPrefix` is `#`. Lines beginning with
+ *   `commentPrefix` are comments everywhere. Blank lines are skipped.
+ * - Bounds: a field longer than MAX_FIELD_CHARS characters, a record of more than MAX_COLUMNS
+ *   fields or of more than MAX_RECORD_CHARS characters is a CatalogError naming the line; comment text is kept up to MAX_COMMENT_CHARS.
  * - CRLF, LF and lone CR all end a record. Unquoted fields are trimmed of surrounding blanks.
  * - With delimiter `' '`, runs of spaces/tabs separate fields and leading/trailing blanks are ignored.
  *
@@ -47,6 +57,9 @@ export class DelimitedTokenizer {
   private quotedCR = false;
 
   private commentText = '';
+  private records = 0;
+  private recordChars = 0;
+  private readonly commentCode: number;
 
   private readonly opts: DelimitedOptions;
   private readonly sink: RecordSink;
@@ -59,6 +72,9 @@ export class DelimitedTokenizer {
     if (opts.delimiter.length !== 1) throw new Error(`delimiter must be one character, got "${opts.delimiter}"`);
     this.delim = opts.delimiter.charCodeAt(0);
     this.blankDelimited = opts.delimiter === ' ';
+    const prefix = opts.commentPrefix;
+    if (prefix !== undefined && prefix.length !== 1) throw new Error(`commentPrefix must be one character, got "${prefix}"`);
+    this.commentCode = prefix === undefined ? -1 : prefix.charCodeAt(0);
   }
 
   /** Feeds the next piece of text. */
@@ -75,7 +91,7 @@ export class DelimitedTokenizer {
       const c = text.charCodeAt(i);
       switch (this.state) {
         case S.RecordStart:
-          if (c === HASH) { this.state = S.Comment; i++; continue; }
+          if (c === this.commentCode || (c === HASH && this.records === 0)) { this.state = S.Comment; i++; continue; }
           this.recordLine = this.line;
           this.state = S.FieldStart;
           continue;
@@ -104,7 +120,10 @@ export class DelimitedTokenizer {
             if (d === delim || d === LF || d === CR || (blank && d === TAB)) break;
             j++;
           }
-          if (j > i) this.field += text.slice(i, j);
+          if (j > i) {
+            this.field += text.slice(i, j);
+            if (this.field.length > MAX_FIELD_CHARS) this.tooLong(this.recordLine);
+          }
           i = j < n ? this.terminate(text, j) : j;
           continue;
         }
@@ -115,6 +134,7 @@ export class DelimitedTokenizer {
             const piece = text.slice(i, end);
             this.field += piece;
             this.countQuotedLines(piece);
+            if (this.field.length > MAX_FIELD_CHARS) this.tooLong(this.quoteLine);
           }
           i = end;
           if (q !== -1) { this.state = S.QuoteInQuoted; this.quotedCR = false; i++; }
@@ -136,7 +156,9 @@ export class DelimitedTokenizer {
             if (d === LF || d === CR) break;
             j++;
           }
-          if (this.commentSink) this.commentText += text.slice(i, j);
+          if (this.commentSink && this.commentText.length < MAX_COMMENT_CHARS) {
+            this.commentText += text.slice(i, Math.min(j, i + MAX_COMMENT_CHARS - this.commentText.length));
+          }
           i = j;
           if (i < n) { this.emitComment(); i = this.lineBreak(text, i); }
           continue;
@@ -186,7 +208,18 @@ export class DelimitedTokenizer {
     this.commentText = '';
   }
 
+  private tooLong(line: number): never {
+    throw new CatalogError(`${this.opts.label}: line ${line}: a field longer than ${MAX_FIELD_CHARS} characters (the limit for one cell; is a quote left open?)`);
+  }
+
   private finishField(): void {
+    if (this.fields.length >= MAX_COLUMNS) {
+      throw new CatalogError(`${this.opts.label}: line ${this.recordLine}: more than ${MAX_COLUMNS} fields in one record (the limit for columns)`);
+    }
+    this.recordChars += this.field.length;
+    if (this.recordChars > MAX_RECORD_CHARS) {
+      throw new CatalogError(`${this.opts.label}: line ${this.recordLine}: a record longer than ${MAX_RECORD_CHARS} characters (the limit for one row)`);
+    }
     this.fields.push(this.fieldQuoted ? this.field : this.field.trim());
     this.field = '';
     this.fieldQuoted = false;
@@ -197,9 +230,11 @@ export class DelimitedTokenizer {
     const f = this.fields;
     const quoted = this.recordQuoted;
     this.fields = [];
+    this.recordChars = 0;
     this.recordQuoted = false;
     this.state = S.RecordStart;
     if (f.length === 0 || (f.length === 1 && f[0] === '' && !quoted)) return; // blank line
+    this.records++;
     this.sink(f, this.recordLine);
   }
 

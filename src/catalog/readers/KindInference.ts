@@ -1,5 +1,5 @@
 import type { ColumnKind } from './types.ts';
-import { isBoolText, isIntegerText, isNumberText } from './cellText.ts';
+import { hasLeadingZero, isBoolText, isIntegerText, isNumberText } from './cellText.ts';
 
 /**
  * Infers the kind of one text column from every one of its cells (the full first pass of the
@@ -9,6 +9,8 @@ import { isBoolText, isIntegerText, isNumberText } from './cellText.ts';
  * all `true`/`false` → `bool`; otherwise `string`. Two deliberate choices:
  * - an all-integer column holding a value beyond ±(2^53 − 1) becomes `string`, so that 64-bit
  *   identifiers are never silently rounded;
+ * - a numeric column holding a value with a leading zero (`007`, `0042`) becomes `string`, so
+ *   that codes and field names written with leading zeros keep them;
  * - a column with no non-empty cell at all becomes `float` (a missing measurement is the common
  *   case in a catalog; every cell is null anyway).
  */
@@ -18,10 +20,12 @@ export class KindInference {
   private allNumber = true;
   private allBool = true;
   private unsafeInt = false;
+  private leadingZero = false;
 
   /** Records one non-empty cell. */
   add(s: string): void {
     this.anyValue = true;
+    if (!this.leadingZero && s.length > 1 && hasLeadingZero(s)) this.leadingZero = true;
     if (this.allInt) {
       if (isIntegerText(s)) {
         if (!this.unsafeInt && s.length > 15 && !Number.isSafeInteger(Number(s))) this.unsafeInt = true;
@@ -40,6 +44,7 @@ export class KindInference {
   /** The inferred kind, once every cell has been added. */
   get kind(): ColumnKind {
     if (!this.anyValue) return 'float';
+    if (this.leadingZero && this.allNumber) return 'string';
     if (this.allInt) return this.unsafeInt ? 'string' : 'int';
     if (this.allNumber) return 'float';
     return this.allBool ? 'bool' : 'string';

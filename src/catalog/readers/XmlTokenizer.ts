@@ -1,4 +1,5 @@
 import { CatalogError } from './CatalogError.ts';
+import { MAX_XML_PENDING_CHARS } from './limits.ts';
 
 /** Receives the events of {@link XmlTokenizer}. Element names have any namespace prefix removed. */
 export interface XmlHandler {
@@ -61,6 +62,9 @@ export class XmlTokenizer {
     }
     this.buf += chunk;
     this.run(false);
+    if (this.buf.length - this.pos > MAX_XML_PENDING_CHARS) {
+      throw this.error(`markup longer than ${MAX_XML_PENDING_CHARS} characters without its end (is a tag, comment or quote left open?)`);
+    }
   }
 
   /** Signals the end of the document; throws if anything is left open. */
@@ -80,8 +84,11 @@ export class XmlTokenizer {
     while (this.pos < n) {
       const lt = buf.indexOf('<', this.pos);
       if (lt === -1) {
-        // Hold back trailing text until the next piece: an entity may be split.
-        if (atEnd) { this.emitText(buf.slice(this.pos)); this.pos = n; }
+        // Hold back only a trailing entity reference that may be split: long text (a BINARY
+        // stream) flows through in pieces instead of piling up until its end tag.
+        const amp = atEnd ? -1 : buf.lastIndexOf('&');
+        const cut = amp >= this.pos && buf.indexOf(';', amp) === -1 ? amp : n;
+        if (cut > this.pos) { this.emitText(buf.slice(this.pos, cut)); this.pos = cut; }
         return;
       }
       if (lt > this.pos) {

@@ -1,6 +1,7 @@
 /**
  * Recognising and converting the text of one cell (CSV, TSV, ECSV and VOTable share these rules).
  */
+import type { Cell } from './types.ts';
 
 const INT_RE = /^[+-]?\d+$/;
 const FLOAT_RE = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
@@ -40,4 +41,19 @@ export function parseBoolText(s: string): boolean | null {
   if (TRUE_RE.test(s)) return true;
   if (FALSE_RE.test(s)) return false;
   return null;
+}
+
+/** A cell as text: numbers in JavaScript's shortest round-trip form, booleans as `true`/`false`. */
+export function cellAsText(cell: Cell): Cell {
+  return cell === null || typeof cell === 'string' ? cell : String(cell);
+}
+
+/** True for number text with a leading zero before another digit (`007`, `-00.5`): its spelling carries meaning a number would lose. */
+export function hasLeadingZero(s: string): boolean {
+  // Character tests rather than a regular expression: this runs on every cell of the first pass.
+  const c0 = s.charCodeAt(0);
+  const i = c0 === 43 || c0 === 45 ? 1 : 0;
+  if (s.charCodeAt(i) !== 48) return false;
+  const c = s.charCodeAt(i + 1);
+  return c >= 48 && c <= 57;
 }

@@ -4,11 +4,9 @@ import { ChunkBuilder, checkChunkRows } from './ChunkBuilder.ts';
 import { DelimitedTokenizer } from './DelimitedTokenizer.ts';
 import { KindInference } from './KindInference.ts';
 import { parseBoolText, parseNumberText } from './cellText.ts';
+import { MAX_META_COMMENTS } from './limits.ts';
 import { settleColumnNames } from './columnNames.ts';
 import { readTextChunks } from './textChunks.ts';
-
-/** Most comment lines above the header kept in `meta.comments`. */
-const MAX_META_COMMENTS = 1000;
 
 /**
  * Opens a CSV (`,`) or TSV (tab) file with a header line.
@@ -16,19 +14,23 @@ const MAX_META_COMMENTS = 1000;
  * Opening makes one full pass that checks the structure (UTF-8, quoting, field counts), counts
  * the rows and infers each column's kind (see {@link KindInference}); `chunks()` then converts
  * cells to that kind. Empty cells (also `""`) are null. Comment lines (`#`) above the header are
- * kept in `meta.comments`. Memory stays bounded by one read buffer plus one chunk.
+ * kept in `meta.comments`; a `#` line after the header is data, unless `commentPrefix` (one
+ * character, the config's `input.comment`) makes every line starting with it a comment. Memory
+ * stays bounded by one read buffer plus one chunk. A gzip-compressed file is read as well.
  *
  * @param path - file to read
  * @param format - `'csv'` or `'tsv'` (picks the delimiter)
+ * @param commentPrefix - optional one-character comment prefix valid on every line
  */
-export async function openCsv(path: string, format: 'csv' | 'tsv'): Promise<TableSource> {
+export async function openCsv(path: string, format: 'csv' | 'tsv', commentPrefix?: string): Promise<TableSource> {
   const delimiter = format === 'tsv' ? '\t' : ',';
+  const tokOpts = { delimiter, label: path, ...(commentPrefix !== undefined ? { commentPrefix } : {}) };
   let names: string[] | null = null as string[] | null;
   let inference: KindInference[] = [];
   let nRows = 0;
   const comments: string[] = [];
   const tok = new DelimitedTokenizer(
-    { delimiter, label: path },
+    tokOpts,
     (fields, line) => {
       if (names === null) {
         names = settleColumnNames(fields, `${path}: line ${line}`);
@@ -53,7 +55,7 @@ export async function openCsv(path: string, format: 'csv' | 'tsv'): Promise<Tabl
   const header: string[] | null = names;
   if (header === null) throw new CatalogError(`${path}: empty file: no header line`);
   const columns: ColumnInfo[] = header.map((name, i) => ({ name, kind: inference[i]!.kind }));
-  return delimitedSource(path, format, columns, nRows, comments.length ? { comments } : {}, delimiter, 1);
+  return delimitedSource(path, format, columns, nRows, comments.length ? { comments } : {}, tokOpts, 1);
 }
 
 /**
@@ -67,18 +69,22 @@ export function delimitedSource(
   columns: ColumnInfo[],
   nRows: number,
   meta: Record<string, unknown>,
-  delimiter: string,
+  tokOpts: { delimiter: string; label: string; commentPrefix?: string },
   skipRecords: number,
 ): TableSource {
   const converters = columns.map((c) => converterFor(c.kind));
   let closed = false;
   return {
     path, format, columns, nRows, meta,
+    keepAsText(index: number) {
+      columns[index]!.kind = 'string';
+      converters[index] = converterFor('string');
+    },
     async *chunks(chunkRows?: number): AsyncGenerator<TableChunk> {
       if (closed) throw new Error(`${path}: chunks() called after close()`);
       const builder = new ChunkBuilder(columns.length, checkChunkRows(chunkRows));
       let skip = skipRecords;
-      const tok = new DelimitedTokenizer({ delimiter, label: path }, (fields) => {
+      const tok = new DelimitedTokenizer(tokOpts, (fields) => {
         if (skip > 0) { skip--; return; }
         const cols = builder.cols;
         for (let i = 0; i < converters.length; i++) cols[i]!.push(converters[i]!(fields[i] ?? ''));

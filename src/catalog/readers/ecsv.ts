@@ -54,13 +54,13 @@ export async function openEcsv(path: string): Promise<TableSource> {
   tok.end();
   if (!sawHeaderLine) throw new CatalogError(`${path}: ECSV file has no data header line after the YAML header`);
   const columns: ColumnInfo[] = header.columns.map((c, i) => {
-    const info: ColumnInfo = { name: names[i]!, kind: unsafeInt[i] ? 'string' : c.kind };
+    const info: ColumnInfo = { name: names[i]!, kind: unsafeInt[i] ? 'string' : c.kind, fileType: c.datatype };
     if (c.unit !== undefined) info.unit = c.unit;
     if (c.description !== undefined) info.description = c.description;
     if (c.ucd !== undefined) info.ucd = c.ucd;
     return info;
   });
-  return delimitedSource(path, 'ecsv', columns, nRows, header.meta, header.delimiter, 1);
+  return delimitedSource(path, 'ecsv', columns, nRows, header.meta, { delimiter: header.delimiter, label: path }, 1);
 }
 
 /** Reads the leading `#` lines (the ECSV header block) without reading the rest of the file. */

@@ -1,10 +1,13 @@
-import { open, type FileHandle } from 'node:fs/promises';
+import { open } from 'node:fs/promises';
 import type { TableChunk, TableSource } from './types.ts';
 import { CatalogError } from './CatalogError.ts';
 import { checkChunkRows } from './ChunkBuilder.ts';
+import { cellAsText } from './cellText.ts';
+import { ForwardReader, isGzipFile, readBytes } from './byteStream.ts';
 import { settleColumnNames } from './columnNames.ts';
 import { columnDecoder, describeFitsColumns, hasUnsafeInt64, type FitsColumn } from './fitsColumns.ts';
-import { dataByteLength, intKey, padToBlock, readFitsHeader, type FitsHeader } from './fitsHeader.ts';
+import { boundedIntKey, dataByteLength, padToBlock, readFitsHeader, type ByteSource, type FitsHeader } from './fitsHeader.ts';
+import { MAX_COLUMNS, MAX_FITS_HDUS, MAX_FITS_ROW_BYTES } from './limits.ts';
 
 /** Target bytes per disk read of table rows (whole rows, a multiple of the chunk size). */
 const READ_TARGET_BYTES = 4 << 20;
@@ -19,26 +22,29 @@ const STRUCTURAL = /^(SIMPLE|BITPIX|NAXIS\d*|EXTEND|XTENSION|PCOUNT|GCOUNT|TFIEL
  * memory. `meta` holds the non-structural keywords of the primary header overridden by those of
  * the table header (COMMENT/HISTORY as arrays of lines). Cells follow {@link columnDecoder}:
  * TNULL and NaN are null, TSCAL/TZERO applied. Opening scans K (64-bit) columns once: a column
- * holding values beyond ±(2^53 − 1) is read as `string` (exact digits). Gzip-compressed files are
- * refused with a message asking to decompress them.
+ * holding values beyond ±(2^53 − 1) is read as `string` (exact digits). A gzip-compressed file
+ * (`.fits.gz`) is decompressed while it is read: once at opening to learn its size, then once per
+ * `chunks()` call; it is never held whole in memory or written to disk.
+ *
+ * Bounds (each a one-line CatalogError): header size and HDU count (see limits.ts), structural
+ * keywords in range (see {@link dataByteLength}), BINTABLE rows of 1 to MAX_FITS_ROW_BYTES bytes,
+ * TFIELDS 1–999, and data no longer than the file holds.
  *
  * @param path - file to read
  */
 export async function openFits(path: string): Promise<TableSource> {
-  const fh = await open(path, 'r');
+  const gzip = await isGzipFile(path);
+  const fh = await openBytes(path, gzip);
   try {
-    const size = (await fh.stat()).size;
-    const magic = Buffer.alloc(2);
-    await fh.read(magic, 0, 2, 0);
-    if (magic[0] === 0x1f && magic[1] === 0x8b) {
-      throw new CatalogError(`${path}: gzip-compressed FITS is not supported; decompress it first (gunzip)`);
-    }
+    const size = gzip ? await decompressedSize(path) : fh.size;
     const { header, primary, dataStart, hdu } = await findBintable(fh, size, path);
     const where = `${path}: HDU ${hdu + 1}`;
-    const rowBytes = intKey(header, 'NAXIS1', where) ?? 0;
-    const nRows = intKey(header, 'NAXIS2', where) ?? 0;
-    const tfields = intKey(header, 'TFIELDS', where);
-    if (tfields === undefined) throw new CatalogError(`${where}: BINTABLE header has no TFIELDS keyword`);
+    dataByteLength(header, where); // checks BITPIX, NAXISn, PCOUNT, GCOUNT
+    const rowBytes = boundedIntKey(header, 'NAXIS1', where, 0, MAX_FITS_ROW_BYTES, 0);
+    const nRows = boundedIntKey(header, 'NAXIS2', where, 0, Number.MAX_SAFE_INTEGER, 0);
+    if (header.byKey.get('TFIELDS') === undefined) throw new CatalogError(`${where}: BINTABLE header has no TFIELDS keyword`);
+    const tfields = boundedIntKey(header, 'TFIELDS', where, 1, Math.min(999, MAX_COLUMNS), 0);
+    if (rowBytes === 0 && nRows > 0) throw new CatalogError(`${where}: NAXIS1 = 0: rows of zero bytes hold no values (NAXIS2 = ${nRows})`);
     const cols = describeFitsColumns(header, tfields, rowBytes, where);
     const names = settleColumnNames(cols.map((c) => c.info.name), where);
     cols.forEach((c, i) => { c.info.name = names[i]!; });
@@ -46,17 +52,35 @@ export async function openFits(path: string): Promise<TableSource> {
     const found = Math.max(0, size - dataStart);
     if (found < expected) throw new CatalogError(`${path}: truncated FITS data: expected ${expected} bytes, found ${found}`);
     await markUnsafeInt64(fh, cols, dataStart, rowBytes, nRows);
-    return fitsSource(path, cols, nRows, rowBytes, dataStart, fitsMeta(primary, header));
+    return fitsSource(path, gzip, cols, nRows, rowBytes, dataStart, fitsMeta(primary, header));
   } finally {
     await fh.close();
   }
 }
 
-async function findBintable(fh: FileHandle, size: number, file: string) {
+/** A positional byte reader over the file: a file handle, or a forward-only reader over the decompressed bytes. */
+async function openBytes(path: string, gzip: boolean): Promise<ByteSource & { size: number; close(): Promise<void> }> {
+  if (gzip) {
+    const r = new ForwardReader(readBytes(path, path));
+    return { size: 0, read: (b, o, l, p) => r.read(b, o, l, p), close: () => r.close() };
+  }
+  const fh = await open(path, 'r');
+  const size = (await fh.stat()).size;
+  return { size, read: (b, o, l, p) => fh.read(b, o, l, p), close: () => fh.close() };
+}
+
+async function decompressedSize(path: string): Promise<number> {
+  let n = 0;
+  for await (const b of readBytes(path, path)) n += b.length;
+  return n;
+}
+
+async function findBintable(fh: ByteSource, size: number, file: string) {
   const primary = await readFitsHeader(fh, 0, 0, file);
   if (primary === null) throw new CatalogError(`${file}: not a FITS file: it is empty`);
   let offset = primary.byteLength + padToBlock(dataByteLength(primary, `${file}: HDU 1`));
   for (let hdu = 1; offset < size; hdu++) {
+    if (hdu >= MAX_FITS_HDUS) throw new CatalogError(`${file}: no binary table among the first ${MAX_FITS_HDUS} HDUs`);
     const header = await readFitsHeader(fh, offset, hdu, file);
     if (header === null) break;
     const dataStart = offset + header.byteLength;
@@ -67,7 +91,7 @@ async function findBintable(fh: FileHandle, size: number, file: string) {
 }
 
 /** Gives kind `string` to K columns holding integers a double cannot represent exactly. */
-async function markUnsafeInt64(fh: FileHandle, cols: FitsColumn[], dataStart: number, rowBytes: number, nRows: number) {
+async function markUnsafeInt64(fh: ByteSource, cols: FitsColumn[], dataStart: number, rowBytes: number, nRows: number) {
   const wide = cols.filter((c) => c.code === 'K' && c.info.kind === 'int' && c.repeat === 1);
   if (wide.length === 0 || rowBytes === 0) return;
   const blockRows = Math.max(1, Math.floor(READ_TARGET_BYTES / rowBytes));
@@ -85,17 +109,22 @@ async function markUnsafeInt64(fh: FileHandle, cols: FitsColumn[], dataStart: nu
   }
 }
 
-function fitsSource(path: string, cols: FitsColumn[], nRows: number, rowBytes: number, dataStart: number, meta: Record<string, unknown>): TableSource {
+function fitsSource(path: string, gzip: boolean, cols: FitsColumn[], nRows: number, rowBytes: number, dataStart: number, meta: Record<string, unknown>): TableSource {
   const decoders = cols.map(columnDecoder);
   let closed = false;
   return {
     path, format: 'fits', columns: cols.map((c) => c.info), nRows, meta,
+    keepAsText(index: number) {
+      const d = decoders[index]!;
+      cols[index]!.info.kind = 'string';
+      decoders[index] = (b, v, s, n, w) => d(b, v, s, n, w).map(cellAsText);
+    },
     async *chunks(chunkRows?: number): AsyncGenerator<TableChunk> {
       if (closed) throw new Error(`${path}: chunks() called after close()`);
       const per = checkChunkRows(chunkRows);
       const chunksPerRead = Math.max(1, Math.floor(READ_TARGET_BYTES / Math.max(1, per * rowBytes)));
       const blockRows = per * chunksPerRead;
-      const fh = await open(path, 'r');
+      const fh = await openBytes(path, gzip);
       try {
         const buf = Buffer.alloc(Math.min(blockRows, nRows) * rowBytes);
         const view = new DataView(buf.buffer, buf.byteOffset, buf.byteLength);

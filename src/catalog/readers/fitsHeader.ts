@@ -1,5 +1,10 @@
-import type { FileHandle } from 'node:fs/promises';
 import { CatalogError } from './CatalogError.ts';
+import { MAX_FITS_HEADER_BLOCKS } from './limits.ts';
+
+/** Positional reads, as `FileHandle.read` does them (a gzip-compressed file reads forward only). */
+export interface ByteSource {
+  read(buffer: Buffer, offset: number, length: number, position: number): Promise<{ bytesRead: number }>;
+}
 
 /** FITS block size in bytes (FITS Standard 4.0, §3.1). */
 export const FITS_BLOCK = 2880;
@@ -22,12 +27,13 @@ export interface FitsHeader {
 }
 
 /**
- * Reads the header starting at `offset` block by block until the END card.
+ * Reads the header starting at `offset` block by block until the END card; a header longer
+ * than MAX_FITS_HEADER_BLOCKS blocks is a CatalogError.
  *
  * @param hdu - 0-based HDU index, for messages; HDU 0 must begin with `SIMPLE  =`
  * @returns the header, or null when `offset` is at the end of the file
  */
-export async function readFitsHeader(fh: FileHandle, offset: number, hdu: number, file: string): Promise<FitsHeader | null> {
+export async function readFitsHeader(fh: ByteSource, offset: number, hdu: number, file: string): Promise<FitsHeader | null> {
   const cards: FitsCard[] = [];
   const block = Buffer.alloc(FITS_BLOCK);
   let pos = offset;
@@ -41,6 +47,9 @@ export async function readFitsHeader(fh: FileHandle, offset: number, hdu: number
       throw new CatalogError(`${file}: HDU ${hdu + 1}: FITS header has no END card (the file ends inside the header)`);
     }
     pos += FITS_BLOCK;
+    if (pos - offset > MAX_FITS_HEADER_BLOCKS * FITS_BLOCK) {
+      throw new CatalogError(`${file}: HDU ${hdu + 1}: FITS header has no END card within ${MAX_FITS_HEADER_BLOCKS} blocks (${MAX_FITS_HEADER_BLOCKS * FITS_BLOCK} bytes)`);
+    }
     for (let c = 0; c < FITS_BLOCK; c += CARD) {
       const text = block.toString('latin1', c, c + CARD);
       if (text.startsWith('END') && text.slice(3).trim() === '') {
@@ -125,18 +134,33 @@ export function intKey(h: FitsHeader, key: string, where: string): number | unde
   return c.value;
 }
 
-/** Size in bytes of the HDU's data (FITS Standard 4.0, Eq. 1/2), before padding to 2880. */
+/** An integer keyword that must lie in [lo, hi] (default when absent). */
+export function boundedIntKey(h: FitsHeader, key: string, where: string, lo: number, hi: number, dflt: number): number {
+  const v = intKey(h, key, where) ?? dflt;
+  if (v < lo || v > hi) throw new CatalogError(`${where}: keyword ${key} = ${v} is out of range (${lo} to ${hi})`);
+  return v;
+}
+
+/**
+ * Size in bytes of the HDU's data (FITS Standard 4.0, Eq. 1/2), before padding to 2880. Each
+ * structural keyword is checked first (BITPIX one of 8, 16, 32, 64, −32, −64; NAXIS 0–999; each
+ * NAXISn, PCOUNT and GCOUNT ≥ 0), and a size beyond 2^53 bytes is refused, so that a corrupt
+ * header can neither move the reader backwards nor make it skip absurd distances.
+ */
 export function dataByteLength(h: FitsHeader, where: string): number {
   const bitpix = intKey(h, 'BITPIX', where) ?? 8;
-  const naxis = intKey(h, 'NAXIS', where) ?? 0;
+  if (![8, 16, 32, 64, -32, -64].includes(bitpix)) throw new CatalogError(`${where}: keyword BITPIX = ${bitpix} is not one of 8, 16, 32, 64, -32, -64`);
+  const naxis = boundedIntKey(h, 'NAXIS', where, 0, 999, 0);
   if (naxis === 0) return 0;
   let prod = 1;
   // Random groups (NAXIS1 = 0 in the primary HDU) leave NAXIS1 out of the product.
   const firstAxis = h.byKey.get('GROUPS')?.value === true && intKey(h, 'NAXIS1', where) === 0 ? 2 : 1;
-  for (let k = firstAxis; k <= naxis; k++) prod *= intKey(h, `NAXIS${k}`, where) ?? 0;
-  const pcount = intKey(h, 'PCOUNT', where) ?? 0;
-  const gcount = intKey(h, 'GCOUNT', where) ?? 1;
-  return (Math.abs(bitpix) / 8) * gcount * (pcount + prod);
+  for (let k = firstAxis; k <= naxis; k++) prod *= boundedIntKey(h, `NAXIS${k}`, where, 0, Number.MAX_SAFE_INTEGER, 0);
+  const pcount = boundedIntKey(h, 'PCOUNT', where, 0, Number.MAX_SAFE_INTEGER, 0);
+  const gcount = boundedIntKey(h, 'GCOUNT', where, 0, Number.MAX_SAFE_INTEGER, 1);
+  const bytes = (Math.abs(bitpix) / 8) * gcount * (pcount + prod);
+  if (!Number.isSafeInteger(bytes)) throw new CatalogError(`${where}: the header declares ${bytes} bytes of data, more than any file can hold`);
+  return bytes;
 }
 
 /** Rounds a byte count up to whole 2880-byte blocks. */

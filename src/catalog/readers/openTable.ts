@@ -1,15 +1,16 @@
-import { open, stat } from 'node:fs/promises';
+import { stat } from 'node:fs/promises';
 import type { TableFormat, TableSource } from './types.ts';
 import { CatalogError } from './CatalogError.ts';
+import { readBytes } from './byteStream.ts';
 import { openCsv } from './csv.ts';
 import { openEcsv } from './ecsv.ts';
 import { openFits } from './fits.ts';
 import { openParquet } from './parquet.ts';
 import { openVotable } from './votable.ts';
 
-/** File-name endings of each format (checked longest first; case-insensitive). */
+/** File-name endings of each format (case-insensitive; a further `.gz` is allowed after any of them). */
 const EXTENSIONS: [string, TableFormat][] = [
-  ['.fits.gz', 'fits'], ['.votable', 'votable'], ['.parquet', 'parquet'], ['.ecsv', 'ecsv'],
+  ['.votable', 'votable'], ['.parquet', 'parquet'], ['.ecsv', 'ecsv'],
   ['.fits', 'fits'], ['.fit', 'fits'], ['.csv', 'csv'], ['.tsv', 'tsv'], ['.tab', 'tsv'],
   ['.vot', 'votable'], ['.xml', 'votable'], ['.pq', 'parquet'],
 ];
@@ -21,15 +22,19 @@ const SNIFF_BYTES = 64 * 1024;
  * Opens a catalog file and returns its {@link TableSource}.
  *
  * The format is `opts.format` when given, else it follows the extension: .csv, .tsv/.tab, .ecsv,
- * .fits/.fit/.fits.gz, .vot/.xml/.votable, .parquet/.pq. Magic bytes are checked by each reader
+ * .fits/.fit, .vot/.xml/.votable, .parquet/.pq, each optionally followed by `.gz`. A file that
+ * starts with the gzip magic bytes is decompressed while it is read (CSV, TSV, ECSV, FITS and
+ * VOTable; not Parquet, which compresses internally). Magic bytes are checked by each reader
  * (FITS `SIMPLE  =`, Parquet `PAR1`, ECSV `# %ECSV`) and here for VOTable (`<VOTABLE` after the
  * XML prolog). One convenience: a `.csv` file that begins with `# %ECSV` is read as ECSV unless
  * `opts.format` says otherwise. Every problem with the file is a one-line {@link CatalogError}.
  *
  * @param path - catalog file
  * @param opts.format - force a format regardless of the extension
+ * @param opts.commentPrefix - CSV/TSV only: one character that starts a comment line anywhere
+ *   (without it, only `#` lines above the header are comments)
  */
-export async function openTable(path: string, opts: { format?: TableFormat } = {}): Promise<TableSource> {
+export async function openTable(path: string, opts: { format?: TableFormat; commentPrefix?: string } = {}): Promise<TableSource> {
   let format = opts.format ?? formatFromPath(path);
   if (format === undefined) {
     throw new CatalogError(`unknown catalog format for "${path}": expected .csv, .tsv, .ecsv, .fits, .vot or .parquet (or set input.format in the config)`);
@@ -37,8 +42,8 @@ export async function openTable(path: string, opts: { format?: TableFormat } = {
   await checkReadableFile(path);
   if (format === 'csv' && opts.format === undefined && (await head(path)).replace(/^\uFEFF/, '').startsWith('# %ECSV')) format = 'ecsv';
   switch (format) {
-    case 'csv': return openCsv(path, 'csv');
-    case 'tsv': return openCsv(path, 'tsv');
+    case 'csv': return openCsv(path, 'csv', opts.commentPrefix);
+    case 'tsv': return openCsv(path, 'tsv', opts.commentPrefix);
     case 'ecsv': return openEcsv(path);
     case 'fits': return openFits(path);
     case 'parquet': return openParquet(path);
@@ -52,7 +57,7 @@ export async function openTable(path: string, opts: { format?: TableFormat } = {
 
 /** The format implied by a file name, or undefined. */
 export function formatFromPath(path: string): TableFormat | undefined {
-  const lower = path.toLowerCase();
+  const lower = path.toLowerCase().replace(/\.gz$/, '');
   return EXTENSIONS.find(([ext]) => lower.endsWith(ext))?.[1];
 }
 
@@ -67,15 +72,16 @@ async function checkReadableFile(path: string): Promise<void> {
   }
 }
 
+/** The first SNIFF_BYTES bytes of the file (decompressed when it is gzip) as text. */
 async function head(path: string): Promise<string> {
-  const fh = await open(path, 'r');
-  try {
-    const buf = Buffer.alloc(SNIFF_BYTES);
-    const { bytesRead } = await fh.read(buf, 0, SNIFF_BYTES, 0);
-    return buf.toString('utf8', 0, bytesRead);
-  } finally {
-    await fh.close();
+  const parts: Buffer[] = [];
+  let n = 0;
+  for await (const b of readBytes(path, path)) {
+    parts.push(b);
+    n += b.length;
+    if (n >= SNIFF_BYTES) break;
   }
+  return Buffer.concat(parts).subarray(0, SNIFF_BYTES).toString('utf8');
 }
 
 /** True when, after the XML declaration, comments, processing instructions and a DOCTYPE, the root is VOTABLE. */

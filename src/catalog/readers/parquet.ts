@@ -10,6 +10,9 @@ import { toPlain } from './ecsvHeader.ts';
 /** DuckDB settings for reading one file: bounded memory on a shared 2-core machine. */
 const DUCKDB_OPTIONS = { memory_limit: '1GB', threads: '2' };
 
+/** Decimal digits a double holds exactly: DECIMAL(p, s) with p up to this is read as a float. */
+const MAX_EXACT_DECIMAL_DIGITS = 15;
+
 const SMALL_INT = new Set([DuckDBTypeId.TINYINT, DuckDBTypeId.SMALLINT, DuckDBTypeId.INTEGER, DuckDBTypeId.UTINYINT, DuckDBTypeId.USMALLINT, DuckDBTypeId.UINTEGER]);
 const WIDE_INT = new Set([DuckDBTypeId.BIGINT, DuckDBTypeId.UBIGINT, DuckDBTypeId.HUGEINT, DuckDBTypeId.UHUGEINT]);
 const FLOAT = new Set([DuckDBTypeId.FLOAT, DuckDBTypeId.DOUBLE, DuckDBTypeId.DECIMAL]);
@@ -24,7 +27,9 @@ const AS_TEXT = new Set([
  *
  * Kinds: BOOLEAN → bool; 8–32-bit integers → int; 64/128-bit integers → int when every value is
  * within ±(2^53 − 1) (checked with one min/max query), else `string` with exact digits;
- * FLOAT/DOUBLE/DECIMAL → float (NaN stays NaN: Parquet has real nulls); VARCHAR, ENUM, UUID and
+ * FLOAT/DOUBLE → float (NaN stays NaN: Parquet has real nulls); DECIMAL(p, s) → float for
+ * p ≤ 15 (exact once rounded back to s places), else `string` with its exact digits (`12.3400`);
+ * `fileType` keeps DuckDB's name of each column's type (`DECIMAL(18,4)`, `BIGINT`); VARCHAR, ENUM, UUID and
  * dates/times → string (ISO text). Nested types (LIST, STRUCT, MAP, ARRAY), BLOB, INTERVAL and
  * others raise a CatalogError naming the column. `meta` holds the file's key-value metadata as
  * strings (except the binary `ARROW:schema`); an Astropy `table_meta_yaml` entry is parsed for
@@ -42,8 +47,11 @@ export async function openParquet(path: string): Promise<TableSource> {
       const schema = await query(con, `SELECT * FROM ${src} LIMIT 0`, path);
       const names = settleColumnNames(schema.columnNames(), path);
       const typeIds = schema.columnTypes().map((t) => t.typeId);
+      const types = schema.columnTypes();
       const kinds: ColumnKind[] = typeIds.map((id, i) => {
         if (id === DuckDBTypeId.BOOLEAN) return 'bool';
+        // A DECIMAL wider than a double's 15 exact digits is read as its exact decimal text.
+        if (id === DuckDBTypeId.DECIMAL && (types[i] as { width?: number }).width! > MAX_EXACT_DECIMAL_DIGITS) return 'string';
         if (SMALL_INT.has(id) || WIDE_INT.has(id)) return 'int';
         if (FLOAT.has(id)) return 'float';
         if (AS_TEXT.has(id)) return 'string';
@@ -59,10 +67,10 @@ export async function openParquet(path: string): Promise<TableSource> {
       const countRes = await query(con, `SELECT num_rows FROM parquet_file_metadata(${sqlString(path)})`, path);
       const nRows = Number(countRes.value(0, 0) ?? 0);
       const kv = await query(con, `SELECT key, value FROM parquet_kv_metadata(${sqlString(path)})`, path);
-      const columns: ColumnInfo[] = names.map((name, i) => ({ name, kind: kinds[i]! }));
+      const columns: ColumnInfo[] = names.map((name, i) => ({ name, kind: kinds[i]!, fileType: types[i]!.toString() }));
       const meta = kvMeta(kv.getRows() as unknown[][], columns);
-      const select = names.map((n, i) => selectExpr(n, kinds[i]!, typeIds[i]!)).join(', ');
-      return parquetSource(path, inst, columns, nRows, meta, `SELECT ${select} FROM ${src}`);
+      const sql = () => `SELECT ${names.map((n, i) => selectExpr(n, columns[i]!.kind, typeIds[i]!)).join(', ')} FROM ${src}`;
+      return parquetSource(path, inst, columns, nRows, meta, sql);
     } finally {
       con.closeSync();
     }
@@ -72,16 +80,19 @@ export async function openParquet(path: string): Promise<TableSource> {
   }
 }
 
-function parquetSource(path: string, inst: DuckDBInstance, columns: ColumnInfo[], nRows: number, meta: Record<string, unknown>, sql: string): TableSource {
+function parquetSource(path: string, inst: DuckDBInstance, columns: ColumnInfo[], nRows: number, meta: Record<string, unknown>, sql: () => string): TableSource {
   let closed = false;
   return {
     path, format: 'parquet', columns, nRows, meta,
+    keepAsText(index: number) {
+      columns[index]!.kind = 'string';
+    },
     async *chunks(chunkRows?: number): AsyncGenerator<TableChunk> {
       if (closed) throw new Error(`${path}: chunks() called after close()`);
       const builder = new ChunkBuilder(columns.length, checkChunkRows(chunkRows));
       const con = await inst.connect();
       try {
-        const result = await con.stream(sql).catch((e: unknown) => { throw readError(path, e); });
+        const result = await con.stream(sql()).catch((e: unknown) => { throw readError(path, e); });
         for (;;) {
           const chunk = await result.fetchChunk().catch((e: unknown) => { throw readError(path, e); });
           if (chunk === null || chunk.rowCount === 0) break;
@@ -120,6 +131,9 @@ async function checkMagic(path: string): Promise<void> {
     const head = Buffer.alloc(4);
     const tail = Buffer.alloc(4);
     await fh.read(head, 0, 4, 0);
+    if (head[0] === 0x1f && head[1] === 0x8b) {
+      throw new CatalogError(`${path}: gzip-compressed Parquet is not read (Parquet compresses its own pages); decompress it first (gunzip)`);
+    }
     if (head.toString('latin1') !== 'PAR1') throw new CatalogError(`${path}: not a Parquet file: it does not begin with "PAR1"`);
     if (size >= 12) await fh.read(tail, 0, 4, size - 4);
     if (size < 12 || tail.toString('latin1') !== 'PAR1') {

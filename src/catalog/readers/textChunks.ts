@@ -1,13 +1,14 @@
-import { createReadStream } from 'node:fs';
 import { CatalogError } from './CatalogError.ts';
+import { readBytes, READ_BYTES } from './byteStream.ts';
 
 /** Bytes read from disk per step for the text formats (1 MiB keeps memory flat and syscalls few). */
-export const TEXT_READ_BYTES = 1 << 20;
+export const TEXT_READ_BYTES = READ_BYTES;
 
 const decoder = new TextDecoder('utf-8', { fatal: true, ignoreBOM: true });
 
 /**
- * Streams a UTF-8 text file as decoded strings, without ever holding the whole file.
+ * Streams a UTF-8 text file as decoded strings, without ever holding the whole file. A
+ * gzip-compressed file (magic bytes 1f 8b) is decompressed on the fly.
  *
  * A leading byte-order mark is dropped. An invalid byte sequence raises a {@link CatalogError}
  * `<file>: line N: invalid UTF-8 byte sequence`, N being the 1-based line of the bad byte.
@@ -20,24 +21,19 @@ export async function* readTextChunks(path: string, label: string): AsyncGenerat
   let carry: Buffer | null = null;
   let linesBefore = 0;
   let first = true;
-  const stream = createReadStream(path, { highWaterMark: TEXT_READ_BYTES });
-  try {
-    for await (const raw of stream as AsyncIterable<Buffer>) {
-      let buf: Buffer = carry ? Buffer.concat([carry, raw]) : raw;
-      if (first) {
-        first = false;
-        if (buf.length >= 3 && buf[0] === 0xef && buf[1] === 0xbb && buf[2] === 0xbf) buf = buf.subarray(3);
-      }
-      const cut = completePrefixLength(buf);
-      carry = cut < buf.length ? Buffer.from(buf.subarray(cut)) : null;
-      const whole = buf.subarray(0, cut);
-      yield decodeOrThrow(whole, linesBefore, label);
-      linesBefore += countNewlines(whole);
+  for await (const raw of readBytes(path, label)) {
+    let buf: Buffer = carry ? Buffer.concat([carry, raw]) : raw;
+    if (first) {
+      first = false;
+      if (buf.length >= 3 && buf[0] === 0xef && buf[1] === 0xbb && buf[2] === 0xbf) buf = buf.subarray(3);
     }
-    if (carry) decodeOrThrow(carry, linesBefore, label); // an incomplete sequence at end of file
-  } finally {
-    stream.destroy();
+    const cut = completePrefixLength(buf);
+    carry = cut < buf.length ? Buffer.from(buf.subarray(cut)) : null;
+    const whole = buf.subarray(0, cut);
+    yield decodeOrThrow(whole, linesBefore, label);
+    linesBefore += countNewlines(whole);
   }
+  if (carry) decodeOrThrow(carry, linesBefore, label); // an incomplete sequence at end of file
 }
 
 function decodeOrThrow(buf: Buffer, linesBefore: number, label: string): string {

@@ -18,6 +18,12 @@ export interface ColumnInfo {
   description?: string;
   /** IVOA Unified Content Descriptor, where the format carries one. */
   ucd?: string;
+  /**
+   * The column's type as the file declares it, where the kind alone loses it (Parquet:
+   * `BIGINT`, `DECIMAL(18,4)`, `INTEGER`, ...; ECSV: `int64`, `float32`, ...), so a writer can
+   * give a passed-through column back its own type.
+   */
+  fileType?: string;
 }
 
 /**
@@ -57,6 +63,13 @@ export interface TableSource {
    * last is full. May be called more than once: each call re-reads the file from the start.
    */
   chunks(chunkRows?: number): AsyncIterable<TableChunk>;
+  /**
+   * Makes later `chunks()` calls return column `index` as text, and sets its kind to `string`:
+   * exactly as written for the text formats (CSV, TSV, ECSV, VOTable TABLEDATA: `007`, `1e3`,
+   * `3.0` stay so), the shortest decimal that reads back to the stored number for binary ones
+   * (FITS, VOTable BINARY, Parquet numbers; Parquet DECIMAL keeps its scale). Ids are read so.
+   */
+  keepAsText(index: number): void;
   /** Releases the resources held by the source; `chunks()` must not be called afterwards. */
   close(): Promise<void>;
 }

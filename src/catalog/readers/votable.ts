@@ -4,15 +4,21 @@ import { ChunkBuilder, checkChunkRows } from './ChunkBuilder.ts';
 import { settleColumnNames } from './columnNames.ts';
 import { readTextChunks } from './textChunks.ts';
 import { XmlTokenizer, type XmlHandler } from './XmlTokenizer.ts';
-import { votColumnInfo, votKind, votParser, type VotField, type VotParser } from './votableFields.ts';
+import { votColumnInfo, votKind, votParser, votTextParser, type VotField, type VotParser } from './votableFields.ts';
+import { VotBinaryDecoder } from './votableBinary.ts';
+import { cellAsText } from './cellText.ts';
+import { MAX_COLUMNS, MAX_FIELD_CHARS, MAX_RECORD_CHARS } from './limits.ts';
+import type { Cell } from './types.ts';
 
 /**
- * Opens the first TABLE of an IVOA VOTable (1.3/1.4) document with TABLEDATA serialization.
+ * Opens the first TABLE of an IVOA VOTable (1.3/1.4) document serialized as TABLEDATA, BINARY
+ * or BINARY2 (base64 `<STREAM>`; see {@link VotBinaryDecoder}), gzip-compressed or not.
  *
  * The file is streamed through {@link XmlTokenizer}; nothing but one read buffer and one chunk is
  * held. Opening makes one full pass (well-formedness, every cell against its FIELD's datatype,
- * row count, 64-bit range); `chunks()` re-parses and stops at the end of the table. BINARY,
- * BINARY2 and FITS serializations are refused. `meta` holds `description` (the VOTABLE's
+ * row count, 64-bit range); `chunks()` re-parses and stops at the end of the table. The FITS
+ * serialization and external streams (`href`) are refused. A TD longer than MAX_FIELD_CHARS or a
+ * row of more than MAX_COLUMNS cells is a CatalogError. `meta` holds `description` (the VOTABLE's
  * DESCRIPTION), `tableName`, `tableDescription`, `params` (every PARAM: name → {value, datatype,
  * unit?, ucd?}) and `infos` (INFO name → value). A long column holding values beyond ±(2^53 − 1)
  * is read as `string` (exact digits). Cell rules: see {@link votParser}.
@@ -31,10 +37,14 @@ export async function openVotable(path: string): Promise<TableSource> {
   let closed = false;
   return {
     path, format: 'votable', columns, nRows: scan.nRows, meta: scan.meta,
+    keepAsText(index: number) {
+      columns[index]!.kind = 'string';
+      parsers[index] = votTextParser(fields[index]!.field);
+    },
     async *chunks(chunkRows?: number): AsyncGenerator<TableChunk> {
       if (closed) throw new Error(`${path}: chunks() called after close()`);
       const builder = new ChunkBuilder(columns.length, checkChunkRows(chunkRows));
-      const rows = new VotHandler(path, { parsers, builder });
+      const rows = new VotHandler(path, { parsers, builder, kinds: columns.map((c) => c.kind) });
       const tok = new XmlTokenizer(path, rows);
       rows.tok = tok;
       for await (const text of readTextChunks(path, path)) {
@@ -56,7 +66,7 @@ async function parseFile(path: string, handler: VotHandler): Promise<void> {
 }
 
 interface ScannedField { field: VotField; info: ColumnInfo }
-interface RowSink { parsers: VotParser[]; builder: ChunkBuilder }
+interface RowSink { parsers: VotParser[]; builder: ChunkBuilder; kinds: ColumnKind[] }
 type TextTarget = 'td' | 'fieldDescription' | 'description' | 'tableDescription' | null;
 
 /** Event handler for both passes: scan (`sink` null) collects the schema and checks cells; rows fills chunks. */
@@ -79,7 +89,10 @@ class VotHandler implements XmlHandler {
   private collect: TextTarget = null;
   private buf = '';
   private cells: string[] = [];
+  private rowChars = 0;
   private scanParsers: VotParser[] = [];
+  private binary: 'BINARY' | 'BINARY2' | null = null;
+  private decoder: VotBinaryDecoder | null = null;
 
   private readonly file: string;
   private readonly sink: RowSink | null;
@@ -93,8 +106,12 @@ class VotHandler implements XmlHandler {
     const parent = this.path[this.path.length - 1];
     this.path.push(name);
     if (this.inTableData) {
-      if (name === 'TR') this.cells = [];
-      else if (name === 'TD') { this.collect = 'td'; this.buf = ''; }
+      if (name === 'TR') { this.cells = []; this.rowChars = 0; }
+      else if (name === 'TD') {
+        if (this.cells.length >= MAX_COLUMNS) throw this.tok.error(`a row with more than ${MAX_COLUMNS} TD cells`);
+        this.collect = 'td';
+        this.buf = '';
+      }
       return;
     }
     if (parent === undefined && name !== 'VOTABLE') throw new CatalogError(`${this.file}: not a VOTable: the root element is <${name}>`);
@@ -131,22 +148,64 @@ class VotHandler implements XmlHandler {
         break;
       case 'BINARY':
       case 'BINARY2':
+        if (this.inTarget && parent === 'DATA') this.binary = name;
+        break;
+      case 'STREAM':
+        if (this.binary !== null && parent === this.binary) this.openStream(attrs);
+        break;
       case 'FITS':
         if (this.inTarget && parent === 'DATA') {
-          throw new CatalogError(`${this.file}: VOTable serialization ${name} is not supported; re-save as TABLEDATA`);
+          throw new CatalogError(`${this.file}: VOTable serialization FITS is not supported; re-save as TABLEDATA, BINARY or BINARY2`);
         }
         break;
     }
   }
 
   text(s: string): void {
-    if (this.collect !== null) this.buf += s;
+    if (this.decoder !== null) { this.decoder.push(s); return; }
+    if (this.collect === null) return;
+    this.buf += s;
+    if (this.buf.length > MAX_FIELD_CHARS) throw this.tok.error(`text longer than ${MAX_FIELD_CHARS} characters in one ${this.collect === 'td' ? 'TD cell' : 'DESCRIPTION'}`);
+  }
+
+  private openStream(attrs: Record<string, string>): void {
+    if (attrs.href !== undefined) throw this.tok.error(`a ${this.binary} STREAM with href (data in another file) is not supported`);
+    if (attrs.encoding !== 'base64') throw this.tok.error(`a ${this.binary} STREAM with encoding "${attrs.encoding ?? ''}" is not supported (only base64)`);
+    const fields = this.fields ?? [];
+    const kinds = this.sink ? this.sink.kinds : fields.map((f) => f.info.kind);
+    const layout = fields.map((f, i) => ({ field: f.field, kind: kinds[i]! }));
+    this.decoder = new VotBinaryDecoder(layout, this.binary === 'BINARY2', this.file, (cells) => this.binaryRow(cells));
+  }
+
+  private binaryRow(cells: Cell[]): void {
+    if (this.sink) {
+      const { builder, kinds } = this.sink;
+      for (let i = 0; i < cells.length; i++) builder.cols[i]!.push(kinds[i] === 'string' ? cellAsText(cells[i]!) : cells[i]!);
+      builder.rowDone();
+      return;
+    }
+    const fields = this.fields ?? [];
+    for (let i = 0; i < cells.length; i++) {
+      if (typeof cells[i] === 'string' && fields[i]!.info.kind === 'int') this.unsafe[i] = true;
+    }
+    this.nRows++;
   }
 
   close(name: string): void {
     this.path.pop();
+    if (name === 'STREAM' && this.decoder !== null) {
+      this.decoder.end();
+      this.decoder = null;
+      return;
+    }
+    if (name === 'BINARY' || name === 'BINARY2') this.binary = null;
     if (this.inTableData) {
-      if (name === 'TD' && this.collect === 'td') { this.cells.push(this.buf); this.collect = null; }
+      if (name === 'TD' && this.collect === 'td') {
+        this.rowChars += this.buf.length;
+        if (this.rowChars > MAX_RECORD_CHARS) throw this.tok.error(`a row longer than ${MAX_RECORD_CHARS} characters (the limit for one row)`);
+        this.cells.push(this.buf);
+        this.collect = null;
+      }
       else if (name === 'TR') this.row();
       else if (name === 'TABLEDATA') this.inTableData = false;
       return;

@@ -46,7 +46,7 @@ export function votColumnInfo(f: VotField, name: string, kind: ColumnKind): Colu
  * The TD parser of a FIELD. Blank cells and the FIELD's `<VALUES null="...">` are null; floats:
  * NaN is null (the VOTable null for floating point), `Inf`/`+Inf`/`-Inf` are ±Infinity; integers
  * accept decimal or `0x` hexadecimal; booleans accept T/F/TRUE/FALSE/1/0 (any case), `?` is null.
- * Strings are trimmed of surrounding blanks. With `bigAsString` (a long column holding values beyond
+ * Strings are kept exactly as written, blanks included; an empty TD is null. With `bigAsString` (a long column holding values beyond
  * ±(2^53 − 1), read as kind `string`) integers come out as exact decimal digits.
  */
 export function votParser(f: VotField, kind: ColumnKind, bigAsString: boolean): VotParser {
@@ -54,7 +54,7 @@ export function votParser(f: VotField, kind: ColumnKind, bigAsString: boolean): 
   const nulNum = nul !== undefined && nul !== '' ? Number(nul) : NaN;
   switch (kind) {
     case 'string':
-      return (s) => { const t = s.trim(); return t === '' || t === nul ? null : t; };
+      return (s) => (s === '' || s === nul ? null : s);
     case 'bool':
       return (s) => {
         const t = s.trim().toLowerCase();
@@ -83,4 +83,13 @@ export function votParser(f: VotField, kind: ColumnKind, bigAsString: boolean): 
         return Number.isNaN(x) || x === nulNum ? null : x;
       };
   }
+}
+
+/** The TD parser that keeps a cell's text exactly as written (for ids): empty and the VALUES null are null. */
+export function votTextParser(f: VotField): VotParser {
+  const nul = f.nullValue?.trim();
+  return (s) => {
+    const t = s.trim();
+    return t === '' || t === nul ? null : t;
+  };
 }

@@ -180,6 +180,8 @@ describe('parseConfig rejects a bad config with one line naming the file and the
     ['line_priority: [halpha, halpha]', 'census.config.yaml: line_priority lists "halpha" twice'],
     ['input: { format: csv }', 'census.config.yaml: input.path must be the catalog file name (relative to the config file), got nothing'],
     ['input: { path: a.xls, format: xls }', 'census.config.yaml: input.format: unknown format "xls"; known: csv, tsv, ecsv, fits, votable, parquet'],
+    ['input: { path: a.csv, comment: "//" }', 'census.config.yaml: input.comment must be one character other than a blank, quote or comma, got "//"'],
+    ['input: { path: a.csv, comment: "," }', 'census.config.yaml: input.comment must be one character other than a blank, quote or comma, got ","'],
     ['output: 3', 'census.config.yaml: output must be a file name (relative to the config file), got 3'],
     ['title: [a, b]', 'census.config.yaml: title must be a string, got a list'],
     ['site: { base: 1 }', 'census.config.yaml: site.base must be a string, got 1'],

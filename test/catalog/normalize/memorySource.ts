@@ -23,6 +23,10 @@ export function memorySource(cols: [ColumnInfo | string, Cell[]][], name = 'cata
         yield { rowOffset: off, nRows: n, columns: data.map((c) => c.slice(off, off + n)) };
       }
     },
+    keepAsText(index: number) {
+      columns[index]!.kind = 'string';
+      data[index] = data[index]!.map((c) => (c === null || typeof c === 'string' ? c : String(c)));
+    },
     async close() {},
   };
 }

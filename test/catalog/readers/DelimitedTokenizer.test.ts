@@ -24,6 +24,7 @@ describe('DelimitedTokenizer', () => {
       [['h1', 'h,2'], 2],
       [['a"b', 'x'], 3],
       [['multi\r\nline', '# not comment'], 5],
+      [['#c2'], 7], // a # line after the first record is data
       [['last', 'qz'], 8],
     ];
     for (const pieces of splits(DOC)) expect(tokenize(pieces)).toEqual(expected);

@@ -35,3 +35,18 @@ describe('XmlTokenizer', () => {
     expect(() => events(['<a/>\nz'])).toThrow('mem: line 2: text outside the root element');
   });
 });
+
+describe('XmlTokenizer with long text', () => {
+  it('passes long text on in pieces before its end tag arrives, holding back only a split entity', () => {
+    const texts: string[] = [];
+    const tok = new XmlTokenizer('mem', { open: () => {}, close: () => {}, text: (s) => texts.push(s) });
+    tok.push('<A>');
+    tok.push('x'.repeat(1000));
+    expect(texts.join('')).toBe('x'.repeat(1000)); // a BINARY stream must not pile up until </STREAM>
+    tok.push('y&am');
+    expect(texts.join('')).toBe(`${'x'.repeat(1000)}y`);
+    tok.push('p;z</A>');
+    tok.end();
+    expect(texts.join('')).toBe(`${'x'.repeat(1000)}y&z`);
+  });
+});

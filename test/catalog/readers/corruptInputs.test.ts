@@ -3,7 +3,7 @@ import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { CatalogError } from '../../../src/catalog/readers/CatalogError.ts';
 import { openTable } from '../../../src/catalog/readers/openTable.ts';
-import { fitsBinTable, q } from './fitsFixture.ts';
+import { card, fitsBinTable, q } from './fitsFixture.ts';
 import { duckdbRun, makeTmpDir, readAll, refRows, writeRefParquet } from './readerTestKit.ts';
 
 const { dir, cleanup } = makeTmpDir('corrupt');
@@ -37,7 +37,103 @@ ${rows}
 const FIELDS_XY = '<FIELD name="x" datatype="double"/><FIELD name="y" datatype="int"/>';
 const fitsTable = (nRows: number) => fitsBinTable([{ name: 'x', tform: 'D', values: Array.from({ length: nRows }, (_, i) => i) }]);
 
+/** Raw FITS bytes from header card lists (each header padded to whole 2880-byte blocks, END added). */
+const rawFits = (...headers: [string, string?][][]) =>
+  Buffer.from(headers.map((h) => {
+    const t = h.map(([k, v]) => card(k, v)).join('') + card('END');
+    return t.padEnd(Math.ceil(t.length / 2880) * 2880, ' ');
+  }).join(''), 'latin1');
+const PRIMARY: [string, string][] = [['SIMPLE', 'T'], ['BITPIX', '8'], ['NAXIS', '0'], ['EXTEND', 'T']];
+const bintable = (over: Record<string, string>): [string, string][] =>
+  Object.entries({ XTENSION: "'BINTABLE'", BITPIX: '8', NAXIS: '2', NAXIS1: '8', NAXIS2: '1', PCOUNT: '0', GCOUNT: '1', TFIELDS: '1', TTYPE1: "'x'", TFORM1: "'D'", ...over });
+
 const cases: Bad[] = [
+  // Bounds (issue 8, "Never harm"): each stops with one line instead of looping or filling memory or disk.
+  {
+    what: 'zero-width rows with NAXIS2 = 1e12', file: 'zerowidth.fits',
+    write: (p) => writeFileSync(p, rawFits(PRIMARY, bintable({ NAXIS1: '0', NAXIS2: '1000000000000', TFORM1: "'0A'" }))),
+    message: (p) => `${p}: HDU 2: NAXIS1 = 0: rows of zero bytes hold no values (NAXIS2 = 1000000000000)`,
+  },
+  {
+    what: 'a negative NAXIS1 in the primary HDU', file: 'negative.fits',
+    write: (p) => writeFileSync(p, rawFits([['SIMPLE', 'T'], ['BITPIX', '8'], ['NAXIS', '1'], ['NAXIS1', '-2880']], bintable({}))),
+    message: (p) => `${p}: HDU 1: keyword NAXIS1 = -2880 is out of range (0 to 9007199254740991)`,
+  },
+  {
+    what: 'a negative NAXIS2 in the table', file: 'negrows.fits',
+    write: (p) => writeFileSync(p, rawFits(PRIMARY, bintable({ NAXIS2: '-5' }))),
+    message: (p) => `${p}: HDU 2: keyword NAXIS2 = -5 is out of range (0 to 9007199254740991)`,
+  },
+  {
+    what: 'an absurd NAXIS1', file: 'wide.fits',
+    write: (p) => writeFileSync(p, rawFits(PRIMARY, bintable({ NAXIS1: '2000000000', TFORM1: "'2000000000A'" }))),
+    message: (p) => `${p}: HDU 2: keyword NAXIS1 = 2000000000 is out of range (0 to 1048576)`,
+  },
+  {
+    what: 'TFIELDS beyond 999', file: 'tfields.fits',
+    write: (p) => writeFileSync(p, rawFits(PRIMARY, bintable({ TFIELDS: '5000' }))),
+    message: (p) => `${p}: HDU 2: keyword TFIELDS = 5000 is out of range (1 to 999)`,
+  },
+  {
+    what: 'a header with no END card in 1000 blocks', file: 'endless.fits',
+    write: (p) => writeFileSync(p, Buffer.from(card('SIMPLE', 'T') + card('COMMENT', undefined).repeat(36 * 1001), 'latin1')),
+    message: (p) => `${p}: HDU 1: FITS header has no END card within 1000 blocks (2880000 bytes)`,
+  },
+  {
+    what: 'more than 1000 HDUs before a table', file: 'manyhdus.fits',
+    write: (p) => writeFileSync(p, rawFits(PRIMARY, ...Array.from({ length: 1000 }, () => [['XTENSION', "'IMAGE'"], ['BITPIX', '8'], ['NAXIS', '0']] as [string, string][]))),
+    message: (p) => `${p}: no binary table among the first 1000 HDUs`,
+  },
+  {
+    what: 'an unquoted field of 5 MB', file: 'field.csv',
+    write: (p) => writeFileSync(p, `a,b
+1,${'x'.repeat(5 << 20)}
+`),
+    message: (p) => `${p}: line 2: a field longer than 4194304 characters (the limit for one cell; is a quote left open?)`,
+  },
+  {
+    what: 'a quoted field of 5 MB', file: 'quoted.csv',
+    write: (p) => writeFileSync(p, `a,b
+1,2
+3,"${'x\n'.repeat(5 << 19)}`),
+    message: (p) => `${p}: line 3: a field longer than 4194304 characters (the limit for one cell; is a quote left open?)`,
+  },
+  {
+    what: 'a row of 40 MB in 4 MB fields', file: 'longrow.csv',
+    write: (p) => writeFileSync(p, `${Array.from({ length: 10 }, (_, i) => `c${i}`).join(',')}\n${Array.from({ length: 10 }, () => 'x'.repeat(4 << 20)).join(',')}\n`),
+    message: (p) => `${p}: line 2: a record longer than 33554432 characters (the limit for one row)`,
+  },
+  {
+    what: 'a header of 10001 columns', file: 'manycols.csv',
+    write: (p) => writeFileSync(p, `${Array.from({ length: 10001 }, (_, i) => `c${i}`).join(',')}
+`),
+    message: (p) => `${p}: line 1: more than 10000 fields in one record (the limit for columns)`,
+  },
+  {
+    what: 'a VOTable tag that never closes', file: 'opentag.vot',
+    write: (p) => writeFileSync(p, `<?xml version="1.0"?>\n<VOTABLE version="1.4"><RESOURCE><TABLE name="${'a'.repeat(9 << 20)}`),
+    message: (p) => `${p}: line 2: markup longer than 8388608 characters without its end (is a tag, comment or quote left open?)`,
+  },
+  {
+    what: 'a 5 MB TD cell', file: 'bigtd.vot',
+    write: (p) => writeFileSync(p, vot('<FIELD name="s" datatype="char" arraysize="*"/>', `<TR><TD>${'x'.repeat(5 << 20)}</TD></TR>`)),
+    message: (p) => `${p}: line 8: text longer than 4194304 characters in one TD cell`,
+  },
+  {
+    what: 'a BINARY stream that is not base64', file: 'b64.vot',
+    write: (p) => writeFileSync(p, vot(FIELDS_XY, '').replace('<TABLEDATA>\n\n</TABLEDATA>', '<BINARY><STREAM encoding="base64">AA!A</STREAM></BINARY>')),
+    message: (p) => `${p}: the BINARY stream is not valid base64`,
+  },
+  {
+    what: 'a BINARY stream in another file', file: 'href.vot',
+    write: (p) => writeFileSync(p, vot(FIELDS_XY, '').replace('<TABLEDATA>\n\n</TABLEDATA>', '<BINARY><STREAM href="data.bin"/></BINARY>')),
+    message: (p) => `${p}: line 7: a BINARY STREAM with href (data in another file) is not supported`,
+  },
+  {
+    what: 'a gzip-compressed Parquet file', file: 'packed.parquet.gz',
+    write: (p) => writeFileSync(p, Buffer.from([0x1f, 0x8b, 8, 0, 0, 0, 0, 0, 0, 0, 0, 0])),
+    message: (p) => `${p}: gzip-compressed Parquet is not read (Parquet compresses its own pages); decompress it first (gunzip)`,
+  },
   // CSV / TSV
   { what: 'a ragged row', file: 'ragged.csv', write: (p) => writeFileSync(p, 'a,b,c\n1,2,3\n4,5\n'), message: (p) => `${p}: line 3: 2 fields, header has 3` },
   { what: 'a row with too many fields', file: 'long.tsv', write: (p) => writeFileSync(p, 'a\tb\n1\t2\t3\n'), message: (p) => `${p}: line 2: 3 fields, header has 2` },
@@ -88,9 +184,9 @@ const cases: Bad[] = [
     write: (p) => writeFileSync(p, fitsBinTable([{ name: 'x', tform: 'D', values: [0] }], { tableCards: [['TFIELDS', '1']] }).toString('latin1').replace('NAXIS1  =                    8', 'NAXIS1  =                   12')),
     message: (p) => `${p}: HDU 2: the columns' TFORMs add up to 8 bytes per row but NAXIS1 = 12`,
   },
-  { what: 'a gzip-compressed file', file: 'packed.fits.gz', write: (p) => writeFileSync(p, Buffer.from([0x1f, 0x8b, 8, 0, 0, 0, 0, 0])), message: (p) => `${p}: gzip-compressed FITS is not supported; decompress it first (gunzip)` },
+  { what: 'a truncated gzip-compressed file', file: 'packed.fits.gz', write: (p) => writeFileSync(p, Buffer.from([0x1f, 0x8b, 8, 0, 0, 0, 0, 0])), message: (p) => `${p}: corrupt gzip data (unexpected end of file)` },
   // VOTable
-  { what: 'a BINARY serialization', file: 'binary.vot', write: (p) => writeFileSync(p, vot(FIELDS_XY, '').replace('<TABLEDATA>\n\n</TABLEDATA>', '<BINARY><STREAM encoding="base64">AAAA</STREAM></BINARY>')), message: (p) => `${p}: VOTable serialization BINARY is not supported; re-save as TABLEDATA` },
+  { what: 'a BINARY serialization', file: 'binary.vot', write: (p) => writeFileSync(p, vot(FIELDS_XY, '').replace('<TABLEDATA>\n\n</TABLEDATA>', '<BINARY><STREAM encoding="base64">AAAA</STREAM></BINARY>')), message: (p) => `${p}: the BINARY stream ends inside row 1 (truncated or corrupt data)` },
   { what: 'a mismatched closing tag', file: 'nest.vot', write: (p) => writeFileSync(p, vot(FIELDS_XY, '<TR><TD>1</TD><TD>2</TD></TR>\n<TR><TD>1</TR>')), message: (p) => `${p}: line 9: closing tag </TR> does not match <TD>` },
   {
     what: 'a document cut after an element', file: 'cut.vot',

@@ -24,10 +24,33 @@ describe('the CSV reader', () => {
     expect(src.columns[1]!.kind).toBe('string');
   });
 
-  it('skips comment lines at the top and between rows but keeps # inside quoted fields', async () => {
-    const { src, columns } = await read('# produced by hand\n#  second note\na,b\n1,"x\n# not a comment"\n# between rows\n2,y\n#last');
+  it('skips the comment lines above the header and reads a # line after it as data', async () => {
+    const { src, columns } = await read('# produced by hand\n#  second note\nid,b\n1,"x\n# not a comment"\n#9,y\n#last,z');
     expect(src.meta).toEqual({ comments: ['produced by hand', 'second note'] });
-    expect(columns).toEqual([[1, 2], ['x\n# not a comment', 'y']]);
+    expect(columns).toEqual([['1', '#9', '#last'], ['x\n# not a comment', 'y', 'z']]);
+  });
+
+  it('reads a numeric column holding a leading zero as text, so 0042 stays 0042', async () => {
+    const { src, columns } = await read('code,n,x\n0042,0,-0.5\n7,10,00.25\n');
+    expect(src.columns.map((c) => c.kind)).toEqual(['string', 'int', 'string']);
+    expect(columns).toEqual([['0042', '7'], [0, 10], ['-0.5', '00.25']]);
+  });
+
+  it('reads a gzip-compressed CSV the same as the plain file', async () => {
+    const { gzipSync } = await import('node:zlib');
+    const text = 'id,z\nA,5.5\nB,6\n';
+    const path = join(dir, 'packed.csv.gz');
+    writeFileSync(path, gzipSync(text));
+    const src = await openTable(path);
+    expect(src.format).toBe('csv');
+    expect((await readAll(src, 1)).columns).toEqual([['A', 'B'], [5.5, 6]]);
+  });
+
+  it('skips lines starting with the configured comment prefix anywhere, and keeps other # lines as data', async () => {
+    const path = join(dir, 'prefix.csv');
+    writeFileSync(path, '% note\nid,b\n1,x\n% between rows\n#2,y\n');
+    const src = await openTable(path, { commentPrefix: '%' });
+    expect((await readAll(src)).columns).toEqual([['1', '#2'], ['x', 'y']]);
   });
 
   it('reads UTF-8 with a byte-order mark and CRLF line ends', async () => {

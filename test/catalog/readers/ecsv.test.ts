@@ -41,6 +41,6 @@ describe('the ECSV reader', () => {
   it('accepts a .csv file that starts with the ECSV signature as ECSV', async () => {
     const { src } = await read(header(['{name: a, unit: Angstrom, datatype: float32}'], ['# delimiter: \',\'']) + 'a\n1\n', 'csv');
     expect(src.format).toBe('ecsv');
-    expect(src.columns).toEqual([{ name: 'a', kind: 'float', unit: 'Angstrom' }]);
+    expect(src.columns).toEqual([{ name: 'a', kind: 'float', unit: 'Angstrom', fileType: 'float32' }]);
   });
 });

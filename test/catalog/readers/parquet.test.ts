@@ -42,7 +42,7 @@ describe('the Parquet reader', () => {
   it('puts key-value metadata into meta and takes units and descriptions from an Astropy table_meta_yaml entry', async () => {
     const yaml = 'datatype:\\n- {name: fwhm, unit: km / s, datatype: float64, description: line width}\\nmeta: !!omap\\n- {catalog: invented}\\n';
     const { src } = await read(`SELECT 1.0::DOUBLE fwhm`, `, KV_METADATA {origin: 'invented', table_meta_yaml: E'${yaml}'}`);
-    expect(src.columns).toEqual([{ name: 'fwhm', kind: 'float', unit: 'km / s', description: 'line width' }]);
+    expect(src.columns).toEqual([{ name: 'fwhm', kind: 'float', unit: 'km / s', description: 'line width', fileType: 'DOUBLE' }]);
     expect(src.meta).toEqual({ origin: 'invented', catalog: 'invented' });
   });
 });

@@ -25,11 +25,11 @@ describe('the VOTable reader', () => {
     expect(columns).toEqual([['a <b> & "c" \'d\'', 'AB😀', '<raw> & stuff']]);
   });
 
-  it('treats VALUES null, empty TDs and NaN as null, and reads Inf and hexadecimal integers', async () => {
+  it('treats VALUES null, empty TDs and NaN as null, reads Inf and hexadecimal integers, and keeps blanks around text', async () => {
     const { columns } = await read(wrap(
       '<FIELD name="n" datatype="int"><VALUES null="-999"/></FIELD><FIELD name="x" datatype="double"><VALUES null="-99.0"/></FIELD><FIELD name="s" datatype="char" arraysize="8"><VALUES null="none"/></FIELD><FIELD name="b" datatype="boolean"/>',
       '<TR><TD>-999</TD><TD>-99</TD><TD>none</TD><TD>?</TD></TR><TR><TD> 0x1F </TD><TD>NaN</TD><TD></TD><TD>TRUE</TD></TR><TR><TD/><TD>-Inf</TD><TD> padded </TD><TD>0</TD></TR>'));
-    expect(columns).toEqual([[null, 31, null], [null, null, -Infinity], [null, null, 'padded'], [null, true, false]]);
+    expect(columns).toEqual([[null, 31, null], [null, null, -Infinity], [null, null, ' padded '], [null, true, false]]);
   });
 
   it('collects DESCRIPTION, PARAMs, INFOs and the table name into meta, and FIELD metadata into columns', async () => {
