@@ -7,7 +7,5 @@ export default defineConfig({
   test: {
     include: ['test/core/**/*.test.ts'],
     testTimeout: 60_000,
-    // The core is pure: test files can share one module graph, which saves a re-import per mutant.
-    isolate: false,
   },
 });
