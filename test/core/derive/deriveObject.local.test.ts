@@ -80,3 +80,20 @@ describe('deriveObject: offset from the local relation', () => {
     });
   });
 });
+
+describe('deriveObject: no local offset without its inputs', () => {
+  it('leaves the offset, local_offset_sigma and P(above) empty without a host mass', () => {
+    const d = deriveObject({ id: 'no-host', z: 5, lines: { halpha: { lumErgS: { value: 1e43 }, fwhmKms: { value: 2000 } } } }, settings(), rngFor('no-host'));
+    expect(d.deltaLogMbhLocal).toBeNull();
+    expect(d.localOffsetSigma).toBeNull();
+    expect(d.pAboveLocal).toBeNull();
+  });
+
+  it('leaves them empty without a black-hole mass, even with a host mass', () => {
+    const d = deriveObject({ id: 'no-mass', z: 5, lines: { halpha: { lumErgS: { value: 1e43 } } }, logMstar: { value: 10, errLo: 0.2, errHi: 0.2 } }, settings(), rngFor('no-mass'));
+    expect(d.logMbh).toBeNull();
+    expect(d.deltaLogMbhLocal).toBeNull();
+    expect(d.localOffsetSigma).toBeNull();
+    expect(d.pAboveLocal).toBeNull();
+  });
+});
