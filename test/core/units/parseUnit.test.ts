@@ -35,6 +35,7 @@ describe('parseUnit through unitConverter: spelling', () => {
   it("reads a scale factor joined to the unit by '*' or '×'", () => {
     expectClose(unitConverter('1e-18*erg/s/cm2', 'flux')(1), 1e-18, { rtol: 1e-14, source: 'scale factor' });
     expectClose(unitConverter('1e-18 × erg/s/cm2', 'flux')(1), 1e-18, { rtol: 1e-14, source: 'scale factor' });
+    expectClose(unitConverter('1e-18.erg.s-1.cm-2', 'flux')(1), 1e-18, { rtol: 1e-14, source: 'VOUnits 1.0 "." product after a scale factor' });
   });
 
   it('reads a bare number as a dimensionless scale and a scaled percent', () => {
