@@ -87,7 +87,12 @@ export function binnedPercentiles(values: Float64Array): Percentiles | null {
     const x = values[i] as number;
     const b = (x - min) * scale;
     const s = slotOfBin[b < NBINS ? b | 0 : NBINS - 1] as number;
-    if (s !== 0) gathered[(fill[s - 1] as number)++] = x;
+    if (s !== 0) {
+      // Not `gathered[(fill[s - 1] as number)++]`: StrykerJS 9.6 prints that without its parentheses, which does not parse.
+      const k = fill[s - 1] as number;
+      fill[s - 1] = k + 1;
+      gathered[k] = x;
+    }
   }
   for (let s = 0; s < slots; s++) gathered.subarray(start[s], fill[s]).sort();
 

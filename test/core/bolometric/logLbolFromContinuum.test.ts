@@ -23,4 +23,14 @@ describe('logLbolFromContinuum', () => {
   it('rejects a band that does not match a fixed method', () => {
     expect(() => logLbolFromContinuum('bc3000', 45, { band: 'l5100' })).toThrow(/'bc3000' needs l3000, got l5100/);
   });
+
+  it('accepts the matching band or none for a fixed method', () => {
+    // BC3000 = 5.15 (Richards et al. 2006 mean SED as used by Shen et al. 2011, published-checks.md)
+    expectClose(logLbolFromContinuum('bc3000', 45), 45 + Math.log10(5.15), { atol: 1e-12, source: 'Shen et al. 2011 BC3000 = 5.15' });
+    expectClose(logLbolFromContinuum('bc3000', 45, { band: 'l3000' }), 45 + Math.log10(5.15), { atol: 1e-12, source: 'Shen et al. 2011 BC3000 = 5.15' });
+  });
+
+  it('names an unknown method and the known ones', () => {
+    expect(() => logLbolFromContinuum('bc2000' as 'bc3000', 45)).toThrow("unknown continuum bolometric method 'bc2000' (known: bc5100, bc3000, bc1350, netzer19)");
+  });
 });

@@ -44,3 +44,35 @@ describe('Cardelli, Clayton & Mathis 1989 curve', () => {
     expect(() => ccm89K(40000)).toThrow(RangeError);
   });
 });
+
+describe('CCM89 pieces at their edges', () => {
+  // Cardelli, Clayton & Mathis 1989, ApJ 345, 245, evaluated by hand from the printed equations.
+  const uv = (x: number) => {
+    const d = x - 5.9;
+    const fa = d > 0 ? -0.04473 * d ** 2 - 0.009779 * d ** 3 : 0;
+    const fb = d > 0 ? 0.213 * d ** 2 + 0.1207 * d ** 3 : 0;
+    return { a: 1.752 - 0.316 * x - 0.104 / ((x - 4.67) ** 2 + 0.341) + fa, b: -3.09 + 1.825 * x + 1.206 / ((x - 4.62) ** 2 + 0.263) + fb };
+  };
+
+  it('uses the infrared power law (eq. 2) below x = 1.1 µm⁻¹', () => {
+    const p = 0.5 ** 1.61;
+    expectClose(ccm89AB(0.5).a, 0.574 * p, { rtol: 1e-12, source: 'CCM89 eq. 2a' });
+    expectClose(ccm89AB(0.5).b, -0.527 * p, { rtol: 1e-12, source: 'CCM89 eq. 2b' });
+  });
+
+  it('uses the optical polynomial (eq. 3) from x = 1.1 and the ultraviolet form (eq. 4) from x = 3.3 through x = 8', () => {
+    const y = 1.1 - 1.82;
+    const aOpt = 1 + 0.17699 * y - 0.50447 * y ** 2 - 0.02427 * y ** 3 + 0.72085 * y ** 4 + 0.01979 * y ** 5 - 0.7753 * y ** 6 + 0.32999 * y ** 7;
+    expectClose(ccm89AB(1.1).a, aOpt, { rtol: 1e-12, source: 'CCM89 eq. 3a at x = 1.1' });
+    for (const x of [3.3, 8]) {
+      expectClose(ccm89AB(x).a, uv(x).a, { rtol: 1e-12, source: `CCM89 eq. 4a at x = ${x}` });
+      expectClose(ccm89AB(x).b, uv(x).b, { rtol: 1e-12, source: `CCM89 eq. 4b at x = ${x}` });
+    }
+  });
+
+  it('uses the far-ultraviolet cubics (eq. 5) above x = 8', () => {
+    const u = 9 - 8;
+    expectClose(ccm89AB(9).a, -1.073 - 0.628 * u + 0.137 * u ** 2 - 0.07 * u ** 3, { rtol: 1e-12, source: 'CCM89 eq. 5a' });
+    expectClose(ccm89AB(9).b, 13.67 + 4.257 * u - 0.42 * u ** 2 + 0.374 * u ** 3, { rtol: 1e-12, source: 'CCM89 eq. 5b' });
+  });
+});

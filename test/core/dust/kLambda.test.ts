@@ -34,3 +34,15 @@ describe('kLambda and attenuationMag', () => {
     for (const c of Object.values(DUST_CURVES)) expect(c.reference.length).toBeGreaterThan(10);
   });
 });
+
+describe('dust curve ranges and errors', () => {
+  it('accept both ends of the Calzetti et al. 2000 range, 0.12 and 2.20 µm', () => {
+    // Calzetti et al. 2000 eq. 4, evaluated by hand.
+    expectClose(kLambda('calzetti00', 1200), 2.659 * (-2.156 + 1.509 / 0.12 - 0.198 / 0.12 ** 2 + 0.011 / 0.12 ** 3) + 4.05, { rtol: 1e-12, source: 'Calzetti 2000 eq. 4 at 0.12 µm' });
+    expectClose(kLambda('calzetti00', 22000), 2.659 * (-1.857 + 1.04 / 2.2) + 4.05, { rtol: 1e-12, source: 'Calzetti 2000 eq. 4 at 2.20 µm' });
+  });
+
+  it('list the known curves, comma-separated, for an unknown id', () => {
+    expect(() => kLambda('lmc' as DustCurveId, 5000)).toThrow("unknown dust curve 'lmc' (known: calzetti00, ccm89, smc)");
+  });
+});

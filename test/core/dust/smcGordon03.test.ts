@@ -37,3 +37,13 @@ describe('Gordon et al. 2003 SMC-bar curve', () => {
     expectClose(smcGordon03K(4862.68), 3.2718, { atol: 1e-4, source: 'internal regression' });
   });
 });
+
+describe('Gordon et al. 2003 SMC curve at its ultraviolet cut', () => {
+  it('uses the Fitzpatrick & Massa 1990 form from 2700 Å (x = 3.7037 µm⁻¹) on', () => {
+    // FM90 with the Gordon et al. 2003 SMC bar parameters (c1 = −4.959, c2 = 2.264, c3 = 0.389, x0 = 4.6,
+    // γ = 1.0, R_V = 2.74; from memory, as in src/core/dust): k = c1 + c2 x + c3 D(x) + R_V, no far-UV term below 5.9.
+    const x = 1e4 / 2700;
+    const drude = x ** 2 / ((x ** 2 - 4.6 ** 2) ** 2 + x ** 2 * 1.0 ** 2);
+    expectClose(smcGordon03K(2700), -4.959 + 2.264 * x + 0.389 * drude + 2.74, { rtol: 1e-12, source: 'FM90 form, Gordon et al. 2003 SMC bar (from memory)' });
+  });
+});

@@ -70,3 +70,27 @@ describe('Eddington-limited (Salpeter) growth', () => {
     expect(() => salpeterTimeGyr(0, 1)).toThrow(RangeError);
   });
 });
+
+describe('Eddington-limited growth at the edges of its domain', () => {
+  it('lengthens the e-folding time as 1/λ: 100.10 Myr at λ = 0.5', () => {
+    // ε/(1−ε) t_Edd / λ with t_Edd = 0.45049 Gyr (published-checks.md, computed): 0.050054/0.5 Gyr; 2 decimals in Myr.
+    expectClose(salpeterTimeGyr(0.1, 0.5) * 1e3, 100.1, { atol: 0.01, source: 'closed form with published-checks.md t_Edd' });
+  });
+
+  it('gives zero e-folds, and a seed equal to the mass, for zero growth time', () => {
+    expect(eFolds(0, 0.1, 1, 1)).toBe(0);
+    expect(logSeedMassRequired(8, 0, 0.1, 1, 1)).toBe(8);
+  });
+
+  it('needs λ = 0 for a mass equal to the seed even with no time to grow', () => {
+    expect(lambdaRequired(5, 5, 0, 0.1, 1)).toBe(0);
+  });
+
+  it('returns NaN for a missing value in any argument, whatever the others say', () => {
+    // Each case would otherwise reach a defined branch: M ≤ M_seed (0) or Δt = 0 (Infinity).
+    expect(lambdaRequired(NaN, 5, 0, 0.1, 1)).toBeNaN();
+    expect(lambdaRequired(8, NaN, 0, 0.1, 1)).toBeNaN();
+    expect(lambdaRequired(4, 5, NaN, 0.1, 1)).toBeNaN();
+    expect(lambdaRequired(4, 5, 0.3, 0.1, NaN)).toBeNaN();
+  });
+});

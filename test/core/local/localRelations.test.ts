@@ -62,3 +62,18 @@ describe('local black-hole relations', () => {
     for (const rel of Object.values(LOCAL_RELATIONS)) expect(rel.reference).toMatch(/(ApJ|ARA&A) \d+, \d+, eq\. \d+/);
   });
 });
+
+describe('local relation ranges and errors', () => {
+  it('include both edges of the validity range and exclude just beyond either', () => {
+    // Reines & Volonteri 2015 AGN sample range 9.5–12 in log M* (from memory, src/core/local).
+    const rel = getLocalRelation('rv15_agn');
+    expect(inLocalRelationRange(rel, 9.5)).toBe(true);
+    expect(inLocalRelationRange(rel, 12)).toBe(true);
+    expect(inLocalRelationRange(rel, 9.49)).toBe(false);
+    expect(inLocalRelationRange(rel, 12.01)).toBe(false);
+  });
+
+  it('list the known ids, comma-separated, when an id is unknown', () => {
+    expect(() => getLocalRelation('nope')).toThrow('(known: rv15_agn, rv15_early, kh13_mbulge, kh13_sigma)');
+  });
+});

@@ -85,6 +85,7 @@ describe('virial calibrations', () => {
 
   it('name an unknown id in the error', () => {
     expect(() => getCalibration('xx_halpha')).toThrow(/unknown virial calibration 'xx_halpha'/);
+    expect(() => getCalibration('xx_halpha')).toThrow(/\(known: gh05_halpha, rv15_halpha, vp06_hbeta, /);
   });
 
   it('default to a calibration of the same line for every line', () => {

@@ -19,5 +19,7 @@ describe('virialLogMass and inCalibrationRange', () => {
     expect(inCalibrationRange(toy, 43.01, 2000)).toBe(false);
     expect(inCalibrationRange(toy, 42, 900)).toBe(false);
     expect(inCalibrationRange(toy, NaN, 2000)).toBe(false);
+    expect(inCalibrationRange(toy, 40.99, 2000)).toBe(false);
+    expect(inCalibrationRange(toy, 42, 5001)).toBe(false);
   });
 });

@@ -1,0 +1,106 @@
+import { describe, expect, it } from 'vitest';
+import { deriveObject } from '../../../src/core/derive/deriveObject.ts';
+import { DEFAULT_SETTINGS } from '../../../src/core/derive/defaultSettings.ts';
+import type { DeriveSettings, ObjectInputs } from '../../../src/core/derive/types.ts';
+import { createRng } from '../../../src/core/random/createRng.ts';
+import { seedFor } from '../../../src/core/random/seedFor.ts';
+import { expectClose } from '../../helpers/expectClose.ts';
+
+// Tests of the chain's steps that a changed or dropped line would get wrong without any
+// earlier test noticing (each of these survived mutation testing before it was written).
+
+const settings = (over: Partial<DeriveSettings> = {}): DeriveSettings => ({ ...DEFAULT_SETTINGS, ...over });
+const rngFor = (id: string) => createRng(seedFor(DEFAULT_SETTINGS.seed, id));
+const lg = Math.log10;
+
+/** Greene & Ho 2005, ApJ 630, 122, eq. 2: L_Hβ = 1.425e42 (λL5100/1e44)^1.133 erg/s, inverted for λL5100. */
+const gh05Eq2LogL5100 = (logLHbeta: number): number => 44 + (logLHbeta - lg(1.425e42)) / 1.133;
+
+describe('evaluateChain: an Hβ mass without a measured continuum', () => {
+  // The Vestergaard & Peterson 2006 Hβ calibration takes λL5100. With only L(Hβ) measured the
+  // chain estimates λL5100 from Greene & Ho 2005 eq. 2 (coefficients from memory; the same
+  // 1.425e42 and 1.133 are used by independent public AGN codes) before applying it.
+  const vp06 = settings({ calibrations: { ...DEFAULT_SETTINGS.calibrations, hbeta: 'vp06_hbeta' } });
+  const hbetaOnly = (id: string, lum: number, fwhm: number): ObjectInputs => ({
+    id,
+    z: 7,
+    lines: { hbeta: { lumErgS: { value: lum }, fwhmKms: { value: fwhm } } },
+    av: { value: 0 },
+  });
+
+  it('puts λL5100 from Greene & Ho 2005 eq. 2, not L(Hβ) itself, into the Vestergaard & Peterson 2006 equation', () => {
+    const d = deriveObject(hbetaOnly('hb-mass', 1e42, 3000), vp06, rngFor('hb-mass'));
+    const logL5100 = gh05Eq2LogL5100(42); // 43.8642 (closed form)
+    // Vestergaard & Peterson 2006, ApJ 641, 689, eq. 5: log M = 6.91 + 0.5 log(λL5100/1e44) + 2 log(FWHM/1e3)
+    const expected = 6.91 + 0.5 * (logL5100 - 44) + 2 * lg(3);
+    expectClose(d.logMbh!, expected, { atol: 1e-9, source: 'VP06 eq. 5 with GH05 eq. 2 inverted (from memory), closed form' });
+    // Feeding L(Hβ) = 1e42 straight in would give 6.91 + 0.5·(42 − 44) + 2 log 3 = 6.864, 0.93 dex lower.
+    expect(Math.abs(d.logMbh! - (6.91 + 0.5 * (42 - 44) + 2 * lg(3)))).toBeGreaterThan(0.9);
+    expect(d.mbhMethod).toBe('vp06_hbeta');
+    expect(d.flags).toContain('l5100_from_hbeta');
+  });
+
+  it('scales the mass as L(Hβ)^(0.5/1.133): ten times the line luminosity adds 0.4413 dex', () => {
+    const lo = deriveObject(hbetaOnly('hb-lo', 1e42, 2500), vp06, rngFor('hb-lo'));
+    const hi = deriveObject(hbetaOnly('hb-hi', 1e43, 2500), vp06, rngFor('hb-hi'));
+    // VP06 slope 0.5 on λL5100 times 1/1.133 from GH05 eq. 2 (from memory): 0.44131 (closed form)
+    expectClose(hi.logMbh! - lo.logMbh!, 0.5 / 1.133, { atol: 1e-12, source: 'VP06 eq. 5 ∘ GH05 eq. 2 inverted, closed form' });
+  });
+
+  it('checks the calibration range on the estimated λL5100, not on L(Hβ)', () => {
+    // L(Hβ) = 1e42 lies below VP06's λL5100 range [1e42.5, 1e46] (from memory, src/core/virial),
+    // but the estimated λL5100 = 1e43.86 lies inside it.
+    const d = deriveObject(hbetaOnly('hb-range', 1e42, 3000), vp06, rngFor('hb-range'));
+    expect(d.flags).not.toContain('calibration_out_of_range');
+    // L(Hβ) = 1e40 gives λL5100 = 1e42.10: outside, flagged.
+    const faint = deriveObject(hbetaOnly('hb-faint', 1e40, 3000), vp06, rngFor('hb-faint'));
+    expect(faint.flags).toContain('calibration_out_of_range');
+  });
+
+  it('draws the mass around the same estimated λL5100: the median of the draws lies on the nominal mass', () => {
+    const draws = 20000;
+    const d = deriveObject(hbetaOnly('hb-draws', 1e42, 3000), settings({ ...vp06, draws }), rngFor('hb-draws'));
+    // Only the calibration's intrinsic scatter (0.43 dex, VP06, from memory) varies, so the draws are
+    // normal around the nominal mass; the median's standard error is 1.2533 σ/√N = 0.0038 dex; 4 of them.
+    expectClose(d.pct.logMbh!.p50, d.logMbh!, { atol: (4 * 1.2533 * 0.43) / Math.sqrt(draws), source: 'closed form: median of a normal, 4 standard errors' });
+  });
+});
+
+describe('evaluateChain: A_V draws below zero', () => {
+  // Calzetti et al. 2000 (ApJ 533, 682) eq. 4, 0.63–2.20 µm: k(λ) = 2.659(−1.857 + 1.040/λ) + R_V with
+  // R_V = 4.05, at the vacuum Hα wavelength 0.656461 µm (src/core/dust/lineWavelengths): k(Hα) = 3.3259
+  // (computed; shared/reference/published-checks.md gives 3.3259).
+  const kHa = 2.659 * (-1.857 + 1.04 / 0.656461) + 4.05;
+  const rv = 4.05;
+  /** GH05 eq. 1 (L_Hα = 5.25e42 (λL5100/1e44)^1.157) inverted, times BC5100 = 10.33 (Richards et al. 2006). */
+  const logLbolFromLogLHa = (logLHa: number): number => 44 + (logLHa - lg(5.25e42)) / 1.157 + lg(10.33);
+
+  it('takes a negative central A_V as no attenuation, never as a brightening', () => {
+    const d = deriveObject({ id: 'neg-av', z: 5, lines: { halpha: { lumErgS: { value: 1e43 }, fwhmKms: { value: 2000 } } }, av: { value: -0.3 } }, settings(), rngFor('neg-av'));
+    expectClose(d.logLum.halpha!, 43, { atol: 1e-12, source: 'closed form: A_V clipped at 0 leaves L unchanged' });
+  });
+
+  it('clips the A_V draws at zero: with A_V = 0 ± 1 the 16th percentile of L_bol is the unattenuated value and the 84th follows A_V = 0.9945', () => {
+    const draws = 20000;
+    const inputs: ObjectInputs = {
+      id: 'av-clip',
+      z: 5,
+      lines: { halpha: { lumErgS: { value: 1e43 }, fwhmKms: { value: 2000 } } },
+      av: { value: 0, errLo: 1, errHi: 1 },
+    };
+    const d = deriveObject(inputs, settings({ draws }), rngFor('av-clip'));
+    const unattenuated = logLbolFromLogLHa(43);
+    expectClose(d.logLbol!, unattenuated, { atol: 1e-9, source: 'GH05 eq. 1 inverted × 10.33, closed form' });
+    // Half of the draws of A_V ~ N(0, 1) are below 0 and clip to 0, so the lower 50 % of L_bol sits
+    // exactly at the unattenuated value.
+    expectClose(d.pct.logLbol!.p16, unattenuated, { atol: 1e-9, source: 'closed form: P(A_V ≤ 0) = 0.5 > 0.16' });
+    // The 84th percentile of max(0, A_V) is the normal quantile Φ⁻¹(0.84) = 0.994458 (closed form).
+    // Its standard error at N = 2e4 is sqrt(0.16·0.84/N)/φ(0.9945) = 0.0107 mag; 4 of them, times the
+    // slope 0.4 k(Hα)/R_V/1.157 = 0.284 dex per mag.
+    const dexPerMag = (0.4 * kHa) / rv / 1.157;
+    expectClose(d.pct.logLbol!.p84, logLbolFromLogLHa(43 + (0.4 * kHa * 0.994458) / rv), {
+      atol: 4 * 0.0107 * dexPerMag,
+      source: 'closed form: Calzetti 2000 k(Hα), normal 84th percentile, 4 standard errors',
+    });
+  });
+});
