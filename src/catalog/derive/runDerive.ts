@@ -5,6 +5,8 @@ import type { CensusConfig } from '../config/CensusConfig.ts';
 import { displayPath } from '../config/loadConfig.ts';
 import { catalogMetadataJson, buildCatalogMetadata } from '../metadata/buildCatalogMetadata.ts';
 import { METADATA_KEY } from '../metadata/catalogMetadata.ts';
+import { parquetStandardKeys } from '../publish/parquetStandardKeys.ts';
+import { tableDocOf } from '../publish/tableDoc.ts';
 import { sha256File } from '../metadata/sha256.ts';
 import { settingsProvenance } from '../metadata/settingsProvenance.ts';
 import { normalizeChunk } from '../normalize/normalizeChunk.ts';
@@ -212,7 +214,7 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
       columns,
       inputColumns: plan.canonical,
     });
-    await writer.finish({ [METADATA_KEY]: catalogMetadataJson(metadata) });
+    await writer.finish({ [METADATA_KEY]: catalogMetadataJson(metadata), ...parquetStandardKeys(tableDocOf(metadata)) });
     writer = null;
     await writeFile(metaTemp, `${JSON.stringify(metadata, null, 2)}\n`);
     await staged.commit();
