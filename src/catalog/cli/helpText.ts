@@ -28,6 +28,9 @@ Options:
       --draws <n>       Monte Carlo draws per object (overrides the config)
       --seed <n>        global random seed (overrides the config)
       --threads <n>     worker threads (default: one per core)
+      --format <f>      also write the catalog as ecsv, votable or fits beside the Parquet
+                        file (<name>.ecsv, <name>.vot, <name>.fits); repeatable; adds to the
+                        config's output.formats
   -q, --quiet           print errors only: no progress, row problems or summary
   -h, --help            this help
 

@@ -7,6 +7,7 @@ import { catalogMetadataJson, buildCatalogMetadata } from '../metadata/buildCata
 import { METADATA_KEY } from '../metadata/catalogMetadata.ts';
 import { parquetStandardKeys } from '../publish/parquetStandardKeys.ts';
 import { tableDocOf } from '../publish/tableDoc.ts';
+import { exportCatalog, exportPath } from '../publish/exportCatalog.ts';
 import { sha256File } from '../metadata/sha256.ts';
 import { settingsProvenance } from '../metadata/settingsProvenance.ts';
 import { normalizeChunk } from '../normalize/normalizeChunk.ts';
@@ -118,7 +119,7 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
     source = src;
     const plan = planColumns(src, opts.config);
     const provenance = settingsProvenance(settings);
-    const columns = buildOutputColumns(plan, provenance);
+    const columns = buildOutputColumns(plan, provenance, opts.config.passthrough);
     const inputHash = sha256File(opts.catalogPath);
     inputHash.catch(() => undefined);
 
@@ -214,8 +215,12 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
       columns,
       inputColumns: plan.canonical,
     });
-    await writer.finish({ [METADATA_KEY]: catalogMetadataJson(metadata), ...parquetStandardKeys(tableDocOf(metadata)) });
+    const doc = tableDocOf(metadata);
+    await writer.finish({ [METADATA_KEY]: catalogMetadataJson(metadata), ...parquetStandardKeys(doc) });
     writer = null;
+    // ECSV, VOTable and FITS copies, staged with the rest so that all files are replaced together.
+    const exports = (opts.config.outputFormats ?? []).map((format) => ({ format, path: staged.stage(exportPath(paths.catalog, format)) }));
+    await exportCatalog(parquetTemp, doc, exports);
     await writeFile(metaTemp, `${JSON.stringify(metadata, null, 2)}\n`);
     await staged.commit();
     return {

@@ -20,7 +20,8 @@ export function tableDocOf(m: CatalogMetadata, name = 'dawn_census'): TableDoc {
   put('group', m.group);
   put('licence', m.licence);
   put('citation', m.citation);
-  const pub = (m as { publication?: { version?: string; doi?: string } }).publication;
+  const pub = m.publication;
+  put('authors', pub?.authors.map((a) => a.name + (a.orcid ? ` (ORCID ${a.orcid})` : '')).join('; '));
   put('catalog_version', pub?.version);
   put('doi', pub?.doi);
   put('tool', `${m.tool.name} ${m.tool.version}`);
