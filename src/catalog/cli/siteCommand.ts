@@ -1,6 +1,4 @@
-import { execFile } from 'node:child_process';
 import { existsSync } from 'node:fs';
-import { createRequire } from 'node:module';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { loadConfig } from '../config/loadConfig.ts';
@@ -69,19 +67,21 @@ export async function siteBuild(args: SiteArgs, log: TextOut): Promise<{ out: st
   if (!existsSync(catalog)) throw new ConfigError(`${label}: the catalog ${catalog} does not exist yet: run dawn-census derive -c ${args.config} first`);
   const out = path.resolve(args.out);
   const base = normalBase(config.site.base);
-  const astro = createRequire(path.join(PACKAGE_ROOT, 'package.json')).resolve('astro/astro.js');
-  await new Promise<void>((resolve, reject) => {
-    const child = execFile(
-      process.execPath,
-      [astro, 'build', '--silent', '--root', PACKAGE_ROOT],
-      { cwd: PACKAGE_ROOT, env: { ...process.env, CENSUS_CATALOG: catalog, CENSUS_BASE: base, CENSUS_OUT_DIR: out }, maxBuffer: 64 * 1024 * 1024 },
-      (error, _stdout, stderr) => {
-        if (error) reject(new Error(`the site build failed: ${(stderr.trim().split('\n').pop() ?? error.message).trim()}`));
-        else resolve();
-      },
-    );
-    child.stderr?.on('data', (d: Buffer | string) => log.write(String(d)));
-  });
+  // Astro's build reads the catalog, base and output folder from these (see astro.config.mjs).
+  const saved = { CENSUS_CATALOG: process.env.CENSUS_CATALOG, CENSUS_BASE: process.env.CENSUS_BASE, CENSUS_OUT_DIR: process.env.CENSUS_OUT_DIR };
+  Object.assign(process.env, { CENSUS_CATALOG: catalog, CENSUS_BASE: base, CENSUS_OUT_DIR: out });
+  try {
+    const { build } = await import('astro');
+    await build({ root: PACKAGE_ROOT, logLevel: 'warn' });
+  } catch (e) {
+    throw new Error(`the site build failed: ${(e as Error).message.split('\n')[0]}`);
+  } finally {
+    for (const [k, v] of Object.entries(saved)) {
+      if (v === undefined) delete process.env[k];
+      else process.env[k] = v;
+    }
+  }
+  log.write('');
   return { out, base };
 }
 

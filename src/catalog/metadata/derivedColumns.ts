@@ -78,7 +78,8 @@ export const DERIVED_TAIL: readonly DerivedColumnSpec[] = [
   {
     name: 'flags',
     kind: 'string',
-    description: "Comma-separated flags ('' when none), e.g. invalid_input, mbh_upper_limit, no_host_mass, calibration_out_of_range, no_dust_correction",
+    // No quote characters: astropy 5.2 misreads a doubled quote in a FITS long-string header (TCOMMn).
+    description: 'Comma-separated flags (empty when none), e.g. invalid_input, mbh_upper_limit, no_host_mass, calibration_out_of_range, no_dust_correction',
     ucd: 'meta.code.qual',
     source: 'flags',
   },

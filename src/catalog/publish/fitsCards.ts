@@ -21,21 +21,21 @@ export function fitsAscii(s: string): string {
  * (value ending in '&', continued on CONTINUE cards; FITS 4.0 §4.2.1.2), which astropy reads.
  */
 export function stringCards(key: string, value: string): string[] {
-  const text = fitsAscii(value).replaceAll("'", "''");
-  const first = 67; // 80 − "KEYWORD = '" (11) − "&'" (2)
-  const next = 67; // 80 − "CONTINUE  '" (11) − "&'" (2)
-  if (text.length <= 68) return [pad80(`${key.padEnd(8)}= '${text.padEnd(8)}'`)];
+  const plain = fitsAscii(value);
+  const quoted = (t: string): string => t.replaceAll("'", "''");
+  if (quoted(plain).length <= 68) return [pad80(`${key.padEnd(8)}= '${quoted(plain).padEnd(8)}'`)];
+  // 67 characters fit between "KEYWORD = '" or "CONTINUE  '" (11) and "&'" (2); a quote counts twice.
   const pieces: string[] = [];
-  let rest = text;
-  let size = first;
-  while (rest.length > 0) {
-    let cut = Math.min(size, rest.length);
-    // Never split a doubled quote between two cards.
-    if (rest[cut - 1] === "'" && rest[cut] === "'") cut--;
-    pieces.push(rest.slice(0, cut));
-    rest = rest.slice(cut);
-    size = next;
+  let piece = '';
+  for (const c of plain) {
+    const q = quoted(c);
+    if (piece.length + q.length > 67) {
+      pieces.push(piece);
+      piece = '';
+    }
+    piece += q;
   }
+  pieces.push(piece);
   return pieces.map((p, i) => {
     const more = i < pieces.length - 1 ? '&' : '';
     return pad80(i === 0 ? `${key.padEnd(8)}= '${p}${more}'` : `CONTINUE  '${p}${more}'`);
