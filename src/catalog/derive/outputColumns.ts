@@ -81,6 +81,11 @@ export function buildOutputColumns(
       } satisfies OutputColumn;
     });
   // The config's declarations (passthrough: in census.config.yaml) win over the file's own metadata.
+  for (const name of Object.keys(declared)) {
+    if (!plan.passthrough.some((p) => p.name === name)) {
+      throw new CatalogError(`${plan.label}: the config declares passthrough.${name}, but the file has no such pass-through column`);
+    }
+  }
   const passthrough: OutputColumn[] = plan.passthrough.map((p, i) => {
     const d = declared[p.name] ?? {};
     const unit = d.unit ?? p.info.unit;
