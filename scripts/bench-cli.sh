@@ -18,6 +18,9 @@ echo "load average: $(cut -d' ' -f1-3 /proc/loadavg); cores: $(nproc)"
 help=$(for i in 1 2 3 4 5 6 7; do secs node "$root/bin/dawn-census.js" --help; done | median)
 bare=$(for i in 1 2 3 4 5 6 7; do secs node -e ''; done | median)
 printf 'dawn-census --help: %.3f s (median of 7); node -e "" alone: %.3f s\n' "$help" "$bare"
+# CPU seconds (user + system) depend less on other load than wall time does.
+cpu() { /usr/bin/time -f '%U %S' "$@" 2>&1 >/dev/null | tail -1 | awk '{print $1 + $2}'; }
+printf 'CPU seconds: --help %s; node -e "" %s\n' "$(for i in 1 2 3 4 5; do cpu node "$root/bin/dawn-census.js" --help; done | median)" "$(for i in 1 2 3 4 5; do cpu node -e ''; done | median)"
 
 /usr/bin/python3 "$bench/make_synthetic.py" "$rows" "$work/syn.csv" >/dev/null
 for round in 1 2; do
