@@ -9,6 +9,7 @@ export default defineConfig({
         test: {
           name: 'unit',
           include: ['test/core/**/*.test.ts', 'test/catalog/**/*.test.ts', 'test/site/**/*.test.ts', 'test/shared/**/*.test.ts', 'test/scripts/**/*.test.ts'],
+          globalSetup: ['test/buildCliSetup.ts'],
           testTimeout: 60_000,
         },
       },
@@ -16,7 +17,7 @@ export default defineConfig({
         test: {
           name: 'e2e',
           include: ['test/e2e/**/*.test.ts'],
-          globalSetup: ['test/e2e/globalSetup.ts'],
+          globalSetup: ['test/buildCliSetup.ts', 'test/e2e/globalSetup.ts'],
           testTimeout: 120_000,
           hookTimeout: 600_000,
           fileParallelism: false,

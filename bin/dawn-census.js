@@ -1,8 +1,17 @@
 #!/usr/bin/env node
-// Entry of the `dawn-census` command. The sources are TypeScript; tsx (a runtime dependency)
-// compiles them on load, so the command works right after `npm ci` with no build step.
-import { register } from 'tsx/esm/api';
+// Entry of the `dawn-census` command. It runs the compiled JavaScript in lib/ (built by
+// `npm run build:cli`, which `npm ci` and `npm pack` run through `prepare`). In a development
+// checkout without lib/, or with DAWN_CENSUS_FROM_SOURCE=1, it runs the TypeScript sources
+// through tsx (a development dependency).
+import { existsSync } from 'node:fs';
 
-register();
-const { main } = await import('../src/catalog/cli/main.ts');
+const compiled = new URL('../lib/catalog/cli/main.js', import.meta.url);
+let main;
+if (process.env.DAWN_CENSUS_FROM_SOURCE !== '1' && existsSync(compiled)) {
+  ({ main } = await import(compiled.href));
+} else {
+  const { register } = await import('tsx/esm/api');
+  register();
+  ({ main } = await import('../src/catalog/cli/main.ts'));
+}
 process.exitCode = await main(process.argv.slice(2));

@@ -45,7 +45,14 @@ describe('landing page', () => {
     expect(new TextDecoder().decode(bytes.slice(0, 4))).toBe('PAR1');
     const csv = await (await fetch(new URL('data/catalog.csv', base))).text();
     const [count] = await nodeQuery(inject('demoParquet'), 'SELECT count(*) AS n FROM census');
-    expect(csv.trim().split('\n').length - 1).toBe(count!.n);
-    expect(csv.split('\n')[0]).toMatch(/^id,/);
+    const lines = csv.trim().split('\n');
+    const body = lines.filter((l) => !l.startsWith('#'));
+    expect(body.length - 1).toBe(count!.n);
+    expect(body[0]).toMatch(/^id,/);
+    // The commented header gives units: log_mbh in dex(solMass).
+    expect(lines.find((l) => l.startsWith('# log_mbh '))).toMatch(/^# log_mbh \[dex\(solMass\)\] \(phys\.mass\): /);
+    for (const f of ['catalog.ecsv', 'catalog.vot', 'catalog.fits', 'catalog.rejections.csv', '../CITATION.cff']) {
+      expect((await fetch(new URL(`data/${f}`, base))).status, f).toBe(200);
+    }
   });
 });

@@ -43,6 +43,8 @@ export async function resolveDerivePlan(args: DeriveArgs): Promise<DerivePlan> {
     ...(args.draws !== undefined ? { draws: args.draws } : {}),
     ...(args.seed !== undefined ? { seed: args.seed } : {}),
   });
+  // --format adds to the config's output.formats.
+  if (args.formats) config.outputFormats = [...new Set([...(config.outputFormats ?? []), ...args.formats])];
   const fromConfig = config.input?.path;
   const catalogAbs = args.catalog !== undefined ? path.resolve(args.catalog) : fromConfig;
   if (catalogAbs === undefined) {

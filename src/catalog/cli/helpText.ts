@@ -3,6 +3,8 @@ export const MAIN_HELP = `dawn-census — derive black-hole properties for a cat
 
 Usage:
   dawn-census derive <catalog> [options]   derive a catalog into Parquet with provenance
+  dawn-census site build -c <config> [--out <dir>]   build the static site of a derived catalog
+  dawn-census site preview [-c <config>] [--out <dir>] [--port <n>]   serve a built site locally
   dawn-census --help | -h                  this help
   dawn-census --version | -V               the version
 
@@ -31,6 +33,9 @@ Options:
                         config's output points outside the config's folder, and allow
                         more threads than cores. Never writes over the catalog itself,
                         a folder, or a device, FIFO or file in /dev, /proc or /sys.
+      --format <f>      also write the catalog as ecsv, votable or fits beside the Parquet
+                        file (<name>.ecsv, <name>.vot, <name>.fits); repeatable; adds to the
+                        config's output.formats
   -q, --quiet           print errors only: no progress, row problems or summary
   -h, --help            this help
 
@@ -45,4 +50,17 @@ Rows with problems stay in the output, flagged "invalid_input" with empty derive
 Exit status: 0 done; 1 unexpected failure; 2 the catalog or config cannot be used as a
 whole or changed while it was read (nothing written); 64 wrong command line or an output
 that may not be written; 130 interrupted by Ctrl-C, 143 stopped by SIGTERM (nothing written).
+`;
+
+/** `dawn-census site --help`. */
+export const SITE_HELP = `Usage: dawn-census site build -c census.config.yaml [--out dist]
+       dawn-census site preview [-c census.config.yaml] [--out dist] [--port 4321]
+
+build    builds the static site for the catalog the config derives (its output, else
+         <input name>.census.parquet beside the input) into --out (default dist), for the
+         base path in the config's site.base. Run dawn-census derive first.
+preview  serves the built folder at that base path, with HTTP range requests, until Ctrl-C.
+
+Publish the folder on any static host that answers HTTP range requests (the query page reads
+the Parquet file in pieces).
 `;

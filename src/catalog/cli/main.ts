@@ -3,10 +3,9 @@ import { toolVersion } from '../metadata/toolVersion.ts';
 import { CatalogError } from '../readers/CatalogError.ts';
 import { processIo } from './cliIo.ts';
 import type { CliIo } from './cliIo.ts';
-import { deriveCommand } from './deriveCommand.ts';
 import type { DeriveRunOptions } from '../derive/runDerive.ts';
 import { EXIT } from './exitCodes.ts';
-import { DERIVE_HELP, MAIN_HELP } from './helpText.ts';
+import { DERIVE_HELP, MAIN_HELP, SITE_HELP } from './helpText.ts';
 import { parseDeriveArgs } from './parseDeriveArgs.ts';
 import { UsageError } from './UsageError.ts';
 import { OutputRefused } from '../outputs/OutputRefused.ts';
@@ -36,6 +35,7 @@ export async function main(argv: readonly string[], io: CliIo = processIo(), opt
       io.stdout.write(`dawn-census ${toolVersion()}\n`);
       return EXIT.ok;
     }
+    if (command === 'site') return await siteMain(rest, io);
     if (command !== 'derive') throw new UsageError(`unknown command "${command}" (see dawn-census --help)`);
     const args = parseDeriveArgs(rest);
     if (args.help) {
@@ -49,6 +49,8 @@ export async function main(argv: readonly string[], io: CliIo = processIo(), opt
     process.once('SIGINT', onSigint);
     process.once('SIGTERM', onSigterm);
     try {
+      // Loaded here, not at start-up: it pulls in DuckDB's native module, which --help does not need.
+      const { deriveCommand } = await import('./deriveCommand.ts');
       await deriveCommand(args, io.stderr, { ...options, signal: interrupt.signal });
     } finally {
       process.off('SIGINT', onSigint);
@@ -58,6 +60,25 @@ export async function main(argv: readonly string[], io: CliIo = processIo(), opt
   } catch (error) {
     return reportError(error, io);
   }
+}
+
+/** `dawn-census site build|preview`: the site module (and Astro) load only when asked for. */
+async function siteMain(argv: readonly string[], io: CliIo): Promise<number> {
+  const { parseSiteArgs, siteBuild, sitePreview } = await import('./siteCommand.ts');
+  const args = parseSiteArgs(argv);
+  if (args.help) {
+    io.stdout.write(SITE_HELP);
+    return EXIT.ok;
+  }
+  if (args.action === 'build') {
+    const { out, base } = await siteBuild(args, io.stderr);
+    io.stderr.write(`Built the site into ${out} for the base path ${base}\n`);
+    return EXIT.ok;
+  }
+  const server = await sitePreview(args, io.stderr);
+  await new Promise<void>((resolve) => process.once('SIGINT', resolve));
+  await server.close();
+  return EXIT.ok;
 }
 
 /** The run was stopped by Ctrl-C (SIGINT) or SIGTERM. */

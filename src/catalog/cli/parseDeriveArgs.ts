@@ -1,3 +1,4 @@
+import { EXPORT_FORMATS, type ExportFormat } from '../config/publicationConfig.ts';
 import { UsageError } from './UsageError.ts';
 
 /** The `derive` command line, parsed. */
@@ -14,6 +15,8 @@ export interface DeriveArgs {
   seed?: number;
   /** `--threads`: worker threads (default: every core). */
   threads?: number;
+  /** `--format ecsv|votable|fits` (repeatable): further formats written beside the Parquet file. */
+  formats?: ExportFormat[];
   /** `--quiet`: no progress, problem lines or summary; errors only. */
   quiet: boolean;
   /** `--force`: replace outputs not written by this tool, allow a config output outside its folder and more threads than cores. */
@@ -79,6 +82,13 @@ export function parseDeriveArgs(argv: readonly string[]): DeriveArgs {
     if (flag) {
       if (eq > 0) throw new UsageError(`${name} takes no value`);
       out[flag] = true;
+      continue;
+    }
+    if (name === '--format') {
+      const value = eq > 0 ? arg.slice(eq + 1) : argv[++i];
+      if (value === undefined || value === '' || value.startsWith('-')) throw new UsageError('--format needs a value (ecsv, votable or fits)');
+      if (!(EXPORT_FORMATS as readonly string[]).includes(value)) throw new UsageError(`--format must be one of ${EXPORT_FORMATS.join(', ')}, got "${value}"`);
+      out.formats = [...new Set([...(out.formats ?? []), value as ExportFormat])];
       continue;
     }
     const key = VALUE_OPTIONS[name];

@@ -1,6 +1,7 @@
 import type { DeriveSettings } from '../../core/derive/types.ts';
 import type { TableFormat } from '../readers/types.ts';
 import type { ReadingsConfig } from './readingsConfig.ts';
+import type { ExportFormat, PassthroughDeclaration, Publication } from './publicationConfig.ts';
 
 /** How one canonical column is read from the catalog file. */
 export interface ColumnMapping {
@@ -36,6 +37,12 @@ export interface CensusConfig {
   implausibleMediansIntended?: boolean;
   /** Where the Parquet catalog is written: absolute path. */
   output?: string;
+  /** Further formats written beside the Parquet catalog (`output.formats`, `--format`). */
+  outputFormats?: ExportFormat[];
+  /** Authors (with ORCID iDs), the catalog's version and DOI (`authors`, `version`, `doi`). */
+  publication?: Publication;
+  /** Unit, UCD and description declared for columns copied unchanged from the input, by file column name. */
+  passthrough?: Record<string, PassthroughDeclaration>;
   /** Site options; `base` starts and ends with '/'. */
   site: { base: string };
   /** Absolute path of the config file, when read from one. */

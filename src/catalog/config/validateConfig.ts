@@ -17,13 +17,24 @@ import {
 } from './knownIds.ts';
 import { checkUnit } from './checkUnit.ts';
 import { validateReadingsConfig } from './readingsConfig.ts';
+import {
+  EXPORT_FORMATS,
+  normalizeDoi,
+  normalizeOrcid,
+  ucdProblem,
+  unitProblem,
+  type CatalogAuthor,
+  type ExportFormat,
+  type PassthroughDeclaration,
+  type Publication,
+} from './publicationConfig.ts';
 
 /** Top-level keys of a census config. */
 export const CONFIG_KEYS = [
   'title', 'group', 'description', 'licence', 'citation', 'input', 'columns', 'cosmology', 'calibrations',
   'bolometric', 'bc5100', 'eddington_per_msun', 'efficiency', 'z_seed', 'lambda_seed', 'duty_cycle', 'seeds',
   'local_relation', 'dust_curve', 'intrinsic_balmer', 'line_priority', 'draws', 'seed', 'output', 'site', 'readings',
-  'hbeta_without_continuum', 'implausible_medians_intended',
+  'hbeta_without_continuum', 'implausible_medians_intended', 'authors', 'version', 'doi', 'passthrough',
 ] as const;
 
 /** Largest number of Monte Carlo draws per object. */
@@ -206,9 +217,77 @@ export function validateConfig(doc: unknown, label: string, baseDir: string): Ce
   if (has('seed')) s.seed = num('seed', doc.seed, NUMBER_RULES.seed);
 
   if (has('output')) {
-    const o = str('output', doc.output, 'a file name (relative to the config file)');
-    if (o.trim() === '') fail('output is empty');
-    cfg.output = path(o);
+    let out = doc.output;
+    if (typeof out === 'string') out = { path: out };
+    if (!isObj(out)) fail(`output must be a file name or a mapping with path and formats, got ${describeValue(out)}`);
+    const o = out as Obj;
+    checkKeys(o, ['path', 'formats'], 'output.');
+    if (o.path !== undefined && o.path !== null) {
+      const p = str('output.path', o.path, 'a file name (relative to the config file)');
+      if (p.trim() === '') fail('output is empty');
+      cfg.output = path(p);
+    }
+    if (o.formats !== undefined && o.formats !== null) {
+      const list = Array.isArray(o.formats) ? o.formats : [o.formats];
+      cfg.outputFormats = [...new Set(list.map((f, i) => oneOf<ExportFormat>(`output.formats[${i}]`, f, EXPORT_FORMATS, 'format')))];
+    }
+  }
+
+  if (has('authors') || has('version') || has('doi')) {
+    const pub: Publication = { authors: [] };
+    if (has('authors')) {
+      if (!Array.isArray(doc.authors)) fail(`authors must be a list of names or mappings with name and orcid, got ${describeValue(doc.authors)}`);
+      for (const [i, a] of (doc.authors as unknown[]).entries()) {
+        const key = `authors[${i}]`;
+        const entry = typeof a === 'string' ? { name: a } : a;
+        if (!isObj(entry)) fail(`${key} must be a name or a mapping with name and orcid, got ${describeValue(a)}`);
+        const e = entry as Obj;
+        checkKeys(e, ['name', 'orcid', 'affiliation'], `${key}.`);
+        const name = str(`${key}.name`, e.name, 'the author\'s name');
+        if (name.trim() === '') fail(`${key}.name is empty`);
+        const author: CatalogAuthor = { name: name.trim() };
+        if (e.orcid !== undefined && e.orcid !== null) {
+          const o = str(`${key}.orcid`, e.orcid);
+          const id = normalizeOrcid(o);
+          if (!id) fail(`${key}.orcid ${describeValue(o)} is not an ORCID iD (0000-0002-1825-0097 form, with a valid check character)`);
+          author.orcid = id as string;
+        }
+        if (e.affiliation !== undefined && e.affiliation !== null) author.affiliation = str(`${key}.affiliation`, e.affiliation);
+        pub.authors.push(author);
+      }
+    }
+    if (has('version')) pub.version = String(typeof doc.version === 'number' ? doc.version : str('version', doc.version));
+    if (has('doi')) {
+      const d = str('doi', doc.doi);
+      const doi = normalizeDoi(d);
+      if (!doi) fail(`doi ${describeValue(d)} is not a DOI (10.<registrant>/<suffix>, e.g. 10.5281/zenodo.1234567)`);
+      pub.doi = doi as string;
+    }
+    cfg.publication = pub;
+  }
+
+  if (has('passthrough')) {
+    if (!isObj(doc.passthrough)) fail(`passthrough must be a mapping of file column names to unit, ucd and description, got ${describeValue(doc.passthrough)}`);
+    const decl: Record<string, PassthroughDeclaration> = {};
+    for (const [name, raw] of Object.entries(doc.passthrough as Obj)) {
+      if (!isObj(raw)) fail(`passthrough.${name} must be a mapping with unit, ucd and/or description, got ${describeValue(raw)}`);
+      const r = raw as Obj;
+      checkKeys(r, ['unit', 'ucd', 'description'], `passthrough.${name}.`);
+      const d: PassthroughDeclaration = {};
+      if (r.unit !== undefined && r.unit !== null) {
+        d.unit = str(`passthrough.${name}.unit`, r.unit);
+        const why = unitProblem(d.unit);
+        if (why) fail(`passthrough.${name}.unit: ${why}`);
+      }
+      if (r.ucd !== undefined && r.ucd !== null) {
+        d.ucd = str(`passthrough.${name}.ucd`, r.ucd);
+        const why = ucdProblem(d.ucd);
+        if (why) fail(`passthrough.${name}.ucd: ${why}`);
+      }
+      if (r.description !== undefined && r.description !== null) d.description = str(`passthrough.${name}.description`, r.description);
+      decl[name] = d;
+    }
+    cfg.passthrough = decl;
   }
 
   if (has('readings')) cfg.readings = validateReadingsConfig(doc.readings, fail);

@@ -12,4 +12,8 @@ export interface BatchDeriver {
 }
 
 /** URL of the real deriveObject module, the default of every deriver. */
-export const DEFAULT_DERIVE_MODULE: string = new URL('../../core/derive/deriveObject.ts', import.meta.url).href;
+export const DEFAULT_DERIVE_MODULE: string = new URL(
+  // Compiled into lib/ this file is .js and so is its neighbour.
+  import.meta.url.endsWith('.js') ? '../../core/derive/deriveObject.js' : '../../core/derive/deriveObject.ts',
+  import.meta.url,
+).href;

@@ -1,6 +1,7 @@
 import type { LineId } from '../../core/derive/types.ts';
 import { LINES } from '../../core/derive/types.ts';
 import type { ColumnPlan } from '../normalize/ColumnPlan.ts';
+import type { PassthroughDeclaration } from '../config/publicationConfig.ts';
 import { CatalogError } from '../readers/CatalogError.ts';
 import type { ColumnDoc } from '../metadata/columnDoc.ts';
 import { derivedColumnSpecs } from '../metadata/derivedColumns.ts';
@@ -56,7 +57,11 @@ function derivedColumn(spec: DerivedColumnSpec, provenance: SettingsProvenance |
  * (compared without case, as DuckDB and most readers do). With `provenance`, each derived
  * column carries the reference it rests on under those settings.
  */
-export function buildOutputColumns(plan: ColumnPlan, provenance?: SettingsProvenance): OutputColumn[] {
+export function buildOutputColumns(
+  plan: ColumnPlan,
+  provenance?: SettingsProvenance,
+  declared: Readonly<Record<string, PassthroughDeclaration>> = {},
+): OutputColumn[] {
   const key: OutputColumn[] = [
     { name: 'id', kind: 'string', group: 'key', description: 'Object identifier, unique in the catalog', ucd: 'meta.id;meta.main', value: (c) => c.row.id },
     { name: 'row', kind: 'int', group: 'key', description: 'Data row number in the input file (1-based)', ucd: 'meta.record', value: (c) => c.row.row },
@@ -76,15 +81,26 @@ export function buildOutputColumns(plan: ColumnPlan, provenance?: SettingsProven
         value: (c: RowContext) => c.row.canonical[name] ?? null,
       } satisfies OutputColumn;
     });
-  const passthrough: OutputColumn[] = plan.passthrough.map((p, i) => ({
-    name: p.name,
-    kind: p.info.kind,
-    group: 'passthrough',
-    ...(p.info.unit ? { unit: p.info.unit } : {}),
-    description: p.info.description ?? 'Copied unchanged from the input catalog',
-    ...(p.info.ucd ? { ucd: p.info.ucd } : {}),
-    value: (c: RowContext) => c.row.passthrough[i] ?? null,
-  }));
+  // The config's declarations (passthrough: in census.config.yaml) win over the file's own metadata.
+  for (const name of Object.keys(declared)) {
+    if (!plan.passthrough.some((p) => p.name === name)) {
+      throw new CatalogError(`${plan.label}: the config declares passthrough.${name}, but the file has no such pass-through column`);
+    }
+  }
+  const passthrough: OutputColumn[] = plan.passthrough.map((p, i) => {
+    const d = declared[p.name] ?? {};
+    const unit = d.unit ?? p.info.unit;
+    const ucd = d.ucd ?? p.info.ucd;
+    return {
+      name: p.name,
+      kind: p.info.kind,
+      group: 'passthrough',
+      ...(unit ? { unit } : {}),
+      description: d.description ?? p.info.description ?? 'Copied unchanged from the input catalog',
+      ...(ucd ? { ucd } : {}),
+      value: (c: RowContext) => c.row.passthrough[i] ?? null,
+    };
+  });
   const lines = linesInPlan(plan);
   const derived = derivedColumnSpecs(lines).map((spec) => derivedColumn(spec, provenance, lines));
 

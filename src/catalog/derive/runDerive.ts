@@ -5,6 +5,9 @@ import type { CensusConfig } from '../config/CensusConfig.ts';
 import { displayPath } from '../config/loadConfig.ts';
 import { catalogMetadataJson, buildCatalogMetadata } from '../metadata/buildCatalogMetadata.ts';
 import { METADATA_KEY } from '../metadata/catalogMetadata.ts';
+import { parquetStandardKeys } from '../publish/parquetStandardKeys.ts';
+import { tableDocOf } from '../publish/tableDoc.ts';
+import { exportCatalog, exportPath } from '../publish/exportCatalog.ts';
 import { sha256File } from '../metadata/sha256.ts';
 import { settingsProvenance } from '../metadata/settingsProvenance.ts';
 import { normalizeChunk } from '../normalize/normalizeChunk.ts';
@@ -143,7 +146,7 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
     source = src;
     const plan = planColumns(src, opts.config);
     const provenance = settingsProvenance(settings);
-    const columns = buildOutputColumns(plan, provenance);
+    const columns = buildOutputColumns(plan, provenance, opts.config.passthrough);
     if (columns.length > MAX_PARQUET_COLUMNS) {
       const n = (x: number): string => x.toLocaleString('en-US');
       throw new CatalogError(
@@ -280,8 +283,12 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
       inputColumns: plan.canonical,
       readings: readingsMeta,
     });
-    await writer.finish({ [METADATA_KEY]: catalogMetadataJson(metadata) });
+    const doc = tableDocOf(metadata);
+    await writer.finish({ [METADATA_KEY]: catalogMetadataJson(metadata), ...parquetStandardKeys(doc) });
     writer = null;
+    // ECSV, VOTable and FITS copies, staged with the rest so that all files are replaced together.
+    const exports = (opts.config.outputFormats ?? []).map((format) => ({ format, path: set.stagedExtra(exportPath(paths.catalog, format)) }));
+    await exportCatalog(set.staged('catalog'), doc, exports);
     await writeFile(set.staged('meta'), `${JSON.stringify(metadata, null, 2)}\n`);
     // Files may have appeared at the output paths during the run: the same rules apply to them.
     await checkOutputTargets(opts.catalogPath, paths, opts.force ?? false);

@@ -52,6 +52,7 @@ export function buildCatalogMetadata(p: CatalogMetadataParts): CatalogMetadata {
     format: METADATA_FORMAT,
     tool: { name: 'dawn-census', version: toolVersion() },
     ...described,
+    ...(config.publication ? { publication: config.publication } : {}),
     input: {
       file: path.basename(p.source.path),
       format: p.source.format,

@@ -1,6 +1,7 @@
 import type { ColumnDoc } from './columnDoc.ts';
 import type { SettingsProvenance } from './settingsProvenance.ts';
 import type { ReadingsMetadata } from '../readings/readingsMetadata.ts';
+import type { Publication } from '../config/publicationConfig.ts';
 
 /** Key of the Parquet key/value metadata entry that holds the catalog metadata (JSON). */
 export const METADATA_KEY = 'dawn_census';
@@ -21,6 +22,8 @@ export interface CatalogMetadata {
   description?: string;
   licence?: string;
   citation?: string;
+  /** Authors (with ORCID iDs), the catalog's own version and its DOI, when the config gives them. */
+  publication?: Publication;
   /**
    * The input catalog: file name (no folder), format, SHA-256 of its bytes, and for each
    * canonical column the file column it was read from and the unit it was read in (from the

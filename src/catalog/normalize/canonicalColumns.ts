@@ -1,5 +1,5 @@
 import { LINES, type LineId } from '../../core/derive/types.ts';
-import { CANONICAL_UNITS, type QuantityKind } from '../../core/units/index.ts';
+import { VO_UNITS, type QuantityKind } from '../../core/units/index.ts';
 
 /** What a canonical column holds: a physical quantity (converted with src/core/units), text or a flag. */
 export type CanonicalKind = QuantityKind | 'text' | 'bool';
@@ -16,7 +16,7 @@ export interface CanonicalColumn {
   /** Canonical name, as used in the config's `columns:` and in the output. */
   name: string;
   kind: CanonicalKind;
-  /** Canonical unit, VOUnits (what values are converted to: the units module's CANONICAL_UNITS); '' where dimensionless, text or a flag. */
+  /** Canonical unit (what values are converted to), spelled in VOUnits as written to output files (the units module's VO_UNITS); '' where dimensionless, text or a flag. */
   unit: string;
   /** The canonical unit as people write it, shown in row messages when the file gives no unit ('km/s', 'erg/s'). */
   unitText: string;
@@ -109,7 +109,7 @@ const continuum = (lam: number): BaseColumn => ({
   measured: true,
 });
 
-/* The measured quantities; error and flag companions are added below. UCDs from the IVOA UCD1+ list (from memory). */
+/* The measured quantities; error and flag companions are added below. UCDs are UCD1+ 1.5 words (checked against src/core/metadata/ucdWords.ts by the tests). */
 const BASE_COLUMNS: readonly BaseColumn[] = [
   { name: 'id', kind: 'text', unitText: '', description: 'Object identifier, unique in the catalog', ucd: 'meta.id;meta.main', limits: [], measured: false },
   { name: 'z', kind: 'dimensionless', unitText: '', description: 'Redshift', ucd: 'src.redshift', limits: between(0, 30, '>'), measured: false },
@@ -117,7 +117,7 @@ const BASE_COLUMNS: readonly BaseColumn[] = [
   continuum(5100),
   continuum(3000),
   continuum(1350),
-  { name: 'mu', kind: 'dimensionless', unitText: '', description: 'Lensing magnification (1 when not lensed)', limits: POSITIVE, measured: true },
+  { name: 'mu', kind: 'dimensionless', unitText: '', description: 'Lensing magnification (1 when not lensed): lensed over intrinsic flux', ucd: 'phot.flux;arith.ratio', limits: POSITIVE, measured: true },
   {
     name: 'log_mstar',
     kind: 'logMass',
@@ -129,7 +129,7 @@ const BASE_COLUMNS: readonly BaseColumn[] = [
   },
   { name: 'sigma_star', kind: 'velocity', unitText: 'km/s', description: 'Stellar velocity dispersion', ucd: 'phys.veloc.dispersion', limits: POSITIVE, measured: true },
   { name: 'av', kind: 'magnitude', unitText: 'mag', description: 'V-band attenuation toward the broad-line region', ucd: 'phys.absorption;em.opt.V', limits: between(0, 10), measured: true },
-  { name: 'balmer_decrement', kind: 'dimensionless', unitText: '', description: 'Observed broad Hα/Hβ flux ratio', ucd: 'arith.ratio;spect.line', limits: POSITIVE, measured: true },
+  { name: 'balmer_decrement', kind: 'dimensionless', unitText: '', description: 'Observed broad Hα/Hβ flux ratio', ucd: 'phot.flux;arith.ratio;spect.line', limits: POSITIVE, measured: true },
 ];
 
 const ERROR_SIDES = [
@@ -138,7 +138,7 @@ const ERROR_SIDES = [
   { suffix: '_err_hi', side: 'hi', what: 'Upper 1σ error' },
 ] as const;
 
-const voUnit = (kind: CanonicalKind): string => (kind === 'text' || kind === 'bool' ? '' : CANONICAL_UNITS[kind]);
+const voUnit = (kind: CanonicalKind): string => (kind === 'text' || kind === 'bool' ? '' : VO_UNITS[kind]);
 
 function expand(base: BaseColumn): CanonicalColumn[] {
   const role = base.name === 'id' ? 'id' : 'value';
@@ -172,7 +172,7 @@ function expand(base: BaseColumn): CanonicalColumn[] {
       unit: '',
       unitText: '',
       description: `True where ${base.name} (or the line luminosity) is an upper limit`,
-      ucd: 'meta.code',
+      ucd: 'meta.code.error',
       role: 'flag',
       of: base.name,
       limits: [],

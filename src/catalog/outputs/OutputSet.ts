@@ -49,6 +49,19 @@ export class OutputSet {
     return path.join(this.folder, STAGED_NAME[role]);
   }
 
+  private readonly extras: { final: string; staged: string; previous: string }[] = [];
+
+  /**
+   * Where to write a further file of the set (an ECSV, VOTable or FITS copy) that goes to `finalPath`
+   * beside the outputs; it is committed with them, before the roles, and rolled back with them.
+   */
+  stagedExtra(finalPath: string): string {
+    const i = this.extras.length;
+    const e = { final: path.resolve(finalPath), staged: `staged.extra-${i}`, previous: `previous.extra-${i}` };
+    this.extras.push(e);
+    return path.join(this.folder, e.staged);
+  }
+
   /** A scratch path inside the folder (removed with it). */
   scratch(name: string): string {
     return path.join(this.folder, `scratch-${name}`);
@@ -62,11 +75,15 @@ export class OutputSet {
       finals[role] = path.resolve(this.paths[role]);
       hadPrevious[role] = (await lstat(finals[role]).catch(() => null)) !== null;
     }
-    const journal: CommitJournal = { format: 'dawn-census-commit/1', finals, hadPrevious };
+    const extras = [];
+    for (const e of this.extras) extras.push({ ...e, hadPrevious: (await lstat(e.final).catch(() => null)) !== null });
+    const journal: CommitJournal = { format: 'dawn-census-commit/1', finals, hadPrevious, extras };
     const journalPath = path.join(this.folder, JOURNAL_NAME);
     await writeFile(`${journalPath}.part`, JSON.stringify(journal));
     await rename(`${journalPath}.part`, journalPath);
     try {
+      for (const e of extras) if (e.hadPrevious) await rename(e.final, path.join(this.folder, e.previous));
+      for (const e of extras) await rename(path.join(this.folder, e.staged), e.final);
       for (const role of PLACE_ORDER) if (hadPrevious[role]) await rename(finals[role], path.join(this.folder, PREVIOUS_NAME[role]));
       for (const role of PLACE_ORDER) await rename(this.staged(role), finals[role]);
       await writeFile(path.join(this.folder, DONE_NAME), '');

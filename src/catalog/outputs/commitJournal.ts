@@ -28,6 +28,11 @@ export interface CommitJournal {
   finals: Record<OutputRole, string>;
   /** Whether each output existed before (and is moved aside to PREVIOUS_NAME). */
   hadPrevious: Record<OutputRole, boolean>;
+  /**
+   * Further files of the set (the ECSV, VOTable and FITS copies), placed before the roles above:
+   * final path, whether it existed, and its staged and previous names inside the folder.
+   */
+  extras?: { final: string; hadPrevious: boolean; staged: string; previous: string }[];
 }
 
 /**
@@ -40,6 +45,11 @@ export async function rollBack(folder: string, journal: CommitJournal): Promise<
     const previous = path.join(folder, PREVIOUS_NAME[role]);
     if (await exists(previous)) await rename(previous, final);
     else if (!journal.hadPrevious[role] && !(await exists(path.join(folder, STAGED_NAME[role])))) await rm(final, { force: true });
+  }
+  for (const extra of [...(journal.extras ?? [])].reverse()) {
+    const previous = path.join(folder, extra.previous);
+    if (await exists(previous)) await rename(previous, extra.final);
+    else if (!extra.hadPrevious && !(await exists(path.join(folder, extra.staged)))) await rm(extra.final, { force: true });
   }
 }
 
@@ -56,6 +66,10 @@ export async function readJournal(folder: string): Promise<CommitJournal | null>
     const home = path.dirname(folder);
     for (const role of PLACE_ORDER) {
       if (typeof j.finals[role] !== 'string' || path.dirname(j.finals[role]) !== home || typeof j.hadPrevious[role] !== 'boolean') return null;
+    }
+    for (const e of j.extras ?? []) {
+      if (typeof e.final !== 'string' || path.dirname(e.final) !== home || typeof e.hadPrevious !== 'boolean') return null;
+      if (!/^(staged|previous)\.extra-\d+$/.test(e.staged) || !/^(staged|previous)\.extra-\d+$/.test(e.previous)) return null;
     }
     return j;
   } catch {

@@ -4,7 +4,7 @@
  * value the build would reject is rejected here with the same reason, and the inputs handed to
  * deriveObject are built the same way. Browser-safe: no file or config access.
  */
-import { unitConverter, UnitError, type QuantityKind } from '../../core/units/index.ts';
+import { CANONICAL_UNITS, unitConverter, UnitError, type QuantityKind } from '../../core/units/index.ts';
 import type { ObjectInputs } from '../../core/derive/types.ts';
 import { CANONICAL_COLUMNS } from '../../catalog/normalize/canonicalColumns.ts';
 import type { ColumnPlan, PlannedColumn } from '../../catalog/normalize/ColumnPlan.ts';
@@ -76,7 +76,7 @@ export function normalizeOne(header: readonly string[], cells: readonly Cell[], 
       kind: def.kind,
       fileKind: 'string',
       def,
-      unitLabel: unitIn ?? def.unit,
+      unitLabel: unitIn ?? (def.kind === 'text' || def.kind === 'bool' ? '' : CANONICAL_UNITS[def.kind]),
       label: def.name,
     });
   }

@@ -12,6 +12,7 @@ import { CHART_COLUMNS, chartRows, drawPopulation } from '../population/populati
 import { attachEditorKeys } from './editorKeys.ts';
 import { DEFAULT_QUERY } from './exampleQueries.ts';
 import { resultCsv } from './resultCsv.ts';
+import { attachResultDownloads, resultCsvWithHeader, type ResultContext } from './resultDownloads.ts';
 import { ResultTable } from './resultTable.ts';
 import { hrefWithSql, sqlFromSearch } from './urlState.ts';
 
@@ -32,6 +33,8 @@ export function startWorkspace(): void {
   const chartNote = $<HTMLElement>('[data-chart-note]');
   const table = new ResultTable($<HTMLElement>('[data-result-table]'), { units, base });
   let last: ResultSet | null = null;
+  let lastSql = '';
+  const context = JSON.parse(root.dataset.resultContext ?? 'null') as ResultContext | null;
   // Each run has a number; a run overtaken by a newer one drops its result.
   let generation = 0;
 
@@ -63,6 +66,7 @@ export function startWorkspace(): void {
       if (my !== generation) return;
       const ms = performance.now() - t0;
       last = rs;
+      lastSql = sql;
       table.setResult(rs);
       csvButton.disabled = false;
       summary.textContent = `${rs.numRows.toLocaleString('en')} ${rs.numRows === 1 ? 'row' : 'rows'}, ${rs.names.length} ${rs.names.length === 1 ? 'column' : 'columns'} · ${ms < 1000 ? `${Math.round(ms)} ms` : `${(ms / 1000).toFixed(1)} s`}`;
@@ -131,7 +135,8 @@ export function startWorkspace(): void {
   });
   csvButton.addEventListener('click', () => {
     if (!last) return;
-    const blob = new Blob([resultCsv(last, table.rowOrder())], { type: 'text/csv;charset=utf-8' });
+    const text = context ? resultCsvWithHeader(last, lastSql, context, table.rowOrder()) : resultCsv(last, table.rowOrder());
+    const blob = new Blob([text], { type: 'text/csv;charset=utf-8' });
     const a = document.createElement('a');
     a.href = URL.createObjectURL(blob);
     a.download = 'census-query.csv';
@@ -140,6 +145,8 @@ export function startWorkspace(): void {
     a.remove();
     setTimeout(() => URL.revokeObjectURL(a.href), 10_000);
   });
+
+  if (context) attachResultDownloads(csvButton, context, () => (last ? { rs: last, sql: lastSql, order: table.rowOrder() } : null));
 
   if (shared) {
     sharedNote.hidden = false;

@@ -49,11 +49,14 @@ export function columnLabel(column: string): string {
   return column;
 }
 
-/** Units as a reader writes them: 'log(solMass)' → 'log M☉', 'erg/s' stays. '' for none. */
+/** Units as a reader writes them: 'dex(solMass)' or 'log(solMass)' → 'log M☉', 'erg.s**-1' → 'erg/s'. '' for none. */
 export function unitText(unit: string | undefined): string {
   if (!unit) return '';
   return unit
-    .replace(/^log\((.*)\)$/, 'log $1')
+    .replace(/^(?:log|dex)\((.*)\)$/, 'log $1')
+    .replace(/erg\.s\*\*-1\.cm\*\*-2/g, 'erg/s/cm²')
+    .replace(/erg\.s\*\*-1/g, 'erg/s')
+    .replace(/km\.s\*\*-1/g, 'km/s')
     .replace(/solMass/g, 'M☉')
     .replace(/^log10 Msun$/, 'log M☉')
     .replace(/Msun/g, 'M☉')

@@ -182,7 +182,7 @@ describe('parseConfig rejects a bad config with one line naming the file and the
     ['input: { path: a.xls, format: xls }', 'census.config.yaml: input.format: unknown format "xls"; known: csv, tsv, ecsv, fits, votable, parquet'],
     ['input: { path: a.csv, comment: "//" }', 'census.config.yaml: input.comment must be one character other than a blank, quote or comma, got "//"'],
     ['input: { path: a.csv, comment: "," }', 'census.config.yaml: input.comment must be one character other than a blank, quote or comma, got ","'],
-    ['output: 3', 'census.config.yaml: output must be a file name (relative to the config file), got 3'],
+    ['output: 3', 'census.config.yaml: output must be a file name or a mapping with path and formats, got 3'],
     ['title: [a, b]', 'census.config.yaml: title must be a string, got a list'],
     ['site: { base: 1 }', 'census.config.yaml: site.base must be a string, got 1'],
     ['columns: { fwhm_ha: { source: FWHM } }', 'census.config.yaml: columns: unknown column "fwhm_ha" (did you mean "fwhm_halpha"?)'],

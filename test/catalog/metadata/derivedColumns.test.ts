@@ -27,9 +27,9 @@ describe('derivedColumnSpecs', () => {
     }
   });
 
-  it('gives a UCD to the median percentile only', () => {
+  it('marks the median percentile with stat.median and the others with stat.percentile', () => {
     const specs = derivedColumnSpecs([]);
     expect(specs.find((c) => c.name === 'log_mbh_p50')?.ucd).toBe('phys.mass;stat.median');
-    expect(specs.find((c) => c.name === 'log_mbh_p16')?.ucd).toBeUndefined();
+    expect(specs.find((c) => c.name === 'log_mbh_p16')?.ucd).toBe('phys.mass;stat.percentile');
   });
 });

@@ -11,6 +11,10 @@ describe('column labels', () => {
   it('writes VOUnits as a reader does', () => {
     expect(unitText('log(solMass)')).toBe('log M☉');
     expect(unitText('log(erg/s)')).toBe('log erg/s');
+    expect(unitText('dex(solMass)')).toBe('log M☉');
+    expect(unitText('dex(erg.s**-1)')).toBe('log erg/s');
+    expect(unitText('erg.s**-1.cm**-2')).toBe('erg/s/cm²');
+    expect(unitText('km.s**-1')).toBe('km/s');
     expect(unitText('')).toBe('');
   });
 });

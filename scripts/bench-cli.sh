@@ -1,0 +1,30 @@
+#!/usr/bin/env bash
+# Benchmarks of the installed-style CLI, side by side in one run (record the figures in the README):
+#  1. `dawn-census --help` start-up (median of 7), beside `node -e ''` on the same machine;
+#  2. deriving a 20,000-object catalog with 1000 draws, beside the numpy + astropy notebook
+#     way in ../shared/bench (same catalog, same draws), alternating the two twice.
+# Needs /usr/bin/python3 with numpy and astropy. Usage: scripts/bench-cli.sh [rows] [draws]
+set -euo pipefail
+root="$(cd "$(dirname "$0")/.." && pwd)"
+bench="$root/../shared/bench"
+rows="${1:-20000}"; draws="${2:-1000}"
+work="$(mktemp -d)"; trap 'rm -rf "$work"' EXIT
+node "$root/scripts/build-cli.mjs" --if-stale
+
+median() { sort -n | awk '{a[NR]=$1} END {print a[int((NR+1)/2)]}'; }
+secs() { local t0 t1; t0=$(date +%s.%N); "$@" >/dev/null 2>&1; t1=$(date +%s.%N); echo "$t1 - $t0" | bc -l; }
+
+echo "load average: $(cut -d' ' -f1-3 /proc/loadavg); cores: $(nproc)"
+help=$(for i in 1 2 3 4 5 6 7; do secs node "$root/bin/dawn-census.js" --help; done | median)
+bare=$(for i in 1 2 3 4 5 6 7; do secs node -e ''; done | median)
+printf 'dawn-census --help: %.3f s (median of 7); node -e "" alone: %.3f s\n' "$help" "$bare"
+# CPU seconds (user + system) depend less on other load than wall time does.
+cpu() { /usr/bin/time -f '%U %S' "$@" 2>&1 >/dev/null | tail -1 | awk '{print $1 + $2}'; }
+printf 'CPU seconds: --help %s; node -e "" %s\n' "$(for i in 1 2 3 4 5; do cpu node "$root/bin/dawn-census.js" --help; done | median)" "$(for i in 1 2 3 4 5; do cpu node -e ''; done | median)"
+
+/usr/bin/python3 "$bench/make_synthetic.py" "$rows" "$work/syn.csv" >/dev/null
+for round in 1 2; do
+  d=$(secs node "$root/bin/dawn-census.js" derive "$work/syn.csv" -o "$work/syn.parquet" --draws "$draws" --quiet)
+  p=$(secs /usr/bin/python3 "$bench/numpy_baseline.py" "$work/syn.csv" "$work/np.npz" "$draws")
+  printf 'round %d: derive %d objects x %d draws: %.1f s; numpy notebook: %.1f s; ratio %.2fx\n' "$round" "$rows" "$draws" "$d" "$p" "$(echo "$p / $d" | bc -l)"
+done

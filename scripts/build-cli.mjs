@@ -1,0 +1,31 @@
+#!/usr/bin/env node
+// Compiles the command (src/catalog, src/core) to lib/ with tsc (types are checked by
+// `npm run typecheck`, so emit only) and copies the worker bootstrap beside it.
+// `--if-stale` skips the build when lib/ is newer than every source file (the test setup uses it).
+import { execFileSync } from 'node:child_process';
+import { copyFileSync, existsSync, readdirSync, statSync, writeFileSync } from 'node:fs';
+import { createRequire } from 'node:module';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+
+const root = fileURLToPath(new URL('..', import.meta.url));
+const stamp = path.join(root, 'lib', '.built');
+
+function newest(dir) {
+  let t = 0;
+  for (const e of readdirSync(dir, { withFileTypes: true })) {
+    const p = path.join(dir, e.name);
+    t = Math.max(t, e.isDirectory() ? newest(p) : statSync(p).mtimeMs);
+  }
+  return t;
+}
+
+const sources = ['src/catalog', 'src/core'].map((d) => path.join(root, d));
+const stale = () => !existsSync(stamp) || Math.max(...sources.map(newest), statSync(path.join(root, 'tsconfig.cli.json')).mtimeMs) > statSync(stamp).mtimeMs;
+
+if (!process.argv.includes('--if-stale') || stale()) {
+  const tsc = createRequire(import.meta.url).resolve('typescript/bin/tsc');
+  execFileSync(process.execPath, [tsc, '-p', path.join(root, 'tsconfig.cli.json'), '--noCheck'], { stdio: 'inherit' });
+  copyFileSync(path.join(root, 'src/catalog/derive/deriveWorkerBootstrap.mjs'), path.join(root, 'lib/catalog/derive/deriveWorkerBootstrap.mjs'));
+  writeFileSync(stamp, new Date().toISOString() + '\n');
+}

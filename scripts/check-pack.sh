@@ -1,0 +1,30 @@
+#!/usr/bin/env bash
+# Checks the package as a group receives it: packs the tool, installs the tarball in an empty
+# folder, and from there runs the CLI, derives the demo catalog, and builds the site for it
+# (with a non-root site.base). Run by .ci/run after the tests. Usage: scripts/check-pack.sh
+set -euo pipefail
+root="$(cd "$(dirname "$0")/.." && pwd)"
+work="$(mktemp -d)"
+trap 'rm -rf "$work"' EXIT
+
+cd "$root"
+tarball="$(npm pack --silent --pack-destination "$work" | tail -1)"
+echo "pack: $tarball ($(du -h "$work/$tarball" | cut -f1))"
+if tar -tzf "$work/$tarball" | grep -E '^package/(test|scripts|data-demo|\.scratch)/' >/dev/null; then
+  echo "pack: the tarball ships tests, scripts or demo data" >&2; exit 1
+fi
+
+mkdir "$work/group" && cd "$work/group"
+printf '{ "name": "a-group", "private": true }\n' > package.json
+npm install --no-audit --no-fund --prefer-offline --silent "$work/$tarball"
+test ! -e node_modules/tsx/package.json || echo "pack: note: tsx is present (pulled in by another package), the bin does not use it"
+
+npx --no-install dawn-census --version
+cp "$root/data-demo/catalog.csv" catalog.csv
+sed 's#^site: { base: / }#site: { base: /census/ }#' "$root/data-demo/census.config.yaml" > census.config.yaml
+grep -q '^site: { base: /census/ }' census.config.yaml
+npx --no-install dawn-census derive -c census.config.yaml --draws 100 --quiet
+npx --no-install dawn-census site build -c census.config.yaml --out site
+test -f site/index.html
+grep -q 'href="/census/' site/index.html || { echo "pack: the built site ignores site.base" >&2; exit 1; }
+echo "pack: installed tarball derived the demo catalog and built its site under /census/"

@@ -1,0 +1,96 @@
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { loadConfig } from '../config/loadConfig.ts';
+import { ConfigError } from '../config/ConfigError.ts';
+import { defaultOutputPath } from '../derive/outputPaths.ts';
+import { serveStatic } from '../serve/staticServer.ts';
+import type { TextOut } from './cliIo.ts';
+import { UsageError } from './UsageError.ts';
+
+/** `dawn-census site build|preview` arguments. */
+export interface SiteArgs {
+  action: 'build' | 'preview';
+  config: string;
+  out: string;
+  port: number;
+  help: boolean;
+}
+
+/** Parses `site <build|preview> -c <config> [--out <dir>] [--port <n>]`; throws UsageError. */
+export function parseSiteArgs(argv: readonly string[]): SiteArgs {
+  const [action, ...rest] = argv;
+  if (action === '--help' || action === '-h') return { action: 'build', config: '', out: 'dist', port: 4321, help: true };
+  if (action !== 'build' && action !== 'preview') throw new UsageError(`site needs "build" or "preview" (got ${action === undefined ? 'nothing' : `"${action}"`}; see dawn-census site --help)`);
+  const args: SiteArgs = { action, config: '', out: 'dist', port: 4321, help: false };
+  for (let i = 0; i < rest.length; i++) {
+    const a = rest[i]!;
+    const value = (): string => {
+      const v = rest[++i];
+      if (v === undefined || v.startsWith('-')) throw new UsageError(`${a} needs a value`);
+      return v;
+    };
+    if (a === '-c' || a === '--config') args.config = value();
+    else if (a === '--out') args.out = value();
+    else if (a === '--port') {
+      const v = value();
+      args.port = Number(v);
+      if (!Number.isInteger(args.port) || args.port < 0 || args.port > 65535) throw new UsageError(`--port must be a port number (got "${v}")`);
+    } else if (a === '-h' || a === '--help') args.help = true;
+    else throw new UsageError(`unknown option "${a}" for site ${action} (see dawn-census site --help)`);
+  }
+  if (!args.help && action === 'build' && args.config === '') throw new UsageError('site build needs -c <census.config.yaml>');
+  return args;
+}
+
+/** The package's own folder (where astro.config.mjs and the site sources are): three levels up from src/catalog/cli or lib/catalog/cli. */
+const PACKAGE_ROOT = fileURLToPath(new URL('../../../', import.meta.url));
+
+/** `site.base` normalised to start and end with '/'. */
+function normalBase(base: string): string {
+  let b = base.trim() || '/';
+  if (!b.startsWith('/')) b = '/' + b;
+  if (!b.endsWith('/')) b += '/';
+  return b;
+}
+
+/**
+ * Builds the static site for the catalog a config derives (its `output`, else the default beside
+ * its input), honouring `site.base`, into `out` (relative to the working directory). Runs Astro
+ * from the installed package; writes Astro's progress to `log`.
+ */
+export async function siteBuild(args: SiteArgs, log: TextOut): Promise<{ out: string; base: string }> {
+  const config = await loadConfig(args.config);
+  const label = path.basename(args.config);
+  const catalog = config.output ?? (config.input ? defaultOutputPath(config.input.path) : undefined);
+  if (!catalog) throw new ConfigError(`${label}: neither output nor input.path says which catalog to publish`);
+  if (!existsSync(catalog)) throw new ConfigError(`${label}: the catalog ${catalog} does not exist yet: run dawn-census derive -c ${args.config} first`);
+  const out = path.resolve(args.out);
+  const base = normalBase(config.site.base);
+  // Astro's build reads the catalog, base and output folder from these (see astro.config.mjs).
+  const saved = { CENSUS_CATALOG: process.env.CENSUS_CATALOG, CENSUS_BASE: process.env.CENSUS_BASE, CENSUS_OUT_DIR: process.env.CENSUS_OUT_DIR };
+  Object.assign(process.env, { CENSUS_CATALOG: catalog, CENSUS_BASE: base, CENSUS_OUT_DIR: out });
+  try {
+    const { build } = await import('astro');
+    await build({ root: PACKAGE_ROOT, logLevel: 'warn' });
+  } catch (e) {
+    throw new Error(`the site build failed: ${(e as Error).message.split('\n')[0]}`);
+  } finally {
+    for (const [k, v] of Object.entries(saved)) {
+      if (v === undefined) delete process.env[k];
+      else process.env[k] = v;
+    }
+  }
+  log.write('');
+  return { out, base };
+}
+
+/** Serves a built site folder at its base (Range requests included) until the process is stopped. */
+export async function sitePreview(args: SiteArgs, log: TextOut): Promise<{ url: string; close: () => Promise<void> }> {
+  const out = path.resolve(args.out);
+  if (!existsSync(path.join(out, 'index.html'))) throw new UsageError(`${args.out} holds no built site: run dawn-census site build -c <config> --out ${args.out} first`);
+  const base = args.config ? normalBase((await loadConfig(args.config)).site.base) : '/';
+  const server = await serveStatic(out, base, args.port);
+  log.write(`Serving ${out} at ${server.url} (Ctrl-C stops it)\n`);
+  return { url: server.url, close: () => server.close() };
+}
