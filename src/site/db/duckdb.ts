@@ -26,7 +26,8 @@ import mvpWasm from '@duckdb/duckdb-wasm/dist/duckdb-mvp.wasm?url';
 import mvpWorker from '@duckdb/duckdb-wasm/dist/duckdb-browser-mvp.worker.js?url';
 import ehWasm from '@duckdb/duckdb-wasm/dist/duckdb-eh.wasm?url';
 import ehWorker from '@duckdb/duckdb-wasm/dist/duckdb-browser-eh.worker.js?url';
-import guardWorker from './networkGuard.worker.js?url';
+// no-inline: a small file would otherwise become a data: URL, an opaque-origin worker the policy refuses.
+import guardWorker from './networkGuard.worker.js?url&no-inline';
 import { catalogLoadError, friendlyQueryError } from './friendlyError.ts';
 import type { ResultSet } from './resultSet.ts';
 import { statementProblem } from './statementGate.ts';
@@ -226,6 +227,8 @@ async function visitorStream(sql: string, onBatch: (b: ResultSet) => boolean | P
   });
   const work = (async () => {
     const reader = await conn.send(sql);
+    // The stream reader learns its schema when opened (it reads the stream's first message).
+    await reader.open();
     const fields = reader.schema.fields as { name: string; type: unknown }[];
     const names = fields.map((f) => f.name);
     const types = fields.map((f) => String(f.type));
