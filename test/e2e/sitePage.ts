@@ -94,8 +94,10 @@ export async function setSql(page: Page, sql: string): Promise<void> {
   await page.keyboard.press('Escape'); // close any completion list
 }
 
-/** Runs `sql` in the workspace and waits until it has a result or an error. */
+/** Runs `sql` in the workspace and waits until it has a result or an error (after any query already running). */
 export async function runSql(page: Page, sql: string, timeout = 30_000): Promise<void> {
+  const idle = () => !document.querySelector('[data-workspace]')?.hasAttribute('aria-busy');
+  await page.waitForFunction(idle, undefined, { timeout });
   await setSql(page, sql);
   await page.evaluate(() => {
     document.querySelector('[data-result-summary]')?.removeAttribute('data-ms');
@@ -104,7 +106,9 @@ export async function runSql(page: Page, sql: string, timeout = 30_000): Promise
   });
   await page.locator('[data-run]').click();
   await page.waitForFunction(
-    () => document.querySelector('[data-result-summary]')?.getAttribute('data-ms') || !document.querySelector('#sql-error')?.hasAttribute('hidden'),
+    () =>
+      !document.querySelector('[data-workspace]')?.hasAttribute('aria-busy') &&
+      (document.querySelector('[data-result-summary]')?.getAttribute('data-ms') || !document.querySelector('#sql-error')?.hasAttribute('hidden')),
     undefined,
     { timeout },
   );
