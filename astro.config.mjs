@@ -1,6 +1,8 @@
 // @ts-check
 import { defineConfig } from 'astro/config';
-import { rm } from 'node:fs/promises';
+import { readdir, readFile, rm, writeFile } from 'node:fs/promises';
+import { join } from 'node:path';
+import { applyPolicy } from './src/site/build/contentSecurityPolicy.ts';
 import { fileURLToPath } from 'node:url';
 
 /** Removes Astro's empty content-collection modules from the published folder (the site has no collections). */
@@ -10,6 +12,22 @@ const tidyOutput = {
   hooks: {
     'astro:build:done': async ({ dir }) => {
       for (const f of ['content-assets.mjs', 'content-modules.mjs']) await rm(fileURLToPath(new URL(f, dir)), { force: true });
+    },
+  },
+};
+
+/** Fills every page's Content-Security-Policy with the hashes of its inline scripts (src/site/build/contentSecurityPolicy.ts). */
+/** @type {import('astro').AstroIntegration} */
+const scriptPolicy = {
+  name: 'census-script-policy',
+  hooks: {
+    'astro:build:done': async ({ dir }) => {
+      const root = fileURLToPath(dir);
+      for (const entry of await readdir(root, { recursive: true, withFileTypes: true })) {
+        if (!entry.isFile() || !entry.name.endsWith('.html')) continue;
+        const file = join(entry.parentPath, entry.name);
+        await writeFile(file, applyPolicy(await readFile(file, 'utf8'), file.slice(root.length)));
+      }
     },
   },
 };
@@ -33,7 +51,7 @@ export default defineConfig({
   trailingSlash: 'ignore',
   build: { format: 'directory' },
   devToolbar: { enabled: false },
-  integrations: [tidyOutput],
+  integrations: [tidyOutput, scriptPolicy],
   vite: {
     // DuckDB-WASM ships its own worker and wasm bundles; Vite must not pre-bundle it.
     optimizeDeps: { exclude: ['@duckdb/duckdb-wasm'] },

@@ -12,7 +12,7 @@
  * --keep (leave the work directory).
  */
 import { execFileSync } from 'node:child_process';
-import { cpSync, createWriteStream, mkdirSync, mkdtempSync, rmSync, statSync } from 'node:fs';
+import { createWriteStream, mkdirSync, mkdtempSync, rmSync, statSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { once } from 'node:events';
@@ -83,6 +83,7 @@ async function repeatRows(parquet: string, out: string, times: number): Promise<
 
 interface Measure {
   firstChartMs: number | null;
+  firstChartWarmMs: number | null;
   landingBytes: number;
   queryFirstMs: number | null;
   queryMedianMs: number | null;
@@ -92,22 +93,38 @@ interface Measure {
 
 const bytesSince = (s: StaticServer, from: number) => s.log.slice(from).reduce((a, r) => a + r.bytes, 0);
 
+/**
+ * Records, in the page, the time (ms from navigation start) at which a chart first is in the
+ * DOM. A string, not a function: tsx would wrap a function's inner names in a helper the page lacks.
+ */
+const WATCH_FIRST_CHART = `(() => {
+  const check = () => {
+    if (window.__firstChart === undefined && document.querySelector('[data-chart] svg')) window.__firstChart = performance.now();
+  };
+  new MutationObserver(check).observe(document, { childList: true, subtree: true });
+  document.addEventListener('DOMContentLoaded', check);
+})();`;
+
+async function firstChart(page: import('playwright-core').Page, url: string): Promise<number> {
+  await page.goto(url, { waitUntil: 'commit' });
+  await page.waitForFunction(() => (window as unknown as { __firstChart?: number }).__firstChart !== undefined, undefined, { timeout: 120_000 });
+  return page.evaluate(() => (window as unknown as { __firstChart: number }).__firstChart);
+}
+
 async function measure(server: StaticServer, landing: boolean): Promise<Measure> {
   const browser = await launchBrowser();
-  const m: Measure = { firstChartMs: null, landingBytes: 0, queryFirstMs: null, queryMedianMs: null, queryBytes: 0, rows: '' };
+  const m: Measure = { firstChartMs: null, firstChartWarmMs: null, landingBytes: 0, queryFirstMs: null, queryMedianMs: null, queryBytes: 0, rows: '' };
   try {
     if (landing) {
       const ctx = await browser.newContext({ viewport: { width: 1366, height: 768 } });
+      await ctx.addInitScript({ content: WATCH_FIRST_CHART });
       const page = await ctx.newPage();
       const from = server.log.length;
-      const t0 = t();
-      await page.goto(server.url, { waitUntil: 'commit' });
-      await page.waitForSelector('[data-chart] svg', { timeout: 120_000 });
-      // The page marks each chart as it is inserted (performance.now() counts from the navigation start);
-      // the wall-clock wait above also includes Playwright's polling, so it is the upper bound.
-      const marked = await page.evaluate(() => Math.min(...performance.getEntriesByName('census:chart:mbh-mstar').concat(performance.getEntriesByType('mark').filter((e) => e.name.startsWith('census:chart:'))).map((e) => e.startTime)));
-      m.firstChartMs = Number.isFinite(marked) ? marked : t() - t0;
+      m.firstChartMs = await firstChart(page, server.url);
+      // Everything the page loads on its own before the reader touches it.
+      await page.waitForLoadState('networkidle');
       m.landingBytes = bytesSince(server, from);
+      m.firstChartWarmMs = await firstChart(page, server.url);
       await ctx.close();
     }
     const ctx = await browser.newContext({ viewport: { width: 1366, height: 768 } });
@@ -163,13 +180,12 @@ try {
   mkdirSync(join(work, 'million'), { recursive: true });
   await repeatRows(bigParquet, millionParquet, Math.max(1, Math.round(1_000_000 / N)));
   const millionDist = join(work, 'site-million');
-  cpSync(bigDist, millionDist, { recursive: true, filter: (p) => !p.includes(`${join(bigDist, 'object')}`) });
-  cpSync(millionParquet, join(millionDist, 'data/catalog.parquet'));
+  const millionBuild = build(millionParquet, millionDist);
 
   for (const [name, dist, parquet, buildMs, landing, chartTarget, queryTarget] of [
-    ['demo', demoDist, demoParquet, demoBuild, true, 1500, undefined],
-    [`${Math.round(N / 1000)}k`, bigDist, bigParquet, bigBuild, true, 3000, undefined],
-    ['1M (query only)', millionDist, millionParquet, null, false, undefined, 200],
+    ['demo', demoDist, demoParquet, demoBuild, true, 300, undefined],
+    [`${Math.round(N / 1000)}k`, bigDist, bigParquet, bigBuild, true, 1000, undefined],
+    ['1M', millionDist, millionParquet, millionBuild, true, 1000, 200],
   ] as const) {
     const server = await serveStatic(dist, '/');
     try {
@@ -182,12 +198,13 @@ try {
   }
 
   console.log(`\n(${N.toLocaleString('en')} rows derived in ${secs(deriveBig)})\n`);
-  const head = ['catalog', 'Parquet', 'build', 'first chart', 'landing bytes', 'query (first)', 'query (median of 5)', 'query bytes', 'result rows'];
+  const head = ['catalog', 'Parquet', 'build', 'first chart (cold)', 'first chart (warm)', 'landing bytes before interaction', 'query (first)', 'query (median of 5)', 'query bytes', 'result rows'];
   const lines = results.map((r) => [
     r.name,
     r.size,
     r.build,
     ms(r.m.firstChartMs) + (r.chartTarget ? (r.m.firstChartMs! <= r.chartTarget ? ' ✓' : ` ✗ (≤ ${r.chartTarget})`) : ''),
+    ms(r.m.firstChartWarmMs),
     r.m.landingBytes ? mb(r.m.landingBytes) : '—',
     ms(r.m.queryFirstMs),
     ms(r.m.queryMedianMs) + (r.queryTarget ? (r.m.queryMedianMs! <= r.queryTarget ? ' ✓' : ` ✗ (≤ ${r.queryTarget})`) : ''),
@@ -199,7 +216,7 @@ try {
   console.log(fmt(head));
   console.log('|' + widths.map((w) => '-'.repeat(w + 2)).join('|') + '|');
   for (const l of lines) console.log(fmt(l));
-  console.log(`\nTargets: first chart ≤ 1.5 s (demo), ≤ 3 s (100k); query ≤ 200 ms at 1M (warm median). Query:\n${QUERY}`);
+  console.log(`\nTargets: first chart (cold) ≤ 300 ms and ≤ 1 MB before interaction (demo), ≤ 1 s (100k, 1M); query ≤ 200 ms at 1M (warm median). Query:\n${QUERY}`);
 } finally {
   if (keep) console.log(`Work directory kept: ${work}`);
   else rmSync(work, { recursive: true, force: true });

@@ -3,7 +3,7 @@ import type { Browser, Page } from 'playwright-core';
 import { objectSlug } from '../../src/site/objectSlug.ts';
 import { launchBrowser } from './browser.ts';
 import { HOSTILE_IDS } from './hostileCatalog.ts';
-import { openSite, waitForCharts } from './sitePage.ts';
+import { openSite, reachCharts, runSql, waitForCharts } from './sitePage.ts';
 
 const pwned = (page: Page) => page.evaluate(() => (window as unknown as { __pwned?: unknown }).__pwned);
 
@@ -24,11 +24,11 @@ describe('a hostile catalog', () => {
       await page.goto(url);
       await expect(page.locator('h1').textContent()).resolves.toBe('Hostile <script>window.__pwned=1;alert(1)</script> 天体');
       await waitForCharts(page);
+      await reachCharts(page);
       expect(await pwned(page)).toBeUndefined();
 
       await page.goto(new URL('query/', url).href);
-      await page.locator('#sql').fill('SELECT id, field, notes, z, log_mbh FROM census ORDER BY z');
-      await page.locator('[data-run]').click();
+      await runSql(page, 'SELECT id, field, notes, z, log_mbh FROM census ORDER BY z');
       await page.waitForFunction(() => document.querySelector('[data-result-summary]')?.getAttribute('data-rows') === '5', undefined, { timeout: 30_000 });
       const ids = await page.locator('table[data-results] tbody tr td:first-child').allTextContents();
       expect(ids).toEqual(HOSTILE_IDS);
@@ -41,6 +41,7 @@ describe('a hostile catalog', () => {
         await expect(page.locator('h1').textContent()).resolves.toBe(id);
         await expect(page.locator('tr[data-column="notes"] td').nth(1).textContent()).resolves.toContain('天体 Ελληνικά');
         await waitForCharts(page);
+        await reachCharts(page);
         expect(await pwned(page)).toBeUndefined();
       }
       expect(await page.locator('img[src="x"]').count()).toBe(0);

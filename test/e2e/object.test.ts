@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser } from 'playwright-core';
 import { objectSlug } from '../../src/site/objectSlug.ts';
 import { launchBrowser } from './browser.ts';
-import { markCount, nodeQuery, openSite, waitForCharts } from './sitePage.ts';
+import { markCount, nodeQuery, openSite, reachCharts, waitForCharts } from './sitePage.ts';
 
 describe('object pages', () => {
   let browser: Browser;
@@ -30,6 +30,11 @@ describe('object pages', () => {
       await expect(page.locator('.flag-list').textContent()).resolves.toContain(firstFlag);
       await expect(page.locator('#prov-h + dl').textContent()).resolves.toMatch(/Planck/);
       await waitForCharts(page);
+      // Drawn at build time: the shared population chart with the object marked and named over it.
+      await expect(page.locator('[data-chart="mbh-mstar"][data-static] svg text').textContent()).resolves.toBe(row!.id);
+      expect(await page.locator('[data-chart="mbh-mstar"][data-static] svg image').count()).toBe(1);
+      // Redrawn by the same chart code when the reader reaches for it.
+      await reachCharts(page, 'mbh-mstar');
       expect(await page.locator('[data-chart="mbh-mstar"] g[class*="census-highlighted"]').count()).toBeGreaterThan(0);
       expect(site.foreign()).toEqual([]);
 
@@ -51,6 +56,7 @@ describe('object pages', () => {
       await page.goto(inject('siteUrl'));
       await waitForCharts(page);
       expect(await markCount(page, 'mbh-z')).toBeGreaterThan(0);
+      await reachCharts(page);
       const dot = page.locator('[data-chart="mbh-z"] g.census-catalog-point > *').first();
       await dot.scrollIntoViewIfNeeded();
       const box = (await dot.boundingBox())!;

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser } from 'playwright-core';
 import { launchBrowser } from './browser.ts';
-import { markCount, nodeQuery, openSite } from './sitePage.ts';
+import { markCount, nodeQuery, openSite, runSql, setSql } from './sitePage.ts';
 
 const SQL = 'SELECT id, z, log_mbh, log_edd_ratio FROM census WHERE z > 6 AND log_edd_ratio > -0.5';
 
@@ -22,14 +22,14 @@ describe('SQL workspace', () => {
     try {
       const { page } = site;
       await page.goto(new URL('query/', inject('siteUrl')).href);
-      // Tab in the editor inserts two spaces instead of leaving it.
-      await page.locator('#sql').fill('SELECT');
-      await page.locator('#sql').press('End');
-      await page.locator('#sql').press('Tab');
-      await expect(page.locator('#sql').inputValue()).resolves.toBe('SELECT  ');
-      await expect(page.evaluate(() => document.activeElement?.id)).resolves.toBe('sql');
-      await page.locator('#sql').fill(SQL);
-      await page.locator('#sql').press('Control+Enter');
+      // Tab in the editor indents instead of leaving it.
+      await setSql(page, 'SELECT');
+      await page.keyboard.press('End');
+      await page.keyboard.press('Tab');
+      await expect(page.locator('#sql').inputValue()).resolves.toMatch(/^SELECT\s+$/);
+      await expect(page.evaluate(() => document.activeElement?.hasAttribute('data-sql-input'))).resolves.toBe(true);
+      await setSql(page, SQL);
+      await page.keyboard.press('Control+Enter');
       await page.waitForFunction((n) => document.querySelector('[data-result-summary]')?.getAttribute('data-rows') === String(n), rows.length, { timeout: 30_000 });
       // One page of rows at most in the DOM.
       const domRows = await page.locator('table[data-results] tbody tr').count();
@@ -61,17 +61,13 @@ describe('SQL workspace', () => {
     try {
       const { page } = site;
       await page.goto(new URL('query/', inject('siteUrl')).href);
-      await page.locator('#sql').fill('SELECT no_such_column FROM census');
-      await page.locator('[data-run]').click();
+      await runSql(page, 'SELECT no_such_column FROM census');
       const error = page.locator('#sql-error');
-      await error.waitFor({ state: 'visible', timeout: 30_000 });
       await expect(error.textContent()).resolves.toMatch(/no_such_column/);
-      await page.locator('#sql').fill('SELEC id FROM census');
-      await page.locator('[data-run]').click();
-      await page.waitForFunction(() => /could not be read/.test(document.querySelector('#sql-error')?.textContent ?? ''), undefined, { timeout: 30_000 });
-      await page.locator('#sql').fill('SELECT * FROM catalog');
-      await page.locator('[data-run]').click();
-      await page.waitForFunction(() => /named census/.test(document.querySelector('#sql-error')?.textContent ?? ''), undefined, { timeout: 30_000 });
+      await runSql(page, 'SELEC id FROM census');
+      await expect(error.textContent()).resolves.toMatch(/could not be read/);
+      await runSql(page, 'SELECT * FROM catalog');
+      await expect(error.textContent()).resolves.toMatch(/named census/);
     } finally {
       await site.close();
     }

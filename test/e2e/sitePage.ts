@@ -83,3 +83,39 @@ export function markCount(page: Page, key: string): Promise<number> {
     return n;
   }, key);
 }
+
+/** Replaces the SQL in the workspace's editor (CodeMirror) with `sql`. */
+export async function setSql(page: Page, sql: string): Promise<void> {
+  const editor = page.locator('[data-sql-input]');
+  await editor.click();
+  await page.keyboard.press('ControlOrMeta+a');
+  await page.keyboard.press('Delete');
+  await page.keyboard.insertText(sql);
+  await page.keyboard.press('Escape'); // close any completion list
+}
+
+/** Runs `sql` in the workspace and waits until it has a result or an error (after any query already running). */
+export async function runSql(page: Page, sql: string, timeout = 30_000): Promise<void> {
+  const idle = () => !document.querySelector('[data-workspace]')?.hasAttribute('aria-busy');
+  await page.waitForFunction(idle, undefined, { timeout });
+  await setSql(page, sql);
+  await page.evaluate(() => {
+    document.querySelector('[data-result-summary]')?.removeAttribute('data-ms');
+    const e = document.querySelector<HTMLElement>('#sql-error');
+    if (e) e.hidden = true;
+  });
+  await page.locator('[data-run]').click();
+  await page.waitForFunction(
+    () =>
+      !document.querySelector('[data-workspace]')?.hasAttribute('aria-busy') &&
+      (document.querySelector('[data-result-summary]')?.getAttribute('data-ms') || !document.querySelector('#sql-error')?.hasAttribute('hidden')),
+    undefined,
+    { timeout },
+  );
+}
+
+/** Moves the pointer over chart `key` and waits until the static charts were redrawn interactive. */
+export async function reachCharts(page: Page, key = 'mbh-z'): Promise<void> {
+  await page.locator(`[data-population] [data-chart="${key}"]`).first().hover();
+  await page.waitForFunction(() => !document.querySelector('[data-population] [data-chart][data-static]'), undefined, { timeout: 30_000 });
+}

@@ -9,6 +9,10 @@ import { catalogFiles, type CatalogFiles } from './catalogFiles.ts';
 import { normalizeMeta, type SiteMeta } from './siteMeta.ts';
 import { csvCell } from '../../shared/text/csvCell.ts';
 import { objectPagesMode, type ObjectPagesMode } from '../objectLink.ts';
+import { CHART_COLUMNS, DENSE_COLUMNS_BY_CHART, NARROW_ABOVE } from '../population/populationCharts.ts';
+
+/** The columns the build-time charts read when they draw densities (large catalogs). */
+const DENSE_CHART_COLUMNS: readonly string[] = [...new Set(Object.values(DENSE_COLUMNS_BY_CHART).flat())];
 
 /** A catalog value as the pages see it. */
 export type CellValue = number | string | boolean | null;
@@ -33,6 +37,10 @@ export interface SiteCatalog {
   meta: SiteMeta;
   /** Column names and DuckDB types, in file order. */
   columns: { name: string; type: string }[];
+  /**
+   * Every row with every column when the build makes one page per object; otherwise (large
+   * catalogs) every row with only the columns the build-time charts read (src/site/build/buildCharts.ts).
+   */
   rows: CatalogRow[];
   summary: CatalogSummary;
 }
@@ -60,17 +68,24 @@ export async function readCatalog(files: CatalogFiles = catalogFiles()): Promise
   const con = await instance.connect();
   try {
     const src = `read_parquet(${quote(files.parquet)})`;
-    let reader;
+    let names: string[];
+    let types: string[];
+    let count: number;
     try {
-      reader = await con.runAndReadAll(`SELECT * FROM ${src}`);
+      const described = await con.runAndReadAll(`SELECT * FROM ${src} LIMIT 0`);
+      names = described.columnNames();
+      types = described.columnTypes().map((t) => t.toString());
+      count = Number((await con.runAndReadAll(`SELECT count(*)::DOUBLE AS n FROM ${src}`)).getRowObjectsJS()[0]!.n);
     } catch (err) {
       throw new Error(`The catalog ${files.parquet} could not be read as Parquet: ${(err as Error).message}`);
     }
-    const names = reader.columnNames();
-    const types = reader.columnTypes().map((t) => t.toString());
+    const objectPages = objectPagesMode(count, process.env.CENSUS_OBJECT_PAGES);
+    // One page per object needs every column; otherwise only the build-time charts read rows.
+    const wanted = objectPages === 'static' ? names : names.filter((n) => (count > NARROW_ABOVE ? DENSE_CHART_COLUMNS : CHART_COLUMNS).includes(n));
+    const reader = await con.runAndReadAll(`SELECT ${wanted.map((n) => `"${n.replace(/"/g, '""')}"`).join(', ') || '1'} FROM ${src}`);
     const rows = reader.getRowObjectsJS().map((r) => {
       const o: CatalogRow = {};
-      for (const n of names) o[n] = plain(r[n]);
+      for (const n of wanted) o[n] = plain(r[n]);
       return o;
     });
     const has = (c: string) => names.includes(c);
@@ -98,7 +113,6 @@ export async function readCatalog(files: CatalogFiles = catalogFiles()): Promise
       zMax: o!.z_max ?? null,
       flagCounts: flagCounts.map((f) => ({ flag: String(f.flag), count: Number(f.count) })),
     };
-    const objectPages = objectPagesMode(rows.length, process.env.CENSUS_OBJECT_PAGES);
     return { files, objectPages, meta, columns: names.map((name, i) => ({ name, type: types[i]! })), rows, summary };
   } finally {
     con.closeSync();

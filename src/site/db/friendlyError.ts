@@ -3,6 +3,7 @@
  * its errors with a class ("Parser Error: …", "Binder Error: …"); we replace the class with
  * plain words and keep DuckDB's own detail, which names the column or token at fault.
  */
+import { OUTSIDE_MESSAGE } from './statementGate.ts';
 
 const LEADS: [RegExp, string][] = [
   [/^Parser Error:\s*/i, 'The SQL could not be read: '],
@@ -19,6 +20,9 @@ const LEADS: [RegExp, string][] = [
 /** A plain-words message for an error thrown by a DuckDB-WASM query (`sql` is the text that failed). */
 export function friendlyQueryError(error: unknown): string {
   let text = error instanceof Error ? error.message : String(error);
+  // The worker's network gate (networkGuard.worker.js) or DuckDB's own lock refused a file or address.
+  if (/census-blocked|disabled through configuration|disabled by configuration/i.test(text)) return OUTSIDE_MESSAGE;
+  if (/configuration has been locked/i.test(text)) return 'The database’s settings are fixed on this site: SET and PRAGMA that change them are not available.';
   text = text.replace(/\s+/g, ' ').trim();
   // DuckDB appends a caret diagram on a second line; the first line says what is wrong.
   text = text.replace(/\s*LINE \d+:.*$/s, '');

@@ -16,14 +16,17 @@ export function readingsUrl(): string {
   return new URL(import.meta.env.BASE_URL + READINGS_PATH, location.href).href;
 }
 
-/** Creates the `readings` view when the file is there; returns whether it did. Never throws. */
-export async function registerReadingsTable(db: duckdb.AsyncDuckDB, conn: duckdb.AsyncDuckDBConnection): Promise<boolean> {
+/**
+ * Creates `readings` when the file is there; returns whether it did. Never throws. `materialize`
+ * copies it into a table (needed before external access is switched off, as for `census`).
+ */
+export async function registerReadingsTable(db: duckdb.AsyncDuckDB, conn: duckdb.AsyncDuckDBConnection, materialize = false): Promise<boolean> {
   try {
     const url = readingsUrl();
     const head = await fetch(url, { method: 'HEAD', cache: 'no-store' });
     if (!head.ok) return false;
     await db.registerFileURL('readings.parquet', url, duckdb.DuckDBDataProtocol.HTTP, false);
-    await conn.query(`CREATE OR REPLACE VIEW ${READINGS_TABLE} AS SELECT * FROM read_parquet('readings.parquet')`);
+    await conn.query(`CREATE OR REPLACE ${materialize ? 'TABLE' : 'VIEW'} ${READINGS_TABLE} AS SELECT * FROM read_parquet('readings.parquet')`);
     return true;
   } catch {
     return false;

@@ -33,6 +33,13 @@ export const CHART_COLUMNS = [
  */
 export const NARROW_ABOVE = 20_000;
 
+/**
+ * Every population chart is drawn 640 px wide (and scaled down by CSS on narrow screens), in
+ * the browser and at build time alike, so the redrawn chart replaces the static one exactly.
+ */
+export const CHART_WIDTH = 640;
+export const CHART_HEIGHT = Math.round(CHART_WIDTH * 0.66);
+
 /** Options of one drawing of the population. */
 export interface DrawOptions {
   /** Ids drawn on top and emphasised (the object page's object). */
@@ -93,10 +100,9 @@ export function drawChart(mount: HTMLElement, rows: readonly ChartRow[], options
   const fn = CHART_FUNCTIONS[mount.dataset.chart ?? ''];
   if (!fn) return;
   const settings = chartSettings(options.settings);
-  const width = Math.max(320, Math.min(720, Math.floor(mount.clientWidth || 600)));
   let el: SVGSVGElement | HTMLElement;
   try {
-    el = fn(rows as readonly CatalogRow[], { settings, highlightIds: options.highlightIds, width, height: Math.round(width * 0.66) });
+    el = fn(rows as readonly CatalogRow[], { settings, highlightIds: options.highlightIds, width: CHART_WIDTH, height: CHART_HEIGHT });
   } catch (err) {
     const p = document.createElement('p');
     p.className = 'chart-note';

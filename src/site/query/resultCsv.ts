@@ -12,12 +12,22 @@ function field(v: unknown): string {
   return typeof v === 'number' && !Number.isFinite(v) ? '' : csvCell(v);
 }
 
-/** The CSV text of `rs`, rows in the order of `order` (default: as returned). */
-export function resultCsv(rs: ResultSet, order?: ArrayLike<number>): string {
-  const lines = [rs.names.map(field).join(',')];
+/** The header line of a CSV with these column names (with its line break). */
+export function resultCsvHeader(names: readonly string[]): string {
+  return names.map(field).join(',') + '\r\n';
+}
+
+/** The lines of `rs`'s rows, in the order of `order` (default: as returned), each with its line break. */
+export function resultCsvLines(rs: ResultSet, order?: ArrayLike<number>): string {
+  let out = '';
   for (let k = 0; k < rs.numRows; k++) {
     const r = order ? order[k]! : k;
-    lines.push(rs.columns.map((col) => field(col[r])).join(','));
+    out += rs.columns.map((col) => field(col[r])).join(',') + '\r\n';
   }
-  return lines.join('\r\n') + '\r\n';
+  return out;
+}
+
+/** The CSV text of `rs`, rows in the order of `order` (default: as returned). */
+export function resultCsv(rs: ResultSet, order?: ArrayLike<number>): string {
+  return resultCsvHeader(rs.names) + resultCsvLines(rs, order);
 }
