@@ -50,6 +50,27 @@ function valueTable(lines: ViewLine[], spreadHeading: string): HTMLElement {
   return wrap;
 }
 
+/**
+ * The page for no id or an id the catalog does not have: says so, links the list of every
+ * object, and hides the population charts (they would wait for an object that never comes).
+ */
+function notInCatalog(heading: HTMLElement, body: HTMLElement, charts: HTMLElement, id: string | null): void {
+  heading.textContent = 'Not in the catalog';
+  const base = document.body.dataset.base ?? '/';
+  const p = document.createElement('p');
+  p.className = 'status';
+  p.dataset.notFound = '';
+  p.textContent = id === null ? 'No object was named (the link has no ?id=…), so there is nothing to show: ' : `The object “${id}” is not in the catalog: `;
+  const a = document.createElement('a');
+  a.href = `${base}objects/`;
+  a.textContent = 'find it in the list of every object';
+  p.append(a, document.createTextNode('.'));
+  body.replaceChildren(p);
+  const section = charts.closest('section');
+  if (section) section.hidden = true;
+  else charts.hidden = true;
+}
+
 export async function startObjectViewer(root: HTMLElement): Promise<void> {
   bindDbStatus(document.querySelector<HTMLElement>('[data-db-status]'));
   const heading = root.querySelector<HTMLElement>('h1')!;
@@ -57,8 +78,7 @@ export async function startObjectViewer(root: HTMLElement): Promise<void> {
   const charts = document.querySelector<HTMLElement>('[data-population="manual"]')!;
   const id = new URLSearchParams(location.search).get('id');
   if (!id) {
-    heading.textContent = 'No object chosen';
-    body.replaceChildren(text('p', 'This page shows one object: open it from a query result, a chart or a link with ?id=<identifier>.'));
+    notInCatalog(heading, body, charts, null);
     return;
   }
   heading.textContent = id;
@@ -67,7 +87,7 @@ export async function startObjectViewer(root: HTMLElement): Promise<void> {
     const rs = await queryCensus(`SELECT * FROM ${TABLE} WHERE id = ${sqlString(id)} LIMIT 1`);
     const [row] = rowObjects(rs) as CatalogRow[];
     if (!row) {
-      body.replaceChildren(text('p', `There is no object with the identifier “${id}” in this catalog.`, 'status'));
+      notInCatalog(heading, body, charts, id);
       return;
     }
     const columns = JSON.parse(root.dataset.columns ?? '{}') as Record<string, ColumnMeta>;
