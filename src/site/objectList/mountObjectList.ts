@@ -103,7 +103,7 @@ export function mountObjectList(root: HTMLElement): void {
         const tr = el('tr');
         rows.names.forEach((name, c) => {
           const v = rows.columns[c]![r];
-          const td = el('td', undefined, isNumericType(rows.types[c] ?? '') ? 'num' : undefined);
+          const td = el('td', undefined, isNumericType(rows.types[c] ?? '') ? 'num' : name === 'flags' ? 'flags-cell' : undefined);
           if (name === 'id' && v !== null && v !== undefined) {
             const a = el('a', String(v));
             a.href = objectHrefHere(String(v));

@@ -69,6 +69,7 @@ export function startWorkspace(): void {
       summary.dataset.rows = String(rs.numRows);
       summary.dataset.ms = ms.toFixed(1);
       if (byReader) history.replaceState(null, '', hrefWithSql(location.href, editor.value));
+      document.dispatchEvent(new CustomEvent('census-result', { detail: { rs, sql } })); // the result chart (src/site/resultChart)
       await redrawCharts(sql, rs, my);
     } catch (err) {
       if (my === generation) showError(err instanceof CensusDbError ? err.message : `The query failed: ${String(err)}`);
