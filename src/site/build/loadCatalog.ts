@@ -7,6 +7,7 @@ import { DuckDBInstance } from '@duckdb/node-api';
 import { catalogFiles, type CatalogFiles } from './catalogFiles.ts';
 import { normalizeMeta, type SiteMeta } from './siteMeta.ts';
 import { objectPagesMode, type ObjectPagesMode } from '../objectLink.ts';
+import { READING_FLAGS } from '../text/readingFlags.ts';
 
 /** A catalog value as the pages see it. */
 export type CellValue = number | string | boolean | null;
@@ -18,6 +19,8 @@ export interface CatalogSummary {
   derived: number;
   /** Objects with at least one flag. */
   flagged: number;
+  /** Objects with at least one flag that changes how a number should be read (src/site/text/readingFlags.ts). */
+  caveated: number;
   zMin: number | null;
   zMax: number | null;
   /** How many objects carry each flag, most frequent first. */
@@ -76,6 +79,7 @@ export async function readCatalog(files: CatalogFiles = catalogFiles()): Promise
       `SELECT count(*)::DOUBLE AS objects,
         ${has('log_mbh') ? 'count(log_mbh)::DOUBLE' : '0::DOUBLE'} AS derived,
         ${has('flags') ? "count(*) FILTER (WHERE coalesce(trim(flags), '') <> '')::DOUBLE" : '0::DOUBLE'} AS flagged,
+        ${has('flags') ? `count(*) FILTER (WHERE list_has_any(list_transform(string_split(coalesce(flags, ''), ','), f -> trim(f)), [${READING_FLAGS.map(quote).join(', ')}]))::DOUBLE` : '0::DOUBLE'} AS caveated,
         ${has('z') ? 'min(z)' : 'NULL::DOUBLE'} AS z_min, ${has('z') ? 'max(z)' : 'NULL::DOUBLE'} AS z_max
        FROM ${src}`,
     );
@@ -92,6 +96,7 @@ export async function readCatalog(files: CatalogFiles = catalogFiles()): Promise
       objects: Number(o!.objects),
       derived: Number(o!.derived),
       flagged: Number(o!.flagged),
+      caveated: Number(o!.caveated),
       zMin: o!.z_min ?? null,
       zMax: o!.z_max ?? null,
       flagCounts: flagCounts.map((f) => ({ flag: String(f.flag), count: Number(f.count) })),

@@ -1,3 +1,4 @@
+import { formatValue } from '../text/formatValue.ts';
 import * as Plot from '@observablehq/plot';
 import { getCosmology } from '../../core/cosmology/index.ts';
 import { CAVEATS, countNote } from './captions.ts';
@@ -87,7 +88,7 @@ export function massVsRedshift(rows: readonly CatalogRow[], options: MassVsRedsh
         countNote(shown, unplaced, 'a black-hole mass'),
       ].join(' '),
       ariaDescription: 'Scatter plot of log black-hole mass against redshift with the age of the universe on the top axis and growth tracks from light and heavy seeds.',
-      formatX: (z) => z.toFixed(3),
+      formatX: (z) => formatValue('z', z),
     },
     options,
   );

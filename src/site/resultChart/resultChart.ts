@@ -17,7 +17,7 @@ import { PALETTE } from '../charts/palette.ts';
 import { relationCurves } from '../charts/relationLines.ts';
 import type { ChartSettings } from '../charts/types.ts';
 import type { ResultSet } from '../db/resultSet.ts';
-import { formatValue } from '../text/formatValue.ts';
+import { formatScientific, formatValue } from '../text/formatValue.ts';
 import { intervalColumns } from './intervalColumns.ts';
 import { limitOf, limitRule, type LimitKind } from './limitRule.ts';
 import { OVERLAY_TEXT, overlayFor } from './resultOverlays.ts';
@@ -192,7 +192,7 @@ export function resultChart(input: ResultChartInput): ResultChart {
     const segs = eddingtonSegments(EDDINGTON_RATIOS, input.catalog.eddingtonPerMsun, xDomain, yDomain);
     marks.push(Plot.link(segs, { x1: 'x1', y1: 'y1', x2: 'x2', y2: 'y2', stroke: PALETTE.guide, strokeDasharray: '4 3', ...tag('eddington line') }));
     over.push(Plot.text(segs, { x: 'labelX', y: 'labelY', text: (d: { lambda: number }) => formatLambda(d.lambda), fill: PALETTE.guide, stroke: 'white', strokeWidth: 3, fontSize: 10, dy: -7, ...tag('eddington label') }));
-    legend.push({ label: `Constant Eddington ratio (L_Edd = ${input.catalog.eddingtonPerMsun.toExponential(2).replace('e+', 'e')} erg/s per M☉)`, symbol: LEGEND_LINE, stroke: PALETTE.guide, strokeDasharray: '4 3' });
+    legend.push({ label: `Constant Eddington ratio (L_Edd = ${formatScientific(input.catalog.eddingtonPerMsun, 2)} erg s⁻¹ M☉⁻¹)`, symbol: LEGEND_LINE, stroke: PALETTE.guide, strokeDasharray: '4 3' });
     captions.push(`Dashed lines: ${OVERLAY_TEXT[overlay]}.`);
   }
 
