@@ -148,9 +148,15 @@ export function mountObjectList(root: HTMLElement): void {
     clearTimeout(typing);
     update({ q: search.value, page: 0 });
   });
-  flag.addEventListener('change', () => update({ flag: flag.value, page: 0 }));
-  sort.addEventListener('change', () => update({ sort: sort.value, page: 0 }));
-  desc.addEventListener('change', () => update({ desc: desc.value === '1', page: 0 }));
+  // a change of filter or sort takes the search box as it is now (a pending search is not lost,
+  // and the box is not reset to the old search when the list redraws)
+  const withSearch = (change: Partial<ListState>) => {
+    clearTimeout(typing);
+    update({ q: search.value, page: 0, ...change });
+  };
+  flag.addEventListener('change', () => withSearch({ flag: flag.value }));
+  sort.addEventListener('change', () => withSearch({ sort: sort.value }));
+  desc.addEventListener('change', () => withSearch({ desc: desc.value === '1' }));
   prev.addEventListener('click', () => update({ page: state.page - 1 }));
   next.addEventListener('click', () => update({ page: state.page + 1 }));
   window.addEventListener('popstate', () => {
