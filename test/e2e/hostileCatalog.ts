@@ -13,6 +13,11 @@ export const HOSTILE_IDS = [
   '天体 Ελληνικά "quoted" & <b>bold</b>',
 ];
 
+/** A row that fails validation (a negative width), with markup in its id and in the rejected value's neighbours. */
+export const HOSTILE_INVALID_ID = '<i>rejected</i> row';
+/** The width it gives, which the build rejects. */
+export const HOSTILE_INVALID_FWHM = '-350';
+
 const NOTE = '<img src=x onerror="window.__pwned=1;alert(1)"> 天体 Ελληνικά';
 
 const csvField = (s: string) => (/[",\r\n]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s);
@@ -25,7 +30,8 @@ export function hostileCsv(): string {
       .map(csvField)
       .join(','),
   );
-  return [head, ...rows].join('\n') + '\n';
+  const invalid = [HOSTILE_INVALID_ID, '9.90', HOSTILE_INVALID_FWHM, '150', '4e-18', '3e-19', '10.00', '0.3', 'F9', NOTE].map(csvField).join(',');
+  return [head, ...rows, invalid].join('\n') + '\n';
 }
 
 /** A config whose free texts are hostile too. */

@@ -81,7 +81,7 @@ describe('object pages', () => {
       await waitForCharts(page);
       expect(await page.locator('[data-chart="mbh-z"] g[class*="census-highlighted"]').count()).toBeGreaterThan(0);
       await page.goto(new URL('object/?id=no-such-object', inject('siteUrl')).href);
-      await page.waitForFunction(() => /no object with the identifier/.test(document.querySelector('[data-object-body]')?.textContent ?? ''), undefined, { timeout: 30_000 });
+      await page.waitForFunction(() => /is not in the catalog/.test(document.querySelector('[data-not-found]')?.textContent ?? ''), undefined, { timeout: 30_000 });
       expect(site.foreign()).toEqual([]);
     } finally {
       await site.close();

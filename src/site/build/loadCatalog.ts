@@ -13,6 +13,7 @@ import { CHART_COLUMNS, DENSE_COLUMNS_BY_CHART, NARROW_ABOVE } from '../populati
 
 /** The columns the build-time charts read when they draw densities (large catalogs). */
 const DENSE_CHART_COLUMNS: readonly string[] = [...new Set(Object.values(DENSE_COLUMNS_BY_CHART).flat())];
+import { READING_FLAGS } from '../text/readingFlags.ts';
 
 /** A catalog value as the pages see it. */
 export type CellValue = number | string | boolean | null;
@@ -24,6 +25,8 @@ export interface CatalogSummary {
   derived: number;
   /** Objects with at least one flag. */
   flagged: number;
+  /** Objects with at least one flag that changes how a number should be read (src/site/text/readingFlags.ts). */
+  caveated: number;
   zMin: number | null;
   zMax: number | null;
   /** How many objects carry each flag, most frequent first. */
@@ -93,6 +96,7 @@ export async function readCatalog(files: CatalogFiles = catalogFiles()): Promise
       `SELECT count(*)::DOUBLE AS objects,
         ${has('log_mbh') ? 'count(log_mbh)::DOUBLE' : '0::DOUBLE'} AS derived,
         ${has('flags') ? "count(*) FILTER (WHERE coalesce(trim(flags), '') <> '')::DOUBLE" : '0::DOUBLE'} AS flagged,
+        ${has('flags') ? `count(*) FILTER (WHERE list_has_any(list_transform(string_split(coalesce(flags, ''), ','), f -> trim(f)), [${READING_FLAGS.map(quote).join(', ')}]))::DOUBLE` : '0::DOUBLE'} AS caveated,
         ${has('z') ? 'min(z)' : 'NULL::DOUBLE'} AS z_min, ${has('z') ? 'max(z)' : 'NULL::DOUBLE'} AS z_max
        FROM ${src}`,
     );
@@ -109,6 +113,7 @@ export async function readCatalog(files: CatalogFiles = catalogFiles()): Promise
       objects: Number(o!.objects),
       derived: Number(o!.derived),
       flagged: Number(o!.flagged),
+      caveated: Number(o!.caveated),
       zMin: o!.z_min ?? null,
       zMax: o!.z_max ?? null,
       flagCounts: flagCounts.map((f) => ({ flag: String(f.flag), count: Number(f.count) })),

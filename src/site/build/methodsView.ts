@@ -8,6 +8,8 @@
 import { BC_SHEN11, NETZER19 } from '../../core/bolometric/index.ts';
 import { LOCAL_RELATIONS } from '../../core/local/index.ts';
 import type { SiteMeta } from './siteMeta.ts';
+import { unitText } from '../text/columnLabels.ts';
+import { readerName, readerText, readerValue } from '../text/readerNames.ts';
 
 type Rec = Record<string, unknown>;
 const isRec = (v: unknown): v is Rec => typeof v === 'object' && v !== null && !Array.isArray(v);
@@ -75,9 +77,9 @@ function values(r: unknown, skip: string[] = []): NamedValue[] {
   const out: NamedValue[] = [];
   for (const [k, v] of Object.entries(r)) {
     if (skip.includes(k)) continue;
-    if (isRec(v) && 'value' in v) out.push({ name: k, value: String(v.value), unit: str(v.unit), reference: str(v.reference) });
-    else if (typeof v === 'number' || typeof v === 'string' || typeof v === 'boolean') out.push({ name: k, value: String(v) });
-    else if (Array.isArray(v) && v.every((x) => typeof x !== 'object')) out.push({ name: k, value: v.join(', ') });
+    if (isRec(v) && 'value' in v) out.push({ name: readerName(k), value: readerValue(v.value), unit: unitText(str(v.unit)) || undefined, reference: str(v.reference) });
+    else if (typeof v === 'number' || typeof v === 'string' || typeof v === 'boolean') out.push({ name: readerName(k), value: readerValue(v) });
+    else if (Array.isArray(v) && v.every((x) => typeof x !== 'object')) out.push({ name: readerName(k), value: readerValue(v) });
   }
   return out;
 }
@@ -135,17 +137,17 @@ export function methodsView(meta: SiteMeta): MethodsView {
   for (const line of new Set([...Object.keys(calIds), ...Object.keys(calRecs)])) {
     const r: Rec = isRec(calRecs[line]) ? (calRecs[line] as Rec) : isRec(calIds[line]) ? (calIds[line] as Rec) : { id: calIds[line] };
     const validity = isRec(r.validity)
-      ? Object.entries(r.validity).map(([k, v]) => `${k} ${Array.isArray(v) ? v.join('–') : String(v)}`).join('; ')
+      ? Object.entries(r.validity).map(([k, v]) => `${readerName(k)} ${Array.isArray(v) ? v.map(readerValue).join('–') : readerValue(v)}`).join('; ')
       : undefined;
     calibrations.push({
       line,
       id: id(r) || id(calIds[line]),
       label: str(r.label),
       formula: str(r.formula) ?? calibrationFormula(r),
-      scatter: str(r.scatterDex) ?? str(r.scatter_dex) ?? str(r.scatter),
+      scatter: [r.scatterDex, r.scatter_dex, r.scatter].map((v) => (v === undefined ? undefined : readerValue(v))).find(Boolean),
       reference: str(r.reference),
       validity,
-      notes: str(r.notes),
+      notes: str(r.notes) === undefined ? undefined : readerText(str(r.notes)!),
     });
   }
 
@@ -155,7 +157,9 @@ export function methodsView(meta: SiteMeta): MethodsView {
   const localRec: Rec = localRecord(id(s.localRelation), isRec(prov.localRelation) ? prov.localRelation : isRec(s.localRelation) ? s.localRelation : {});
   const dustRec: Rec = isRec(prov.dustCurve) ? prov.dustCurve : isRec(s.dustCurve) ? s.dustCurve : {};
   const pick = (...keys: string[]): NamedValue[] =>
-    keys.filter((k) => s[k] !== undefined && !isRec(s[k])).map((k) => ({ name: k, value: Array.isArray(s[k]) ? (s[k] as unknown[]).join(', ') : String(s[k]) }));
+    keys.filter((k) => s[k] !== undefined && !isRec(s[k])).map((k) => ({ name: readerName(k), value: readerValue(s[k]) }));
+  /** The first entry of each name (a setting and its record can both carry it, e.g. BC5100). */
+  const unique = (items: NamedValue[]): NamedValue[] => items.filter((it, i) => items.findIndex((o) => o.name === it.name) === i);
 
   return {
     cosmology,
@@ -163,7 +167,7 @@ export function methodsView(meta: SiteMeta): MethodsView {
     linePriority: Array.isArray(s.linePriority) ? s.linePriority.map(String) : [],
     bolometric: {
       id: id(s.bolometric) || id(bolRec),
-      params: [...pick('bc5100'), ...values(bolRec, ['id', 'reference'])],
+      params: unique([...pick('bc5100'), ...values(bolRec, ['id', 'reference', 'method'])]),
       reference: str(bolRec.reference) ?? BOLOMETRIC_METHODS[id(s.bolometric) || id(bolRec)]?.reference,
       // Every label lbol_method can carry in this catalog, with the reference the build recorded for it.
       routes: isRec(bolRec.routes)
@@ -175,11 +179,11 @@ export function methodsView(meta: SiteMeta): MethodsView {
         : [],
     },
     eddington: [
-      ...(s.eddingtonPerMsun !== undefined ? [{ name: 'L_Edd per solar mass', value: String(s.eddingtonPerMsun), unit: 'erg/s', reference: str(edd.reference) }] : []),
+      ...(s.eddingtonPerMsun !== undefined ? [{ name: 'L_Edd per solar mass', value: readerValue(s.eddingtonPerMsun), unit: 'erg s⁻¹', reference: str(edd.reference) }] : []),
     ],
     growth: {
-      params: [...pick('efficiency', 'zSeed', 'lambdaSeed', 'dutyCycle', 'lightSeedMsun', 'heavySeedMsun'), ...values(growthRec, ['formula', 'reference'])],
-      formula: str(growthRec.formula),
+      params: unique([...pick('efficiency', 'zSeed', 'lambdaSeed', 'dutyCycle', 'lightSeedMsun', 'heavySeedMsun'), ...values(growthRec, ['formula', 'form', 'reference'])]),
+      formula: str(growthRec.formula) ?? str(growthRec.form),
       reference: str(growthRec.reference),
     },
     local: {
@@ -189,7 +193,7 @@ export function methodsView(meta: SiteMeta): MethodsView {
       reference: str(localRec.reference),
       params: values(localRec, ['id', 'reference', 'label', 'notes', 'x', 'a', 'b', 'pivot', 'scatterProvenance']),
     },
-    dust: { id: id(s.dustCurve) || id(dustRec), params: [...pick('intrinsicBalmer'), ...values(dustRec, ['id', 'reference', 'name', 'label'])], reference: str(dustRec.reference) },
+    dust: { id: id(s.dustCurve) || id(dustRec), params: unique([...pick('intrinsicBalmer'), ...values(dustRec, ['id', 'reference', 'name', 'label'])]), reference: str(dustRec.reference) },
     monteCarlo: pick('draws', 'seed'),
     constants: values(prov.constants ?? s.constants),
     allSettings: values(s),

@@ -17,9 +17,20 @@ export function formatAge(ageGyr: number): string {
 
 /**
  * Ticks for an age-of-the-universe axis over a redshift domain: round ages whose redshift lies
- * inside `zDomain`, thinned to at most `maxTicks` (every other one, then every third, …).
+ * inside `zDomain`, thinned to at most `maxTicks` (every other one, then every third, …), then
+ * kept only where a tick lies at least `minGap` (a fraction of the axis length) from the one
+ * kept before it, so the labels never run together where ages crowd (low z on a long axis,
+ * e.g. up to z_seed = 25).
  */
-export function cosmicTimeTicks(cosmology: Cosmology, zDomain: readonly [number, number], maxTicks = 8): AgeTick[] {
+export function cosmicTimeTicks(cosmology: Cosmology, zDomain: readonly [number, number], maxTicks = 8, minGap = 0): AgeTick[] {
+  const all = evenTicks(cosmology, zDomain, maxTicks);
+  const span = Math.abs(zDomain[1] - zDomain[0]) || 1;
+  const kept: AgeTick[] = [];
+  for (const t of all) if (!kept.length || Math.abs(t.z - kept[kept.length - 1]!.z) / span >= minGap) kept.push(t);
+  return kept;
+}
+
+function evenTicks(cosmology: Cosmology, zDomain: readonly [number, number], maxTicks: number): AgeTick[] {
   const zLo = Math.min(zDomain[0], zDomain[1]);
   const zHi = Math.max(zDomain[0], zDomain[1]);
   const ticks: AgeTick[] = [];

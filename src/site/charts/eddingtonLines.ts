@@ -38,7 +38,8 @@ export function eddingtonSegments(
     const x1 = Math.max(xDomain[0], yDomain[0] - c);
     const x2 = Math.min(xDomain[1], yDomain[1] - c);
     if (!(x2 > x1)) continue;
-    const labelX = x1 + 0.86 * (x2 - x1);
+    // near the upper end, but far enough inside the frame that the label is not clipped
+    const labelX = Math.max(x1, Math.min(x1 + 0.86 * (x2 - x1), xDomain[1] - 0.1 * (xDomain[1] - xDomain[0]), yDomain[1] - 0.1 * (yDomain[1] - yDomain[0]) - c));
     out.push({ lambda, x1, y1: x1 + c, x2, y2: x2 + c, labelX, labelY: labelX + c });
   }
   return out;

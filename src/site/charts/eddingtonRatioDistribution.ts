@@ -1,3 +1,4 @@
+import { formatFixed } from '../text/formatValue.ts';
 import * as Plot from '@observablehq/plot';
 import { CAVEATS } from './captions.ts';
 import type { ChartPoint } from './chartPoint.ts';
@@ -62,14 +63,14 @@ export function eddingtonRatioDistribution(rows: readonly CatalogRow[], options:
     ...bins.map((b) => ({
       x: (b.x1 + b.x2) / 2,
       y: b.detections + b.limits,
-      text: `${b.x1.toFixed(2)} ≤ log λ_Edd < ${b.x2.toFixed(2)}\n${b.detections} detected${b.limits ? `, ${b.limits} upper limits` : ''}`,
+      text: `${formatFixed(b.x1, 2)} ≤ log λ_Edd < ${formatFixed(b.x2, 2)}\n${b.detections} detected${b.limits ? `, ${b.limits} upper limits` : ''}`,
     })),
     ...markers.map((m) => ({
       x: m.x,
       y: m.y,
       id: m.id,
       role: m.role,
-      text: `${m.role === 'extra' ? `${m.id} (new object)` : m.id}\nlog λ_Edd: ${m.xLimit ? '< ' : ''}${m.x.toFixed(2)}`,
+      text: `${m.role === 'extra' ? `${m.id} (new object)` : m.id}\nlog λ_Edd: ${m.xLimit ? '< ' : ''}${formatFixed(m.x, 2)}`,
     })),
   ];
   const shown = catalog.length;

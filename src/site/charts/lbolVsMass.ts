@@ -1,3 +1,4 @@
+import { formatScientific } from '../text/formatValue.ts';
 import * as Plot from '@observablehq/plot';
 import { CAVEATS, countNote } from './captions.ts';
 import { EDDINGTON_RATIOS, eddingtonSegments, formatLambda } from './eddingtonLines.ts';
@@ -74,7 +75,7 @@ export function lbolVsMass(rows: readonly CatalogRow[], options: LbolVsMassOptio
       yLabel: 'log L_bol / erg s⁻¹',
       under,
       over,
-      legend: [{ label: `Constant Eddington ratio (L_Edd = ${lEdd.toPrecision(3)} erg s⁻¹ M☉⁻¹)`, symbol: LEGEND_LINE, stroke: PALETTE.guide, strokeDasharray: '5 4', strokeWidth: 1.2 }],
+      legend: [{ label: `Constant Eddington ratio (L_Edd = ${formatScientific(lEdd, 2)} erg s⁻¹ M☉⁻¹)`, symbol: LEGEND_LINE, stroke: PALETTE.guide, strokeDasharray: '5 4', strokeWidth: 1.2 }],
       caption: [
         'Bolometric luminosity against black-hole mass; dashed lines: constant Eddington ratio.',
         CAVEATS.mass,

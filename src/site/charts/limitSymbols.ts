@@ -57,3 +57,20 @@ export function limitSymbol(xLimit: boolean, yLimit: boolean): LimitSymbol {
   if (xLimit && yLimit) return LIMIT_DOWN_LEFT;
   return xLimit ? LIMIT_LEFT : LIMIT_DOWN;
 }
+
+/** Lower limit on y: bar and upward arrow. */
+export const LIMIT_UP: LimitSymbol = { draw: (ctx, size) => arrow(ctx, radius(size), 0, -1) };
+/** Lower limit on x: bar and rightward arrow. */
+export const LIMIT_RIGHT: LimitSymbol = { draw: (ctx, size) => arrow(ctx, radius(size), 1, 0) };
+
+/**
+ * The symbol for a point whose x and y are each a measurement (null), an upper limit (arrow
+ * toward smaller values) or a lower limit (arrow toward larger values). Null when neither is a limit.
+ */
+export function directedLimitSymbol(x: 'upper' | 'lower' | null, y: 'upper' | 'lower' | null): LimitSymbol | null {
+  if (!x && !y) return null;
+  const dirs: [number, number][] = [];
+  if (x) dirs.push([x === 'upper' ? -1 : 1, 0]);
+  if (y) dirs.push([0, y === 'upper' ? 1 : -1]);
+  return { draw: (ctx, size) => dirs.forEach(([dx, dy]) => arrow(ctx, radius(size), dx, dy)) };
+}

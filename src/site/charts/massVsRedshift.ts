@@ -1,3 +1,4 @@
+import { formatValue } from '../text/formatValue.ts';
 import * as Plot from '@observablehq/plot';
 import { getCosmology } from '../../core/cosmology/index.ts';
 import { CAVEATS, countNote } from './captions.ts';
@@ -40,8 +41,11 @@ export function massVsRedshift(rows: readonly CatalogRow[], options: MassVsRedsh
   const tracks = growthTracks(cosmology, s, zLow);
   const logLight = Math.log10(s.lightSeedMsun);
   const logHeavy = Math.log10(s.heavySeedMsun);
-  const yDomain = paddedExtent([...points.map((p) => p.y), logLight, logHeavy], [2, 10]);
-  const ticks = cosmicTimeTicks(cosmology, xDomain);
+  // room under the light seed for its label
+  const yDomain = paddedExtent([...points.map((p) => p.y), logLight - 0.7, logHeavy], [2, 10]);
+  // an age label is about 48 px wide: keep ticks at least 56 px apart on the plotted width
+  const plotWidth = (options.width ?? 640) - 80;
+  const ticks = cosmicTimeTicks(cosmology, xDomain, 8, 56 / plotWidth);
   const trackColour = { light: PALETTE.seedLight, heavy: PALETTE.seedHeavy } as const;
   const trackDash = { light: '8 3', heavy: '3 2' } as const;
   const under: Plot.Markish[] = [
@@ -56,7 +60,7 @@ export function massVsRedshift(rows: readonly CatalogRow[], options: MassVsRedsh
     ),
   ];
   const over: Plot.Markish[] = tracks.map((t) =>
-    Plot.text([t.points[0]!], { x: 'z', y: 'logM', text: () => `${t.seed} seed 10${superscript(Math.round(t.logMseed))} M☉`, textAnchor: 'start', dx: 6, dy: -13, fill: trackColour[t.seed], stroke: 'white', strokeWidth: 3, fontSize: 11, ...tag('growth track label') }),
+    Plot.text([t.points[0]!], { x: 'z', y: 'logM', text: () => `${t.seed} seed 10${superscript(Math.round(t.logMseed))} M☉`, textAnchor: 'start', dx: 4, dy: 14, fill: trackColour[t.seed], stroke: 'white', strokeWidth: 3, fontSize: 11, ...tag('growth track label') }),
   );
   const legend: LegendItem[] = tracks.map((t) => ({
     label: `Eddington-limited growth from a ${t.seed} seed (${t.seed === 'light' ? s.lightSeedMsun : s.heavySeedMsun} M☉ at z = ${s.zSeed})`,
@@ -87,7 +91,7 @@ export function massVsRedshift(rows: readonly CatalogRow[], options: MassVsRedsh
         countNote(shown, unplaced, 'a black-hole mass'),
       ].join(' '),
       ariaDescription: 'Scatter plot of log black-hole mass against redshift with the age of the universe on the top axis and growth tracks from light and heavy seeds.',
-      formatX: (z) => z.toFixed(3),
+      formatX: (z) => formatValue('z', z),
     },
     options,
   );

@@ -1,6 +1,6 @@
 import * as Plot from '@observablehq/plot';
 import type { LocalRelationId } from '../../core/derive/types.ts';
-import { getLocalRelation } from '../../core/local/index.ts';
+import { getLocalRelation, localLogMbh } from '../../core/local/index.ts';
 import { authorYear } from './authorYear.ts';
 import { CAVEATS, countNote } from './captions.ts';
 import { paddedExtent } from './extent.ts';
@@ -84,8 +84,14 @@ export function massVsStellarMass(rows: readonly CatalogRow[], options: MassVsSt
     }
     const last = c.line[c.line.length - 1]!;
     if (last.y > yDomain[0] && last.y < yDomain[1]) {
+      // the label goes on the side of the line with fewer objects, so it does not sit on the data,
+      // and never past the top or bottom of the frame
+      const above = points.filter((p) => p.y > localLogMbh(c.relation, p.x)).length;
+      const nearTop = last.y > yDomain[1] - 0.08 * (yDomain[1] - yDomain[0]);
+      const nearBottom = last.y < yDomain[0] + 0.08 * (yDomain[1] - yDomain[0]);
+      const below = nearTop || (!nearBottom && above > points.length - above);
       over.push(
-        Plot.text([last], { x: 'x', y: 'y', text: () => authorYear(c.relation.label), textAnchor: 'end', dx: -4, dy: -9, fill: stroke, stroke: 'white', strokeWidth: 3, fontSize: 11, ...tag('relation label') }),
+        Plot.text([last], { x: 'x', y: 'y', text: () => authorYear(c.relation.label), textAnchor: 'end', dx: -4, dy: below ? 13 : -9, fill: stroke, stroke: 'white', strokeWidth: 3, fontSize: 11, ...tag('relation label') }),
       );
     }
     legend.push({

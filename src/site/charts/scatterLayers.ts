@@ -1,3 +1,4 @@
+import { formatFixed } from '../text/formatValue.ts';
 import * as Plot from '@observablehq/plot';
 import { binGrid } from './binGrid.ts';
 import { isLimit, type ChartPoint, type PointRole } from './chartPoint.ts';
@@ -50,7 +51,7 @@ const ROLE_STYLE: Record<PointRole, { bar: string; barWidth: number; limitWidth:
   extra: { bar: PALETTE.extra, barWidth: 1.8, limitWidth: 2, label: 'new object' },
 };
 
-const fmt2 = (v: number): string => v.toFixed(2);
+const fmt2 = (v: number): string => formatFixed(v, 2);
 
 function errorBars(points: readonly ChartPoint[], role: PointRole): Plot.Markish[] {
   const s = ROLE_STYLE[role];

@@ -50,6 +50,64 @@ function valueTable(lines: ViewLine[], spreadHeading: string): HTMLElement {
   return wrap;
 }
 
+/**
+ * The page for no id or an id the catalog does not have: says so, links the list of every
+ * object, and hides the population charts (they would wait for an object that never comes).
+ */
+function notInCatalog(heading: HTMLElement, body: HTMLElement, charts: HTMLElement, id: string | null): void {
+  heading.textContent = 'Not in the catalog';
+  const base = document.body.dataset.base ?? '/';
+  const p = document.createElement('p');
+  p.className = 'status';
+  p.dataset.notFound = '';
+  p.textContent = id === null ? 'No object was named (the link has no ?id=…), so there is nothing to show: ' : `The object “${id}” is not in the catalog: `;
+  const a = document.createElement('a');
+  a.href = `${base}objects/`;
+  a.textContent = 'find it in the list of every object';
+  p.append(a, document.createTextNode('.'));
+  body.replaceChildren(p);
+  const section = charts.closest('section');
+  if (section) section.hidden = true;
+  else charts.hidden = true;
+}
+
+/** The rejected inputs of an invalid row, read from the build's data/rejections.json. */
+async function rejectedInputs(id: string): Promise<HTMLElement> {
+  const section = document.createElement('section');
+  section.dataset.rejected = '';
+  section.append(text('h2', 'Rejected inputs'));
+  let list: { column: string; value: string; reason: string; message: string }[] = [];
+  try {
+    const res = await fetch(`${document.body.dataset.base ?? '/'}data/rejections.json`);
+    if (res.ok) list = ((await res.json()) as Record<string, typeof list>)[id] ?? [];
+  } catch {
+    // shown as "no detail" below
+  }
+  if (!list.length) {
+    section.append(text('p', 'This row failed validation, but the build recorded no detail for it.'));
+    return section;
+  }
+  section.append(text('p', 'These input values failed validation, so no quantity was derived for this object:'));
+  const wrap = document.createElement('div');
+  wrap.className = 'table-wrap';
+  const table = document.createElement('table');
+  table.className = 'data';
+  const head = document.createElement('tr');
+  for (const h of ['Column', 'Value given', 'Why it was rejected']) head.append(text('th', h));
+  table.createTHead().append(head);
+  const body = table.createTBody();
+  for (const r of list) {
+    const tr = document.createElement('tr');
+    const code = document.createElement('td');
+    code.append(text('code', r.column));
+    tr.append(code, text('td', r.value === '' ? '(empty)' : r.value), text('td', r.reason || r.message));
+    body.append(tr);
+  }
+  wrap.append(table);
+  section.append(wrap);
+  return section;
+}
+
 export async function startObjectViewer(root: HTMLElement): Promise<void> {
   bindDbStatus(document.querySelector<HTMLElement>('[data-db-status]'));
   const heading = root.querySelector<HTMLElement>('h1')!;
@@ -57,8 +115,7 @@ export async function startObjectViewer(root: HTMLElement): Promise<void> {
   const charts = document.querySelector<HTMLElement>('[data-population="manual"]')!;
   const id = new URLSearchParams(location.search).get('id');
   if (!id) {
-    heading.textContent = 'No object chosen';
-    body.replaceChildren(text('p', 'This page shows one object: open it from a query result, a chart or a link with ?id=<identifier>.'));
+    notInCatalog(heading, body, charts, null);
     return;
   }
   heading.textContent = id;
@@ -67,7 +124,7 @@ export async function startObjectViewer(root: HTMLElement): Promise<void> {
     const rs = await queryCensus(`SELECT * FROM ${TABLE} WHERE id = ${sqlString(id)} LIMIT 1`);
     const [row] = rowObjects(rs) as CatalogRow[];
     if (!row) {
-      body.replaceChildren(text('p', `There is no object with the identifier “${id}” in this catalog.`, 'status'));
+      notInCatalog(heading, body, charts, id);
       return;
     }
     const columns = JSON.parse(root.dataset.columns ?? '{}') as Record<string, ColumnMeta>;
@@ -82,7 +139,9 @@ export async function startObjectViewer(root: HTMLElement): Promise<void> {
     right.append(text('h2', 'Inputs'), valueTable(view.inputs, '1σ error'));
     if (view.other.length) right.append(text('h3', 'Other columns'), valueTable(view.other, ''));
     grid.append(left, right);
-    parts.push(grid, text('h2', 'Flags'));
+    parts.push(grid);
+    if (view.flags.some((f) => f.code === 'invalid_input')) parts.push(await rejectedInputs(id));
+    parts.push(text('h2', 'Flags'));
     if (view.flags.length === 0) parts.push(text('p', 'No flags: every quantity was derived without a special condition.'));
     else {
       const ul = document.createElement('ul');

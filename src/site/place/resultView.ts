@@ -2,6 +2,7 @@
  * Browser-only: builds the "Where it falls" block of the compare page from a placed object's
  * derived row and its report. Text goes in through textContent only (ids are arbitrary text).
  */
+import { formatFixed, formatValue, MINUS, MISSING } from '../text/formatValue.ts';
 import type { DerivedObject } from '../../core/derive/types.ts';
 import type { LocalRelation } from '../../core/local/index.ts';
 import { objectHref } from '../charts/mountChart.ts';
@@ -19,9 +20,8 @@ function el(tag: string, attrs: Record<string, string> = {}, ...children: Child[
   return e;
 }
 
-const f2 = (v: number | null | undefined): string =>
-  v === null || v === undefined || !Number.isFinite(v) ? '—' : v.toFixed(2).replace(/^-(0\.00)$/, '$1').replace(/^-/, '−');
-const signed = (v: number): string => (v >= 0 ? '+' : '−') + Math.abs(v).toFixed(2);
+const f2 = (v: number | null | undefined): string => (v === null || v === undefined || !Number.isFinite(v) ? MISSING : formatFixed(v, 2));
+const signed = (v: number): string => (v >= 0 ? '+' : MINUS) + formatFixed(Math.abs(v), 2);
 
 function rankText(r: PercentileRank, isLimit: boolean): string {
   if (r.percentile === null) return r.n === 0 ? 'no catalog objects to compare' : '—';
@@ -39,7 +39,7 @@ export function resultView(
   notes: readonly string[],
 ): HTMLElement {
   const root = el('div', { class: 'place-result' });
-  root.append(el('p', { class: 'lede' }, `${object.id} at z = ${object.z.toFixed(3)}`));
+  root.append(el('p', { class: 'lede' }, `${object.id} at z = ${formatValue('z', object.z)}`));
 
   const values = el('table', { class: 'data values' }, el('caption', { class: 'visually-hidden' }, 'Derived values of the new object'));
   values.append(el('thead', {}, el('tr', {}, el('th', { scope: 'col' }, 'Quantity'), el('th', { scope: 'col', class: 'num' }, 'Value'), el('th', { scope: 'col', class: 'num' }, '16–84 % interval'))));
@@ -66,7 +66,7 @@ export function resultView(
 
   root.append(el('h3', {}, 'Percentile rank in the catalog'));
   const ranks = el('table', { class: 'data', id: 'place-ranks' }, el('caption', { class: 'visually-hidden' }, 'Percentile ranks'));
-  const zw = report.zWindow ? `z ${report.zWindow[0].toFixed(2)}–${report.zWindow[1].toFixed(2)}` : 'its redshift range';
+  const zw = report.zWindow ? `z ${formatFixed(report.zWindow[0], 2)}–${formatFixed(report.zWindow[1], 2)}` : 'its redshift range';
   ranks.append(el('thead', {}, el('tr', {}, el('th', { scope: 'col' }, 'Quantity'), el('th', { scope: 'col' }, 'Among all catalog objects'), el('th', { scope: 'col' }, `Among those at ${zw}`))));
   const rb = el('tbody');
   for (const r of report.ranks) {
@@ -92,7 +92,7 @@ export function resultView(
     root.append(el('p', { class: 'small muted' }, 'In redshift, log M_BH and log λ_Edd, each scaled by its spread over the catalog.'));
     const ol = el('ol', { id: 'place-neighbours' });
     for (const n of report.neighbours) {
-      ol.append(el('li', {}, el('a', { href: objectHref(base, n.id) }, n.id), ` — z = ${n.z.toFixed(2)}, log M_BH = ${f2(n.logMbh)}, log λ_Edd = ${f2(n.logEddRatio)} (distance ${n.distance.toFixed(2)})`));
+      ol.append(el('li', {}, el('a', { href: objectHref(base, n.id) }, n.id), ` — z = ${formatValue('z', n.z)}, log M_BH = ${f2(n.logMbh)}, log λ_Edd = ${f2(n.logEddRatio)} (distance ${n.distance.toFixed(2)})`));
     }
     root.append(ol);
   }

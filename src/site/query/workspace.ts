@@ -115,6 +115,7 @@ export function startWorkspace(): void {
         ? `The query returned more than ${ROW_CAP.toLocaleString('en')} rows: the first ${ROW_CAP.toLocaleString('en')} are shown. “Download result as CSV” runs the query again and saves every row.`
         : '';
       if (byReader) history.replaceState(null, '', hrefWithSql(location.href, editor.value()));
+      document.dispatchEvent(new CustomEvent('census-result', { detail: { rs, sql } })); // the result chart (src/site/resultChart)
       await redrawCharts(sql, rs, my, controller.signal);
     } catch (err) {
       if (my !== generation) return;

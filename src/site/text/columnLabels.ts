@@ -49,17 +49,28 @@ export function columnLabel(column: string): string {
   return column;
 }
 
-/** Units as a reader writes them: 'dex(solMass)' or 'log(solMass)' → 'log M☉', 'erg.s**-1' → 'erg/s'. '' for none. */
+const SUP: Record<string, string> = { '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹', '-': '⁻', '+': '' };
+
+/**
+ * Units written one way across the site: powers as superscripts with the minus sign, a space
+ * between factors, log units as "log <unit>", solar masses as M☉. 'log(solMass)' → 'log M☉',
+ * 'erg s-1' and 'erg/s' → 'erg s⁻¹', 'erg s-1 cm-2' → 'erg s⁻¹ cm⁻²', 'km/s' → 'km s⁻¹'.
+ * '' for none.
+ */
 export function unitText(unit: string | undefined): string {
   if (!unit) return '';
-  return unit
-    .replace(/^(?:log|dex)\((.*)\)$/, 'log $1')
-    .replace(/erg\.s\*\*-1\.cm\*\*-2/g, 'erg/s/cm²')
-    .replace(/erg\.s\*\*-1/g, 'erg/s')
-    .replace(/km\.s\*\*-1/g, 'km/s')
-    .replace(/solMass/g, 'M☉')
-    .replace(/^log10 Msun$/, 'log M☉')
-    .replace(/Msun/g, 'M☉')
-    .replace(/erg s-1 cm-2/g, 'erg/s/cm²')
-    .replace(/\bkm\/s\b/, 'km/s');
+  // VOUnits as the catalog writes them: dex(x) is log x, '.' joins factors, '**' marks a power.
+  let u = unit.trim().replace(/^dex\((.*)\)$/, 'log($1)').replace(/\*\*/g, '').replace(/\.(?=[A-Za-z])/g, ' ');
+  let log = '';
+  const m = /^log(?:10)?\s*\((.*)\)$/.exec(u) ?? /^log(?:10)?\s+(.*)$/.exec(u);
+  if (m) {
+    log = 'log ';
+    u = m[1]!;
+  }
+  u = u.replace(/solMass|Msun/g, 'M☉').replace(/solLum|Lsun/g, 'L☉');
+  // a/b/c → a b⁻¹ c⁻¹
+  const [head, ...divisors] = u.split('/');
+  const parts = [head!.trim(), ...divisors.map((d) => d.trim() + '-1')].join(' ').split(/\s+/).filter(Boolean);
+  const written = parts.map((p) => p.replace(/^([A-Za-zµμ☉Å]+)\^?([+-]?\d+)$/, (_, b: string, e: string) => b + [...e].map((c) => SUP[c] ?? c).join('')));
+  return log + written.join(' ');
 }

@@ -18,6 +18,11 @@ const FALLBACK: Record<string, string> = {
   no_lbol: 'No bolometric luminosity could be derived (no usable line or continuum).',
 };
 
+/** Words the site says instead of the core's (the site shows what the core's words point elsewhere for). */
+const SITE_WORDS: Record<string, string> = {
+  invalid_input: 'An input value failed validation; no quantity was derived. The rejected value and the reason are listed on the object page.',
+};
+
 /** The codes in a `flags` cell, in order, without blanks. */
 export function splitFlags(cell: unknown): string[] {
   if (typeof cell !== 'string') return [];
@@ -26,5 +31,5 @@ export function splitFlags(cell: unknown): string[] {
 
 /** A sentence for one flag code; unknown codes say so rather than guess. */
 export function flagText(code: string): string {
-  return (FLAG_DESCRIPTIONS as Record<string, string>)[code] ?? FALLBACK[code] ?? 'No description is recorded for this flag.';
+  return SITE_WORDS[code] ?? (FLAG_DESCRIPTIONS as Record<string, string>)[code] ?? FALLBACK[code] ?? 'No description is recorded for this flag.';
 }

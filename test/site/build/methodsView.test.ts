@@ -27,16 +27,35 @@ describe('methodsView', () => {
 
   it('reads the cosmology, the Eddington luminosity, the growth model, the Monte Carlo settings and the constants', () => {
     expect(m.cosmology).toMatchObject({ id: 'planck18', name: 'Planck18', reference: 'Planck Collaboration 2020' });
-    expect(m.eddington[0]).toMatchObject({ value: '1.26e+38', reference: 'Shen 2011' });
+    expect(m.eddington[0]).toMatchObject({ value: '1.26×10³⁸', reference: 'Shen 2011' });
     expect(m.growth.reference).toBe('Salpeter 1964');
-    expect(m.monteCarlo).toEqual([{ name: 'draws', value: '2000' }, { name: 'seed', value: '1' }]);
-    expect(m.constants[0]).toMatchObject({ name: 'speedOfLight', unit: 'cm s^-1' });
+    expect(m.monteCarlo).toEqual([{ name: 'Monte Carlo draws per object', value: '2000' }, { name: 'Global random seed', value: '1' }]);
+    expect(m.constants[0]).toMatchObject({ name: 'Speed of light c', value: '2.998×10¹⁰', unit: 'cm s⁻¹' });
   });
 
   it('fills the local relation and the bolometric reference from the tool records when the sidecar names only the id', () => {
     expect(m.local.reference).toMatch(/Reines & Volonteri 2015/);
     expect(m.local.formula).toBe('log(M_BH/M☉) = 7.450 + 1.05 · (log(M*/M☉) − 11)');
     expect(m.bolometric.reference).toMatch(/Greene & Ho 2005.*eq\. 1/);
+  });
+
+  it('shows reader-facing names and rounded values, never the program identifiers (tEddGyr 0.4504904122304202, scatterDex, fwhmKms)', () => {
+    const raw = structuredClone(sidecar) as typeof sidecar & { settings: { calibrations: { halpha: Record<string, unknown> } } };
+    raw.settings.growth.tEddGyr = 0.4504904122304202;
+    raw.settings.calibrations.halpha.validity = { logL: [40, 44], fwhmKms: [500, 10000] };
+    raw.settings.calibrations.halpha.notes = 'Estimates the continuum with logL5100FromLogLHbeta when needed.';
+    const v = methodsView(normalizeMeta(raw));
+    const shown = JSON.stringify(v);
+    for (const id of ['tEddGyr', 'scatterDex', 'fwhmKms', 'logL5100FromLogLHbeta', '0.4504904122304202']) expect(shown).not.toContain(id);
+    expect(v.growth.params).toContainEqual({ name: 'Eddington time t_Edd (Gyr)', value: '0.4505' });
+    expect(v.calibrations[0]!.validity).toBe('log L (erg s⁻¹) 40–44; FWHM (km s⁻¹) 500–10000');
+  });
+
+  it('lists BC5100 once though both the settings and the bolometric record carry it', () => {
+    const raw = structuredClone(sidecar) as Record<string, unknown> & { settings: Record<string, unknown> };
+    raw.settings.bolometric = { method: 'halpha_gh05_bc5100', bc5100: 10.33, reference: 'GH05; Richards 2006' };
+    const v = methodsView(normalizeMeta(raw));
+    expect(v.bolometric.params.filter((p) => /BC5100/.test(p.name))).toHaveLength(1);
   });
 
   it('gives no formula for records without coefficients', () => {

@@ -69,6 +69,16 @@ describe('lbolVsMass', () => {
     expectClose(yAt8, 46.100370545, { atol: 1e-9, source: 'computed: log10(1.26e38) + 8' });
   });
 
+  it('keeps every λ label at least a tenth of the frame inside its top and right edges (the λ = 1 label was clipped)', () => {
+    const x: [number, number] = [6, 9];
+    const y: [number, number] = [43.5, 46.6];
+    for (const seg of eddingtonSegments(EDDINGTON_RATIOS, 1.26e38, x, y)) {
+      expect(seg.labelX).toBeLessThanOrEqual(x[1] - 0.1 * (x[1] - x[0]) + 1e-9);
+      expect(seg.labelY).toBeLessThanOrEqual(y[1] - 0.1 * (y[1] - y[0]) + 1e-9);
+      expect(seg.labelX).toBeGreaterThanOrEqual(seg.x1);
+    }
+  });
+
   it('draws the λ = 1 line through the pixel of (8, log 1.26e38 + 8)', () => {
     const rows = fakeRows({ n: 50 });
     const el = lbolVsMass(rows, { document: testDocument(), settings });

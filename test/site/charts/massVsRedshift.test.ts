@@ -39,12 +39,38 @@ describe('massVsRedshift', () => {
     const el = massVsRedshift(fakeRows({ n: 20 }), { document: testDocument(), settings });
     expect(markElements(el, 'growth track light')).toHaveLength(1);
     expect(markElements(el, 'growth track heavy')).toHaveLength(1);
-    const ticks = cosmicTimeTicks(cosmo, [3.8, 20.5]);
+    const ticks = cosmicTimeTicks(cosmo, [3.8, 20.5], 8, 56 / 560);
     expect(ticks.length).toBeGreaterThan(3);
     for (const t of ticks) expectClose(cosmo.ageGyr(t.z), t.ageGyr, { rtol: 1e-9, source: 'internal: redshiftAtAgeGyr inverts ageGyr' });
     const text = svgOf(el).textContent ?? '';
     for (const t of ticks) expect(text).toContain(t.label);
     expect(text).toContain('Age of the universe');
+  });
+
+  it('keeps the age ticks at least 56 px apart with z_seed = 25 (they ran together as "600 Myr800 Myr1.2 Gyr")', () => {
+    const wide = { ...settings, zSeed: 25 };
+    const rows = fakeRows({ n: 20 });
+    const el = massVsRedshift(rows, { document: testDocument(), settings: wide });
+    const labels = [...svgOf(el).querySelectorAll('g.census-cosmic-time-axis text')].map((t) => t.textContent ?? '').filter((t) => /yr$/.test(t));
+    expect(labels.length).toBeGreaterThan(2);
+    const ticks = cosmicTimeTicks(cosmo, [3.5, 25.5], 8, 56 / 560).map((t) => t.z);
+    for (let i = 1; i < ticks.length; i++) expect(((ticks[i - 1]! - ticks[i]!) / 22) * 560).toBeGreaterThanOrEqual(56);
+    // without the spacing rule the crowded ticks come back
+    const crowded = cosmicTimeTicks(cosmo, [3.5, 25.5], 8, 0).map((t) => t.z);
+    expect(crowded.some((z, i) => i > 0 && ((crowded[i - 1]! - z) / 22) * 560 < 56)).toBe(true);
+  });
+
+  it('puts each seed label below the start of its track, where the rising track does not cross it', () => {
+    const el = massVsRedshift(fakeRows({ n: 20 }), { document: testDocument(), settings });
+    const groups = [...svgOf(el).querySelectorAll('g.census-growth-track-label')];
+    expect(groups).toHaveLength(2);
+    // shifted down (SVG y grows downward) from the seed point; the track only rises after its seed
+    for (const g of groups) {
+      const m = /translate\(([-\d.]+),\s*([-\d.]+)\)/.exec(g.getAttribute('transform') ?? '');
+      expect(Number(m?.[2])).toBeGreaterThan(0);
+    }
+    const [light] = growthTracks(cosmo, settings, 4);
+    expect(light!.points.every((p, i) => i === 0 || p.logM >= light!.points[i - 1]!.logM)).toBe(true);
   });
 
   it('formats ages in Myr below 1 Gyr', () => {

@@ -28,6 +28,18 @@ describe('massVsStellarMass', () => {
     expect(legend.some((l) => l.includes('Reines & Volonteri 2015') && l.includes('(catalog)'))).toBe(true);
   });
 
+  it('puts a relation label on the side of its line with fewer objects, off the data', () => {
+    // invented rows: every object lies well above both relations
+    const rows = Array.from({ length: 30 }, (_, i) => ({ id: `A-${i}`, log_mstar: 9 + i * 0.07, log_mbh: 9.5 + (i % 5) * 0.1 }));
+    const el = massVsStellarMass(rows, { document: testDocument(), settings });
+    const groups = [...el.querySelectorAll('g.census-relation-label')];
+    expect(groups.length).toBeGreaterThan(0);
+    for (const g of groups) {
+      const m = /translate\(([-\d.]+),\s*([-\d.]+)\)/.exec(g.getAttribute('transform') ?? '');
+      expect(Number(m?.[2])).toBeGreaterThan(0); // below the line: the data lie above it
+    }
+  });
+
   it('draws each relation from src/core/local with a band of ± its intrinsic scatter', () => {
     const curves = relationCurves('rv15_agn', ['kh13_mbulge'], [8, 11]);
     expect(curves.map((c) => c.relation.id)).toEqual(['rv15_agn', 'kh13_mbulge']);

@@ -10,11 +10,18 @@ describe('column labels', () => {
   });
   it('writes VOUnits as a reader does', () => {
     expect(unitText('log(solMass)')).toBe('log M☉');
-    expect(unitText('log(erg/s)')).toBe('log erg/s');
+    expect(unitText('log(erg/s)')).toBe('log erg s⁻¹');
+    // units written one way: the catalog's 'erg s-1' and 'log(erg/s)' read alike
+    expect(unitText('erg s-1')).toBe('erg s⁻¹');
+    expect(unitText('erg s-1 cm-2')).toBe('erg s⁻¹ cm⁻²');
+    expect(unitText('km s-1')).toBe('km s⁻¹');
+    expect(unitText('km/s')).toBe('km s⁻¹');
+    expect(unitText('Mpc')).toBe('Mpc');
+    // VOUnits as the catalog now writes them read the same way
     expect(unitText('dex(solMass)')).toBe('log M☉');
-    expect(unitText('dex(erg.s**-1)')).toBe('log erg/s');
-    expect(unitText('erg.s**-1.cm**-2')).toBe('erg/s/cm²');
-    expect(unitText('km.s**-1')).toBe('km/s');
+    expect(unitText('dex(erg.s**-1)')).toBe('log erg s⁻¹');
+    expect(unitText('erg.s**-1.cm**-2')).toBe('erg s⁻¹ cm⁻²');
+    expect(unitText('km.s**-1')).toBe('km s⁻¹');
     expect(unitText('')).toBe('');
   });
 });

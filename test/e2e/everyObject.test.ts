@@ -1,0 +1,191 @@
+/**
+ * The list of every object, the chart of any query result, and the newcomer's rough edges
+ * that belong to them: an unknown object, numbers printed one way, reader-facing methods,
+ * and pages that fit a 390 px phone.
+ */
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import type { Browser, Page } from 'playwright-core';
+import { launchBrowser } from './browser.ts';
+import { nodeQuery, openSite } from './sitePage.ts';
+
+const summaryTotal = (page: Page) =>
+  page.waitForFunction(() => document.querySelector('[data-object-list]')?.getAttribute('aria-busy') === null && document.querySelector('[data-list-summary]')?.getAttribute('data-total'), undefined, { timeout: 60_000 }).then(async () => Number(await page.locator('[data-list-summary]').getAttribute('data-total')));
+
+describe('the list of every object', () => {
+  let browser: Browser;
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it('lists every object a page at a time, finds one by id, filters by flag, sorts by a column, and links each row to its page', async () => {
+    const url = inject('siteUrl');
+    const parquet = inject('demoParquet');
+    const [{ n }] = (await nodeQuery(parquet, 'SELECT count(*) AS n FROM census')) as [{ n: number }];
+    const [{ id: someId }] = (await nodeQuery(parquet, 'SELECT id FROM census ORDER BY id DESC LIMIT 1')) as [{ id: string }];
+    const [{ n: lensed }] = (await nodeQuery(parquet, `SELECT count(*) AS n FROM census WHERE list_contains(list_transform(string_split(flags, ','), f -> trim(f)), 'lensed')`)) as [{ n: number }];
+    const [{ id: topMass }] = (await nodeQuery(parquet, 'SELECT id FROM census WHERE log_mbh IS NOT NULL ORDER BY log_mbh DESC, id LIMIT 1')) as [{ id: string }];
+    const site = await openSite(browser, url);
+    try {
+      const { page } = site;
+      await page.goto(new URL('objects/', url).href);
+      expect(await summaryTotal(page)).toBe(n);
+      expect(await page.locator('table[data-object-list] tbody tr').count()).toBe(Math.min(50, n));
+
+      await page.fill('#list-q', someId.toLowerCase());
+      await page.waitForFunction((id) => document.querySelector('table[data-object-list] tbody tr td a')?.textContent === id, someId, { timeout: 30_000 });
+      expect(await summaryTotal(page)).toBe(1);
+      expect(new URL(page.url()).searchParams.get('q')).toBe(someId.toLowerCase());
+
+      await page.fill('#list-q', '');
+      await page.selectOption('#list-flag', 'lensed');
+      await page.waitForFunction((k) => document.querySelector('[data-list-summary]')?.getAttribute('data-total') === String(k), lensed, { timeout: 30_000 });
+
+      await page.selectOption('#list-flag', '');
+      await page.selectOption('#list-sort', 'log_mbh');
+      await page.selectOption('#list-desc', '1');
+      await page.waitForFunction((id) => document.querySelector('table[data-object-list] tbody tr td a')?.textContent === id, topMass, { timeout: 30_000 });
+
+      // the state is in the link: reopening it gives the same first row
+      await page.goto(page.url());
+      await page.waitForFunction((id) => document.querySelector('table[data-object-list] tbody tr td a')?.textContent === id, topMass, { timeout: 60_000 });
+      await page.locator('table[data-object-list] tbody tr td a').first().click();
+      await page.waitForURL(/\/object\//);
+      await expect(page.locator('h1').textContent()).resolves.toBe(topMass);
+      expect(site.foreign()).toEqual([]);
+      expect(site.errors).toEqual([]);
+    } finally {
+      await site.close();
+    }
+  });
+
+  it('says an unknown or missing object is not in the catalog, links the list, and leaves no chart at "Drawing…"', async () => {
+    const url = inject('siteUrl');
+    const site = await openSite(browser, url);
+    try {
+      const { page } = site;
+      for (const href of ['object/', 'object/?id=NOT-AN-OBJECT-42']) {
+        await page.goto(new URL(href, url).href);
+        await page.locator('[data-not-found]').waitFor({ timeout: 60_000 });
+        await expect(page.locator('h1').textContent()).resolves.toBe('Not in the catalog');
+        await expect(page.locator('[data-not-found] a').getAttribute('href')).resolves.toBe('/objects/');
+        expect(await page.locator('.chart-note:visible', { hasText: 'Drawing' }).count()).toBe(0);
+      }
+      expect(site.errors).toEqual([]);
+    } finally {
+      await site.close();
+    }
+  });
+});
+
+describe('the chart of a query result', () => {
+  let browser: Browser;
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it('draws the chosen columns with bars and limit arrows, keeps the choice in the link, and exports SVG', async () => {
+    const url = inject('siteUrl');
+    const parquet = inject('demoParquet');
+    const [{ limits, placed }] = (await nodeQuery(
+      parquet,
+      `SELECT count(*) FILTER (WHERE contains(coalesce(flags, ''), 'mbh_upper_limit')) AS limits, count(*) AS placed FROM census WHERE log_mbh IS NOT NULL AND z IS NOT NULL`,
+    )) as [{ limits: number; placed: number }];
+    expect(limits).toBeGreaterThan(0);
+    const site = await openSite(browser, url);
+    try {
+      const { page } = site;
+      const sql = 'SELECT id, z, log_mbh, log_mbh_p16, log_mbh_p84 FROM census';
+      await page.goto(new URL(`query/?sql=${encodeURIComponent(sql)}&cx=z&cy=log_mbh`, url).href);
+      await page.locator('[data-run]').click();
+      const mount = page.locator('[data-result-chart-mount]');
+      await mount.locator('svg').first().waitFor({ timeout: 60_000 });
+      await expect(page.locator('[data-chart-form] select[name="x"]').inputValue()).resolves.toBe('z');
+      // limits come from the catalog's flags even though the SELECT has no flags column
+      await page.waitForFunction((n) => document.querySelectorAll('[data-result-chart-mount] g.census-result-limit > *').length === n, limits, { timeout: 30_000 });
+      expect(await mount.locator('g.census-result-point > *').count()).toBe(placed - limits);
+      expect(await mount.locator('g.census-error-bar-y > *').count()).toBe(placed - limits);
+
+      await page.selectOption('[data-chart-form] select[name="colour"]', 'log_mbh_p84');
+      await page.locator('[data-chart-form] input[name="ylog"]').check();
+      await page.waitForFunction(() => new URL(location.href).searchParams.get('clog') === 'y');
+      const link = new URL(page.url());
+      expect(link.searchParams.get('sql')).toBe(sql);
+      expect(link.searchParams.get('cc')).toBe('log_mbh_p84');
+
+      const [download] = await Promise.all([page.waitForEvent('download'), mount.locator('button', { hasText: 'Download SVG' }).click()]);
+      expect(download.suggestedFilename()).toBe('census-log_mbh-vs-z.svg');
+      expect(site.foreign()).toEqual([]);
+      expect(site.errors).toEqual([]);
+    } finally {
+      await site.close();
+    }
+  });
+
+  it('overlays the Eddington lines when x is the black-hole mass and y the bolometric luminosity', async () => {
+    const url = inject('siteUrl');
+    const site = await openSite(browser, url);
+    try {
+      const { page } = site;
+      const sql = 'SELECT id, log_mbh, log_lbol FROM census';
+      await page.goto(new URL(`query/?sql=${encodeURIComponent(sql)}&cx=log_mbh&cy=log_lbol`, url).href);
+      await page.locator('[data-run]').click();
+      await page.locator('[data-result-chart-mount] g.census-eddington-line').first().waitFor({ timeout: 60_000 });
+      await page.locator('[data-chart-form] input[name="overlays"]').uncheck();
+      await page.waitForFunction(() => !document.querySelector('[data-result-chart-mount] g.census-eddington-line'));
+    } finally {
+      await site.close();
+    }
+  });
+});
+
+describe('rough edges a newcomer hit', () => {
+  let browser: Browser;
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it('fits every page into a 390 px wide screen without horizontal scrolling', async () => {
+    const url = inject('siteUrl');
+    const [{ id }] = (await nodeQuery(inject('demoParquet'), `SELECT id FROM census WHERE log_mbh IS NOT NULL ORDER BY id LIMIT 1`)) as [{ id: string }];
+    const context = await browser.newContext({ viewport: { width: 390, height: 844 } });
+    try {
+      const page = await context.newPage();
+      const { objectSlug } = await import('../../src/site/objectSlug.ts');
+      for (const path of ['', 'objects/', 'query/', 'place/', 'methods/', `object/${objectSlug(id)}/`, 'object/?id=nope']) {
+        await page.goto(new URL(path, url).href);
+        await page.waitForTimeout(path === '' || path.startsWith('object/') ? 2500 : 500);
+        const [scroll, client] = await page.evaluate(() => [document.documentElement.scrollWidth, document.documentElement.clientWidth]);
+        expect(scroll, `page /${path} is ${scroll} px wide`).toBeLessThanOrEqual(client);
+      }
+    } finally {
+      await context.close();
+    }
+  });
+
+  it('shows the methods with reader-facing names and rounded values, and BC5100 once', async () => {
+    const res = await fetch(new URL('methods/', inject('siteUrl')));
+    const html = await res.text();
+    for (const internal of ['tEddGyr', 'scatterDex', 'fwhmKms', 'logL5100FromLogLHbeta', '0.4504904122304202']) expect(html).not.toContain(internal);
+    const bolometric = html.slice(html.indexOf('id="bolometric"'), html.indexOf('id="eddington"'));
+    expect(bolometric.match(/BC5100<\/th>/g) ?? []).toHaveLength(1);
+  });
+
+  it('prints numbers one way: the minus sign, and dl_mpc in whole Mpc on every object page (it was 36980 and 1.03e5)', async () => {
+    const url = inject('siteUrl');
+    const rows = (await nodeQuery(inject('demoParquet'), `SELECT id, dl_mpc, log_edd_ratio FROM census WHERE log_edd_ratio < 0 AND dl_mpc IS NOT NULL ORDER BY dl_mpc DESC LIMIT 1`)) as { id: string; dl_mpc: number; log_edd_ratio: number }[];
+    const { objectSlug } = await import('../../src/site/objectSlug.ts');
+    const html = await (await fetch(new URL(`object/${objectSlug(rows[0]!.id)}/`, url))).text();
+    expect(html).toContain(`>${Math.round(rows[0]!.dl_mpc)}<`);
+    expect(html).toContain(`−${Math.abs(rows[0]!.log_edd_ratio).toFixed(2)}`);
+    expect(html).not.toMatch(/>\s*-\d/);
+  });
+});
