@@ -3,6 +3,7 @@ export const MAIN_HELP = `dawn-census — derive black-hole properties for a cat
 
 Usage:
   dawn-census derive <catalog> [options]   derive a catalog into Parquet with provenance
+  dawn-census population -c <config>       space densities and the selection-aware M_BH–M* relation
   dawn-census --help | -h                  this help
   dawn-census --version | -V               the version
 

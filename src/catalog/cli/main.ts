@@ -4,6 +4,7 @@ import { CatalogError } from '../readers/CatalogError.ts';
 import { processIo } from './cliIo.ts';
 import type { CliIo } from './cliIo.ts';
 import { deriveCommand } from './deriveCommand.ts';
+import { parsePopulationArgs, populationCommand, POPULATION_HELP } from './populationCommand.ts';
 import type { DeriveRunOptions } from '../derive/runDerive.ts';
 import { EXIT } from './exitCodes.ts';
 import { DERIVE_HELP, MAIN_HELP } from './helpText.ts';
@@ -31,6 +32,15 @@ export async function main(argv: readonly string[], io: CliIo = processIo(), opt
     }
     if (command === '--version' || command === '-V') {
       io.stdout.write(`dawn-census ${toolVersion()}\n`);
+      return EXIT.ok;
+    }
+    if (command === 'population') {
+      const pargs = parsePopulationArgs(rest);
+      if (pargs.help) {
+        io.stdout.write(POPULATION_HELP);
+        return EXIT.ok;
+      }
+      await populationCommand(pargs, io.stderr);
       return EXIT.ok;
     }
     if (command !== 'derive') throw new UsageError(`unknown command "${command}" (see dawn-census --help)`);

@@ -61,7 +61,16 @@ export function fitRelation(
   const n = data.length;
   const varx = sxx / n - (sx / n) ** 2;
   const b0 = varx > 1e-6 ? Math.min(3, Math.max(-1, (sxy / n - (sx / n) * (sy / n)) / varx)) : 1;
-  const a0 = sy / n + b0 * (RELATION_PIVOT - sx / n);
+  const aLsq = sy / n + b0 * (RELATION_PIVOT - sx / n);
+  // The observed points sit above the intrinsic relation when selection matters: scan the intercept below the
+  // least-squares one (and a little above) for the best start, so burn-in does not have to travel a dex.
+  let a0 = aLsq;
+  let best = -Infinity;
+  for (let d = -2; d <= 0.5 + 1e-9; d += 0.1) {
+    const t = Float64Array.of(aLsq + d, b0, 0.5);
+    const lp = logProb(t);
+    if (lp > best) { best = lp; a0 = aLsq + d; }
+  }
   const r = ensembleSample(logProb, [a0, b0, 0.5], [0.1, 0.1, 0.1], rng, opts);
   const a = column(r.samples, 0);
   const b = column(r.samples, 1);
@@ -97,6 +106,36 @@ export function selectionBias(
       norm += w;
     }
     if (norm > 0) { num += (weights[t] as number) * (e / norm - mu); wsum += weights[t] as number; }
+  }
+  return wsum > 0 ? num / wsum : NaN;
+}
+
+/**
+ * Fraction of the intrinsic population (black holes about the relation, hosts from the stellar mass function's shape
+ * over the grid's M* range) the survey would detect, averaged over tables with the given weights.
+ */
+export function detectableFraction(
+  alpha: number, beta: number, sigma: number, tables: readonly SelectionTable[], weights: readonly number[], mStar: Float64Array, erdf: EddingtonRatioDistribution,
+): number {
+  let num = 0;
+  let wsum = 0;
+  for (let t = 0; t < tables.length; t++) {
+    const tab = tables[t] as SelectionTable;
+    const lin = tab.linear;
+    const w = weights[t] as number;
+    if (!lin || !(w > 0)) continue;
+    const sc2 = tab.calibrationScatter ** 2;
+    let p = 0;
+    let prior = 0;
+    for (let j = 0; j < mStar.length; j++) {
+      const mu = alpha + beta * ((mStar[j] as number) - RELATION_PIVOT);
+      const mo = criteriaMoments(lin, erdf, { mM: mu, mU: mu, vM: sigma * sigma, vU: sigma * sigma + sc2, cMU: sigma * sigma });
+      const pj = !lin.possible ? 0 : lin.noWidthCut ? normalCdf(mo.hA) : bivariateNormalCdf(mo.hA, mo.hB, mo.rho);
+      p += (tab.massPrior[j] as number) * pj;
+      prior += tab.massPrior[j] as number;
+    }
+    num += w * (p / prior);
+    wsum += w;
   }
   return wsum > 0 ? num / wsum : NaN;
 }

@@ -4,12 +4,15 @@ import { detectionLinear, type ForwardRecipe } from './detectionModel.ts';
 import type { RelationGrids, SelectionTable } from './relationLikelihood.ts';
 import { schechterPerDex, stellarMassFunctionAt, type StellarMassFunction } from './stellarMassFunctions.ts';
 import type { SurveySpec } from './surveySpec.ts';
+import { lineRedshiftWindow } from './lineRedshiftWindow.ts';
 
 /** Where an object was found: its field, detection line and redshift. */
 export interface DetectionSite {
   readonly field: number;
   readonly line: LineId;
   readonly z: number;
+  /** The object's own limiting flux, erg s⁻¹ cm⁻² (replaces the field's limit for this line). */
+  readonly limitCgs?: number;
 }
 
 /** Grid choices of the selection-aware fit. */
@@ -46,15 +49,19 @@ export function buildSelectionTables(
   const byKey = new Map<string, number>();
   const index = sites.map((site) => {
     const slice = Math.floor(site.z / opts.zSlice);
-    const key = `${site.field}|${site.line}|${slice}`;
+    // Own limits share a table when they agree to 0.01 dex.
+    const own = site.limitCgs !== undefined ? Math.round(Math.log10(site.limitCgs) * 100) : null;
+    const key = `${site.field}|${site.line}|${slice}|${own ?? ''}`;
     const known = byKey.get(key);
     if (known !== undefined) return known;
-    const zc = (slice + 0.5) * opts.zSlice;
+    // The slice's centre, kept inside the line's window (a slice can straddle the window's edge).
+    const w = lineRedshiftWindow(site.line, survey.lamObsRangeAngstrom);
+    const zc = w ? Math.min(w.zMax, Math.max(w.zMin, (slice + 0.5) * opts.zSlice)) : site.z;
     const smf = stellarMassFunctionAt(zc, smfs);
     const massPrior = Float64Array.from(mStar, (m) => schechterPerDex(smf, m));
     const recipe = recipes[site.line];
     const field = survey.fields[site.field];
-    const limit = field?.limits[site.line];
+    const limit = own !== null ? { kind: 'constant' as const, fluxCgs: 10 ** (own / 100) } : field?.limits[site.line];
     if (!recipe || !limit) throw new RangeError(`no forward recipe or flux limit for ${site.line} in field ${site.field}`);
     const crit = { limit, lamObsRangeAngstrom: survey.lamObsRangeAngstrom, minFwhmKms: survey.minFwhmKms };
     tables.push({ massPrior, linear: detectionLinear(cosmo, recipe, crit, zc), calibrationScatter: recipe.calibration.scatterDex });

@@ -21,14 +21,14 @@ const surveyWith = (minFwhmKms: number): SurveySpec => ({
 // Truth: the local AGN relation of Reines & Volonteri 2015 (eq. 4: log M_BH = 7.45 + 1.05 (log M* − 11); coefficients from
 // memory) with 0.5 dex intrinsic scatter, the injection example of the selection-aware papers; at log M* = 10 it is 6.40.
 const TRUTH: IntrinsicPopulation = { alpha: 6.4, beta: 1.05, sigma: 0.5, erdf, mStarRange: [8, 11.5] };
-const GRID = { zSlice: 0.1, mStar: [8, 11.5, 0.1] as const };
+const GRID = { zSlice: 0.25, mStar: [8, 11.5, 0.125] as const };
 const ERRORS = { ex: 0.25, eyMeas: 0.15 };
 
 function simulateAndFit(survey: SurveySpec, n: number, rng: Rng, steps: number) {
   const sim = simulateSample(cosmo, survey, recipe, TRUTH, n, ERRORS, rng);
   const built = buildSelectionTables(cosmo, survey, { halpha: recipe }, sim.objects.map((o) => ({ field: 0, line: 'halpha' as const, z: o.z })), undefined, GRID);
   const data = sim.objects.map((o, i) => ({ x: o.x, ex: o.ex, y: o.y, ey: ERRORS.eyMeas, table: built.index[i] as number }));
-  const opts = { walkers: 12, steps, burn: Math.round(steps / 3) };
+  const opts = { walkers: 12, steps, burn: Math.round(steps / 2) };
   const fit = fitRelation(data, built.tables, built.grids, erdf, rng, opts);
   const naive = fitRelation(data.map((d) => ({ ...d, table: 0 })), [naiveTable(built.grids)], built.grids, erdf, rng, opts);
   return { sim, built, fit, naive };
@@ -42,7 +42,7 @@ describe('fitRelation with the selection in the likelihood', () => {
     let naiveExcess = 0;
     const R = 20;
     for (let r = 0; r < R; r++) {
-      const { fit, naive } = simulateAndFit(surveyWith(0), 6000, rng, 360);
+      const { fit, naive } = simulateAndFit(surveyWith(0), 5000, rng, 400);
       for (const [p, truth] of [[fit.alpha, TRUTH.alpha], [fit.beta, TRUTH.beta], [fit.sigma, TRUTH.sigma]] as const) {
         trials++;
         if (truth >= p.p16 && truth <= p.p84) inside++;
@@ -60,7 +60,7 @@ describe('fitRelation with the selection in the likelihood', () => {
   });
 
   it('recovers the relation behind a survey that also requires a broad width', { timeout: 600_000 }, () => {
-    const { fit, naive, built, sim } = simulateAndFit(surveyWith(1000), 20000, createRng(7), 600);
+    const { fit, naive, built, sim } = simulateAndFit(surveyWith(1000), 10000, createRng(7), 450);
     for (const [p, truth] of [[fit.alpha, TRUTH.alpha], [fit.beta, TRUTH.beta], [fit.sigma, TRUTH.sigma]] as const) {
       const halfWidth = (p.p84 - p.p16) / 2;
       expect(Math.abs(p.p50 - truth)).toBeLessThan(2.5 * halfWidth);
