@@ -122,10 +122,10 @@ export function validateSurvey(doc: unknown, fail: (msg: string) => never): Surv
     eddingtonRatio = { meanLog, sigmaLog, reference: 'set in the config' };
   }
   const mStarRange = fitDoc.mstar_range === undefined ? ([7, 12] as [number, number]) : pair('survey.relation_fit.mstar_range', fitDoc.mstar_range);
-  const walkers = fitDoc.walkers === undefined ? 24 : int('survey.relation_fit.walkers', fitDoc.walkers, 8, 200);
+  const walkers = fitDoc.walkers === undefined ? 16 : int('survey.relation_fit.walkers', fitDoc.walkers, 8, 200);
   if (walkers % 2 !== 0) fail(`survey.relation_fit.walkers must be even, got ${walkers}`);
-  const steps = fitDoc.steps === undefined ? 1500 : int('survey.relation_fit.steps', fitDoc.steps, 100, 100000);
-  const burn = fitDoc.burn === undefined ? Math.floor(steps / 3) : int('survey.relation_fit.burn', fitDoc.burn, 0, steps - 1);
+  const steps = fitDoc.steps === undefined ? 800 : int('survey.relation_fit.steps', fitDoc.steps, 100, 100000);
+  const burn = fitDoc.burn === undefined ? Math.floor((3 * steps) / 8) : int('survey.relation_fit.burn', fitDoc.burn, 0, steps - 1);
 
   const dDoc = doc.densities === undefined ? {} : doc.densities;
   if (!isObj(dDoc)) return fail(`survey.densities must be a mapping, got ${show(dDoc)}`);

@@ -69,7 +69,7 @@ export function relationFitRun(
   });
   if (use.length < 8) return null;
   const [m0, m1] = survey.fit.mStarRange;
-  const built = buildSelectionTables(cosmo, survey.spec, recipes, use.map((u) => u.site), undefined, { zSlice: 0.1, mStar: [m0, m1, 0.1] });
+  const built = buildSelectionTables(cosmo, survey.spec, recipes, use.map((u) => u.site), undefined, { zSlice: 0.25, mStar: [m0, m1, 0.1] });
   const data = use.map((u, i) => {
     const sc = (recipes[u.site.line] as ForwardRecipe).calibration.scatterDex;
     return { x: u.x, ex: u.ex, y: u.y, ey: Math.max(Math.sqrt(Math.max(u.hw * u.hw - sc * sc, 0)), MIN_MBH_MEAS_ERR_DEX), table: built.index[i] as number };

@@ -51,7 +51,9 @@ export function buildSelectionTables(
     const slice = Math.floor(site.z / opts.zSlice);
     // Own limits share a table when they agree to 0.01 dex.
     const own = site.limitCgs !== undefined ? Math.round(Math.log10(site.limitCgs) * 100) : null;
-    const key = `${site.field}|${site.line}|${slice}|${own ?? ''}`;
+    // Fields with the same limit for the line share tables: the criteria do not depend on the field's area.
+    const fieldLimit = survey.fields[site.field]?.limits[site.line];
+    const key = `${site.line}|${slice}|${own !== null ? own : JSON.stringify(fieldLimit ?? null)}`;
     const known = byKey.get(key);
     if (known !== undefined) return known;
     // The slice's centre, kept inside the line's window (a slice can straddle the window's edge).

@@ -36,7 +36,7 @@ describe('the survey block', () => {
     expect(s.spec.fields[1]!.sourcePlaneAreaArcmin2).toBe(4);
     expect(s.spec.minFwhmKms).toBe(1000);
     expect(s.fieldColumn).toBe('field');
-    expect(s.fit.walkers).toBe(24);
+    expect(s.fit.walkers).toBe(16);
   });
 
   it('stops at a field with no area, naming the field', () => {
