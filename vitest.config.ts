@@ -15,6 +15,13 @@ export default defineConfig({
       },
       {
         test: {
+          name: 'slow',
+          include: ['test/slow/**/*.test.ts'],
+          testTimeout: 1_800_000,
+        },
+      },
+      {
+        test: {
           name: 'e2e',
           include: ['test/e2e/**/*.test.ts'],
           globalSetup: ['test/buildCliSetup.ts', 'test/e2e/globalSetup.ts'],

@@ -5,6 +5,7 @@ Usage:
   dawn-census derive <catalog> [options]   derive a catalog into Parquet with provenance
   dawn-census site build -c <config> [--out <dir>]   build the static site of a derived catalog
   dawn-census site preview [-c <config>] [--out <dir>] [--port <n>]   serve a built site locally
+  dawn-census population -c <config>       space densities and the selection-aware M_BH–M* relation
   dawn-census --help | -h                  this help
   dawn-census --version | -V               the version
 

@@ -3,6 +3,7 @@ import { toolVersion } from '../metadata/toolVersion.ts';
 import { CatalogError } from '../readers/CatalogError.ts';
 import { processIo } from './cliIo.ts';
 import type { CliIo } from './cliIo.ts';
+import { parsePopulationArgs, POPULATION_HELP } from './populationArgs.ts';
 import type { DeriveRunOptions } from '../derive/runDerive.ts';
 import { EXIT } from './exitCodes.ts';
 import { DERIVE_HELP, MAIN_HELP, SITE_HELP } from './helpText.ts';
@@ -36,6 +37,17 @@ export async function main(argv: readonly string[], io: CliIo = processIo(), opt
       return EXIT.ok;
     }
     if (command === 'site') return await siteMain(rest, io);
+    if (command === 'population') {
+      const pargs = parsePopulationArgs(rest);
+      if (pargs.help) {
+        io.stdout.write(POPULATION_HELP);
+        return EXIT.ok;
+      }
+      // Loaded here: it pulls in DuckDB's native module, which --help does not need.
+      const { populationCommand } = await import('./populationCommand.ts');
+      await populationCommand(pargs, io.stderr);
+      return EXIT.ok;
+    }
     if (command !== 'derive') throw new UsageError(`unknown command "${command}" (see dawn-census --help)`);
     const args = parseDeriveArgs(rest);
     if (args.help) {

@@ -2,6 +2,7 @@ import type { DeriveSettings } from '../../core/derive/types.ts';
 import type { TableFormat } from '../readers/types.ts';
 import type { ReadingsConfig } from './readingsConfig.ts';
 import type { ExportFormat, PassthroughDeclaration, Publication } from './publicationConfig.ts';
+import type { SurveyConfig } from './SurveyConfig.ts';
 
 /** How one canonical column is read from the catalog file. */
 export interface ColumnMapping {
@@ -45,6 +46,8 @@ export interface CensusConfig {
   passthrough?: Record<string, PassthroughDeclaration>;
   /** Site options; `base` starts and ends with '/'. */
   site: { base: string };
+  /** The survey's fields, limits and selection, for space densities and the selection-aware relation fit. */
+  survey?: SurveyConfig;
   /** Absolute path of the config file, when read from one. */
   configPath?: string;
   /** Text of the config file as read, for provenance. */

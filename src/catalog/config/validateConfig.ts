@@ -28,13 +28,14 @@ import {
   type PassthroughDeclaration,
   type Publication,
 } from './publicationConfig.ts';
+import { validateSurvey } from './validateSurvey.ts';
 
 /** Top-level keys of a census config. */
 export const CONFIG_KEYS = [
   'title', 'group', 'description', 'licence', 'citation', 'input', 'columns', 'cosmology', 'calibrations',
   'bolometric', 'bc5100', 'eddington_per_msun', 'efficiency', 'z_seed', 'lambda_seed', 'duty_cycle', 'seeds',
   'local_relation', 'dust_curve', 'intrinsic_balmer', 'line_priority', 'draws', 'seed', 'output', 'site', 'readings',
-  'hbeta_without_continuum', 'implausible_medians_intended', 'authors', 'version', 'doi', 'passthrough',
+  'hbeta_without_continuum', 'implausible_medians_intended', 'authors', 'version', 'doi', 'passthrough', 'survey',
 ] as const;
 
 /** Largest number of Monte Carlo draws per object. */
@@ -299,6 +300,8 @@ export function validateConfig(doc: unknown, label: string, baseDir: string): Ce
     const b = (site as Obj).base;
     if (b !== undefined && b !== null) cfg.site.base = normalizeBase(str('site.base', b));
   }
+
+  if (has('survey')) cfg.survey = validateSurvey(doc.survey, fail);
   return cfg;
 }
 

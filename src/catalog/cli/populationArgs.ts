@@ -1,0 +1,41 @@
+import { UsageError } from './UsageError.ts';
+
+/** The `population` command line, parsed. */
+export interface PopulationArgs {
+  config?: string;
+  catalog?: string;
+  quiet: boolean;
+  help: boolean;
+}
+
+/** Parses the arguments after `population`: `-c <config>`, `--catalog <parquet>`, `--quiet`, `--help`. */
+export function parsePopulationArgs(argv: readonly string[]): PopulationArgs {
+  const out: PopulationArgs = { quiet: false, help: false };
+  for (let i = 0; i < argv.length; i++) {
+    const a = argv[i] as string;
+    const [flag, inline] = a.startsWith('--') && a.includes('=') ? [a.slice(0, a.indexOf('=')), a.slice(a.indexOf('=') + 1)] : [a, undefined];
+    const value = (): string => {
+      const v = inline ?? argv[++i];
+      if (v === undefined || v === '') throw new UsageError(`${flag} needs a value`);
+      return v;
+    };
+    if (flag === '-c' || flag === '--config') out.config = value();
+    else if (flag === '--catalog') out.catalog = value();
+    else if (flag === '-q' || flag === '--quiet') out.quiet = true;
+    else if (flag === '-h' || flag === '--help') out.help = true;
+    else throw new UsageError(`unknown option "${a}" for population (see dawn-census population --help)`);
+  }
+  return out;
+}
+
+export const POPULATION_HELP = `dawn-census population -c census.config.yaml [--catalog out/catalog.parquet] [--quiet]
+
+Space densities and the selection-aware black-hole–host relation of a derived catalog, under the
+config's survey: block (fields, areas, limiting fluxes, spectrograph range, width and S/N cuts).
+The catalog is the config's output (or --catalog). Writes beside it, as one set:
+  <name>.population.json      summary: relation fits, selection bias, detectable fraction, sentence
+  <name>.population.parquet   per object: field, detection line, vmax_cmpc3, below_survey_limit
+  <name>.densities.parquet    binned mass and luminosity functions with Poisson and Monte Carlo intervals
+  <name>.posterior.parquet    posterior samples of the selection-aware and the naive fits
+`;
+
