@@ -42,6 +42,8 @@ export interface CommitJournal {
 export async function rollBack(folder: string, journal: CommitJournal): Promise<void> {
   for (const role of [...PLACE_ORDER].reverse()) {
     const final = journal.finals[role];
+    // A journal written before the readings table existed names three roles.
+    if (final === undefined) continue;
     const previous = path.join(folder, PREVIOUS_NAME[role]);
     if (await exists(previous)) await rename(previous, final);
     else if (!journal.hadPrevious[role] && !(await exists(path.join(folder, STAGED_NAME[role])))) await rm(final, { force: true });
@@ -65,6 +67,7 @@ export async function readJournal(folder: string): Promise<CommitJournal | null>
     if (j.format !== 'dawn-census-commit/1') return null;
     const home = path.dirname(folder);
     for (const role of PLACE_ORDER) {
+      if (role === 'readings' && j.finals[role] === undefined && j.hadPrevious[role] === undefined) continue;
       if (typeof j.finals[role] !== 'string' || path.dirname(j.finals[role]) !== home || typeof j.hadPrevious[role] !== 'boolean') return null;
     }
     for (const e of j.extras ?? []) {

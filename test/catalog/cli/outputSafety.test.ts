@@ -42,7 +42,7 @@ afterEach(async () => {
 });
 
 const CSV = 'id,z,fwhm_halpha\nA,5,2000\nB,6,1000\nC,7,1500\n';
-const OUTS = ['cat.census.meta.json', 'cat.census.parquet', 'cat.census.rejections.csv'];
+const OUTS = ['cat.census.meta.json', 'cat.census.parquet', 'cat.census.readings.parquet', 'cat.census.rejections.csv'];
 
 /** Every file of the folder with its bytes, to show that nothing changed. */
 async function snapshot(folder = '.'): Promise<Record<string, string>> {
@@ -140,7 +140,7 @@ describe('outputs never overwrite the input or a file dawn-census did not write'
     expect((await readdir('.')).sort()).toEqual(['cfg']);
     const forced = await run(['-c', 'cfg/census.yaml', '--threads', '1', '--force', '--quiet']);
     expect(forced.status, forced.err).toBe(0);
-    expect((await readdir('elsewhere')).sort()).toEqual(['out.meta.json', 'out.parquet', 'out.rejections.csv']);
+    expect((await readdir('elsewhere')).sort()).toEqual(['out.meta.json', 'out.parquet', 'out.readings.parquet', 'out.rejections.csv']);
   });
 });
 

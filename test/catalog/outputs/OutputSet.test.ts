@@ -17,17 +17,18 @@ async function stageAll(set: OutputSet, tag: string): Promise<void> {
   await writeFile(set.staged('catalog'), `${tag} catalog`);
   await writeFile(set.staged('meta'), `${tag} meta`);
   await writeFile(set.staged('rejections'), `${tag} rejections`);
+  await writeFile(set.staged('readings'), `${tag} readings`);
 }
 
 describe('OutputSet', () => {
-  it('writes into one temporary folder beside the outputs and moves the three files into place on commit', async () => {
+  it('writes into one temporary folder beside the outputs and moves the four files into place on commit', async () => {
     const paths = outputPaths(path.join(dir, 'out.parquet'));
     const set = await OutputSet.create(paths);
     expect(path.dirname(set.folder)).toBe(dir);
     expect(path.basename(set.folder)).toMatch(/^out\.parquet\.tmp-dawn-census-\d+-[0-9a-f]{6}$/);
     await stageAll(set, 'new');
     await set.commit();
-    expect((await readdir(dir)).sort()).toEqual(['out.meta.json', 'out.parquet', 'out.rejections.csv']);
+    expect((await readdir(dir)).sort()).toEqual(['out.meta.json', 'out.parquet', 'out.readings.parquet', 'out.rejections.csv']);
     expect(await readFile(paths.catalog, 'utf8')).toBe('new catalog');
     expect(await readFile(paths.meta, 'utf8')).toBe('new meta');
   });
@@ -47,6 +48,7 @@ describe('OutputSet', () => {
     expect(await readFile(paths.rejections, 'utf8')).toBe('old rejections');
     expect(await readFile(paths.meta, 'utf8')).toBe('old meta');
     await set.discard();
+    // No earlier readings table: the new one is taken away again with the rest of the new set.
     expect((await readdir(dir)).sort()).toEqual(['out.meta.json', 'out.parquet', 'out.rejections.csv']);
   });
 

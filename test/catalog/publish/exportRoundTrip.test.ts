@@ -66,6 +66,7 @@ describe('extra output formats read back with astropy (5.2.1, Debian)', () => {
       'tiny.census.fits',
       'tiny.census.meta.json',
       'tiny.census.parquet',
+      'tiny.census.readings.parquet',
       'tiny.census.rejections.csv',
       'tiny.census.vot',
     ]);

@@ -42,9 +42,10 @@ describe('deriveObject: offset from the local relation', () => {
   });
 
   it('gives P(above the local relation) as the normal tail Φ(Δ/σ) of the offset draws, for an object above and one below', () => {
-    // Draws of Δ: N(Δ, σ) with σ = sqrt((1.05 σ_M*)² + σ_cal²) (closed form). M* chosen so that Δ is
-    // about ±0.5σ, where a wrong sign or a wrong tail moves P by ~0.4.
-    const sigma = Math.hypot(1.05 * 0.3, CAL_SCATTER);
+    // Draws of Δ: N(Δ, σ) with σ = sqrt((1.05 σ_M*)² + σ_cal² + σ_relation²) (closed form): "above a local black
+    // hole of the same host quantity" includes the relation's intrinsic scatter, as local_offset_sigma does.
+    // M* chosen so that Δ is about ±0.5σ, where a wrong sign or a wrong tail moves P by ~0.4.
+    const sigma = Math.hypot(1.05 * 0.3, CAL_SCATTER, RV15_AGN_SCATTER);
     for (const [id, logMstar] of [['above', 10.99], ['below', 11.47]] as const) {
       const d = deriveObject(object(id, logMstar, 0.3), settings(), rngFor(id));
       const expected = normalCdf(d.deltaLogMbhLocal! / sigma);
@@ -54,8 +55,9 @@ describe('deriveObject: offset from the local relation', () => {
   });
 
   it('puts P(above) near 1 far above the relation and near 0 far below it', () => {
-    expect(deriveObject(object('far-above', 8, 0.1), settings(), rngFor('far-above')).pAboveLocal!).toBeGreaterThan(0.999);
-    expect(deriveObject(object('far-below', 13, 0.1), settings(), rngFor('far-below')).pAboveLocal!).toBeLessThan(0.001);
+    // Δ ≈ ±3.3 dex against σ = hypot(0.105, 0.4, 0.55) = 0.69 dex: about 4.8σ either way.
+    expect(deriveObject(object('far-above', 7.5, 0.1), settings(), rngFor('far-above')).pAboveLocal!).toBeGreaterThan(0.999);
+    expect(deriveObject(object('far-below', 13.5, 0.1), settings(), rngFor('far-below')).pAboveLocal!).toBeLessThan(0.001);
   });
 
   it("divides the offset by the relation's intrinsic scatter and the draws' half 16–84 width in quadrature for local_offset_sigma", () => {

@@ -20,7 +20,8 @@ describe('evaluateChain: an Hβ mass without a measured continuum', () => {
   // The Vestergaard & Peterson 2006 Hβ calibration takes λL5100. With only L(Hβ) measured the
   // chain estimates λL5100 from Greene & Ho 2005 eq. 2 (coefficients from memory; the same
   // 1.425e42 and 1.133 are used by independent public AGN codes) before applying it.
-  const vp06 = settings({ calibrations: { ...DEFAULT_SETTINGS.calibrations, hbeta: 'vp06_hbeta' } });
+  // The GH05 eq. 2 route is the option `hbeta_without_continuum: gh05_eq2` (the default takes the Hβ-line calibration).
+  const vp06 = settings({ calibrations: { ...DEFAULT_SETTINGS.calibrations, hbeta: 'vp06_hbeta' }, hbetaWithoutContinuum: 'gh05_eq2' });
   const hbetaOnly = (id: string, lum: number, fwhm: number): ObjectInputs => ({
     id,
     z: 7,
@@ -88,7 +89,8 @@ describe('evaluateChain: A_V draws below zero', () => {
       lines: { halpha: { lumErgS: { value: 1e43 }, fwhmKms: { value: 2000 } } },
       av: { value: 0, errLo: 1, errHi: 1 },
     };
-    const d = deriveObject(inputs, settings({ draws }), rngFor('av-clip'));
+    // BC5100 = 10.33 (Richards et al. 2006) set explicitly, as the closed form above uses it.
+    const d = deriveObject(inputs, settings({ draws, bc5100: 10.33 }), rngFor('av-clip'));
     const unattenuated = logLbolFromLogLHa(43);
     expectClose(d.logLbol!, unattenuated, { atol: 1e-9, source: 'GH05 eq. 1 inverted × 10.33, closed form' });
     // Half of the draws of A_V ~ N(0, 1) are below 0 and clip to 0, so the lower 50 % of L_bol sits

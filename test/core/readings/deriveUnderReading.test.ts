@@ -72,13 +72,14 @@ describe('deriveUnderReading', () => {
     expect(without.flags).toContain('core_width_fallback');
   });
 
-  it('multiplies L_bol by 5/10.33 when L_bol/L5100 = 5 replaces BC5100 = 10.33, leaving the mass', () => {
+  it('multiplies L_bol by 5/BC5100 when L_bol/L5100 = 5 replaces the run\'s BC5100, leaving the mass', () => {
     const base = under(halphaObject, STANDARD_READING);
     const r = under(halphaObject, SMALL_BOLOMETRIC_READING);
-    // 10.33: Richards et al. 2006 (as DEFAULT_SETTINGS.bc5100); 5: Greene et al. 2025 abstract.
-    expectClose(r.logLbol! - base.logLbol!, Math.log10(5 / 10.33), { atol: 1e-12, source: 'Greene et al. 2025 abstract (5) over Richards et al. 2006 (10.33)' });
+    // BC5100: the run's (default 9.26, Shen et al. 2011); 5: Greene et al. 2025 abstract.
+    const bc = settings.bc5100;
+    expectClose(r.logLbol! - base.logLbol!, Math.log10(5 / bc), { atol: 1e-12, source: 'Greene et al. 2025 abstract (5) over the run\'s BC5100' });
     expect(r.logMbh).toBe(base.logMbh);
-    expectClose(r.logEddRatio! - base.logEddRatio!, Math.log10(5 / 10.33), { atol: 1e-12, source: 'λ_Edd ∝ L_bol' });
+    expectClose(r.logEddRatio! - base.logEddRatio!, Math.log10(5 / bc), { atol: 1e-12, source: 'λ_Edd ∝ L_bol' });
   });
 
   it('divides the Hα route by 40 and switches dust off in the dense gas reading', () => {
