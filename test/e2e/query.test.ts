@@ -26,7 +26,8 @@ describe('SQL workspace', () => {
       await setSql(page, 'SELECT');
       await page.keyboard.press('End');
       await page.keyboard.press('Tab');
-      await expect(page.locator('#sql').inputValue()).resolves.toMatch(/^SELECT\s+$/);
+      // CodeMirror's Tab indents the line (indentMore) rather than inserting at the cursor.
+      await expect(page.locator('#sql').inputValue()).resolves.toMatch(/^\s+SELECT\s*$|^SELECT\s+$/);
       await expect(page.evaluate(() => document.activeElement?.hasAttribute('data-sql-input'))).resolves.toBe(true);
       await setSql(page, SQL);
       await page.keyboard.press('Control+Enter');
@@ -65,7 +66,8 @@ describe('SQL workspace', () => {
       const error = page.locator('#sql-error');
       await expect(error.textContent()).resolves.toMatch(/no_such_column/);
       await runSql(page, 'SELEC id FROM census');
-      await expect(error.textContent()).resolves.toMatch(/could not be read/);
+      // The statement gate names the word it does not run, in plain words.
+      await expect(error.textContent()).resolves.toMatch(/Only queries that read the catalog run here.*“SELEC”/);
       await runSql(page, 'SELECT * FROM catalog');
       await expect(error.textContent()).resolves.toMatch(/named census/);
     } finally {
@@ -91,7 +93,10 @@ describe('SQL workspace', () => {
       const [download] = await Promise.all([page.waitForEvent('download'), page.locator('[data-export-csv]').click()]);
       const path = await download.path();
       const { readFileSync } = await import('node:fs');
-      const lines = readFileSync(path, 'utf8').trim().split(/\r?\n/);
+      // '#' lines first: the query, the catalog's SHA-256, the tool and each column's unit and meaning.
+      const all = readFileSync(path, 'utf8').trim().split(/\r?\n/);
+      expect(all.some((l) => l.startsWith('# query: '))).toBe(true);
+      const lines = all.filter((l) => !l.startsWith('#'));
       expect(lines[0]).toBe('id,z');
       expect(lines.length - 1).toBe(expected!.n);
     } finally {

@@ -3,6 +3,7 @@
  * reading's row in the summary; the comparison draws each object's shift between two readings;
  * the URL carries the choices so a link reopens the same view.
  */
+import { formatFixed } from '../text/formatValue.ts';
 import { connection, CensusDbError } from '../db/duckdb.ts';
 import { mountChart } from '../charts/mountChart.ts';
 import { drawPopulation } from '../population/populationCharts.ts';
@@ -135,7 +136,7 @@ export async function mountReadingsPage(root: HTMLElement): Promise<void> {
       const f = s[k];
       tr.append(cell(`${pct(f.fraction)} (${f.k} of ${f.n}) ${f.lo === null ? '' : `${pct(f.lo)} – ${pct(f.hi)}`}`, k));
     }
-    tr.append(cell(s.medianLogMbh === null ? '—' : s.medianLogMbh.toFixed(2), 'medianLogMbh'), cell(s.medianLogEddRatio === null ? '—' : s.medianLogEddRatio.toFixed(2), 'medianLogEddRatio'));
+    tr.append(cell(s.medianLogMbh === null ? '—' : formatFixed(s.medianLogMbh, 2), 'medianLogMbh'), cell(s.medianLogEddRatio === null ? '—' : formatFixed(s.medianLogEddRatio, 2), 'medianLogEddRatio'));
     table.append(tr);
   };
   const deriveCustom = async (params: CustomReadingParams) => {

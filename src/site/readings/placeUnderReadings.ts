@@ -2,6 +2,7 @@
  * The place page's table of a new object under every reading of the catalog: each reading
  * derives it with the same core, settings and random stream as the catalog build.
  */
+import { formatFixed } from '../text/formatValue.ts';
 import type { DeriveSettings, ObjectInputs } from '../../core/derive/types.ts';
 import type { Reading } from '../../core/readings/reading.ts';
 import { rederiveBatch, type RederivedRow } from './rederiveBatch.ts';
@@ -27,7 +28,7 @@ export function placeReadingsTable(doc: Document, rows: readonly { reading: Read
     head.append(th);
   }
   const body = table.createTBody();
-  const f = (x: number | null) => (x === null ? '—' : x.toFixed(2));
+  const f = (x: number | null) => (x === null ? '—' : formatFixed(x, 2));
   for (const { reading, row } of rows) {
     const tr = body.insertRow();
     tr.dataset.readingValue = reading.id;

@@ -1,3 +1,4 @@
+import { formatFixed } from '../text/formatValue.ts';
 import * as Plot from '@observablehq/plot';
 import { PALETTE } from '../charts/palette.ts';
 import { paddedExtent } from '../charts/extent.ts';
@@ -45,7 +46,7 @@ export function readingShiftChart(rows: readonly ShiftRow[], o: ShiftChartOption
       Plot.ruleY([0], { stroke: PALETTE.guide, strokeDasharray: '5 4' }),
       Plot.arrow(placed, { x1: 'mbhA', y1: 'eddA', x2: 'mbhB', y2: 'eddB', stroke: PALETTE.population, strokeOpacity: 0.55, headLength: 5, insetEnd: 1 }),
       Plot.dot(placed, { x: 'mbhA', y: 'eddA', r: 2.5, stroke: PALETTE.ink, fill: 'none', title: (r: ShiftRow) => r.id }),
-      Plot.tip(placed, Plot.pointer({ x: 'mbhB', y: 'eddB', title: (r: ShiftRow) => `${r.id}\nlog M: ${r.mbhA!.toFixed(2)} → ${r.mbhB!.toFixed(2)}\nlog λ: ${r.eddA!.toFixed(2)} → ${r.eddB!.toFixed(2)}` })),
+      Plot.tip(placed, Plot.pointer({ x: 'mbhB', y: 'eddB', title: (r: ShiftRow) => `${r.id}\nlog M: ${formatFixed(r.mbhA!, 2)} → ${formatFixed(r.mbhB!, 2)}\nlog λ: ${formatFixed(r.eddA!, 2)} → ${formatFixed(r.eddB!, 2)}` })),
     ],
   });
 }
