@@ -16,6 +16,7 @@ import mvpWorker from '@duckdb/duckdb-wasm/dist/duckdb-browser-mvp.worker.js?url
 import ehWasm from '@duckdb/duckdb-wasm/dist/duckdb-eh.wasm?url';
 import ehWorker from '@duckdb/duckdb-wasm/dist/duckdb-browser-eh.worker.js?url';
 import { catalogLoadError, friendlyQueryError } from './friendlyError.ts';
+import { registerPopulationTable } from './populationTable.ts';
 import type { ResultSet } from './resultSet.ts';
 
 /** The documented name of the catalog table. */
@@ -86,6 +87,7 @@ async function start(): Promise<duckdb.AsyncDuckDBConnection> {
   } catch (err) {
     throw new CensusDbError(catalogLoadError(CATALOG_PATH, status, err instanceof Error ? err.message : String(err)));
   }
+  await registerPopulationTable(db, conn);
   return conn;
 }
 
