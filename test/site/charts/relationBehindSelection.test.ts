@@ -10,7 +10,7 @@ type Scaled = Element & { scale(name: string): { apply(v: number): number; inver
 /** The data-space points of the first path of mark `name` ("M x,y L x,y …" in px), through the chart's scales. */
 function lineData(el: Element, name: string): { x: number; y: number }[] {
   const d = markElements(el, name)[0]!.getAttribute('d')!;
-  const s = el as Scaled;
+  const s = el as unknown as Scaled;
   return [...d.matchAll(/[ML]\s*(-?[\d.]+)[ ,](-?[\d.]+)/g)].map((m) => ({ x: s.scale('x').invert(Number(m[1])), y: s.scale('y').invert(Number(m[2])) }));
 }
 

@@ -17,7 +17,7 @@ describe('spaceDensityByRedshift', () => {
   it('draws the published range as a band from 1e-5 to 1e-4 cMpc⁻³ over z > 4', () => {
     const el = spaceDensityByRedshift(rows, { document: testDocument(), published: PUBLISHED_DENSITIES });
     const [rect] = markElements(el, 'published density band');
-    const s = el as Scaled;
+    const s = el as unknown as Scaled;
     const y0 = Number(rect!.getAttribute('y'));
     const h = Number(rect!.getAttribute('height'));
     // Ma et al. 2025 (arXiv:2509.02662), abstract: ~1e-5–1e-4 cMpc^-3 at z > 4

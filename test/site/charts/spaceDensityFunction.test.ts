@@ -24,7 +24,7 @@ describe('spaceDensityFunction', () => {
 
   it('places each point at its Φ on a log axis', () => {
     const el = spaceDensityFunction(rows, { document: testDocument(), quantity: 'log_mbh' });
-    const y = (el as Scaled).scale('y');
+    const y = (el as unknown as Scaled).scale('y');
     const cy = markElements(el, 'density bin').map((e) => {
       const t = /translate\(([-\d.]+),([-\d.]+)\)/.exec(e.getAttribute('transform') ?? '');
       return t ? Number(t[2]) : Number(e.getAttribute('cy'));
