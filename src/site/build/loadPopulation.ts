@@ -43,6 +43,8 @@ export interface SitePopulation {
   band: RelationBandPoint[];
   totals: DensityTotal[];
   downloads: PopulationDownload[];
+  /** True when the summary is older than the catalog: the catalog was derived again after the population step. */
+  stale: boolean;
 }
 
 /** Most observed points the page embeds (the page carries them as data; beyond this the chart shows a subset). */
@@ -115,7 +117,8 @@ export async function readPopulation(catalogParquet: string, rows: readonly Cata
     [paths.posterior, 'catalog.posterior.parquet', 'posterior samples of α, β, σ for both fits (Parquet)'],
   ];
   const downloads = offered.filter(([p]) => existsSync(p)).map(([path, name, what]) => ({ name, path, bytes: statSync(path).size, what }));
-  return { summary, points, pointsCapped: placed.length - points.length, band, totals, downloads };
+  const stale = existsSync(catalogParquet) && statSync(paths.summary).mtimeMs < statSync(catalogParquet).mtimeMs;
+  return { summary, points, pointsCapped: placed.length - points.length, band, totals, downloads, stale };
 }
 
 let cached: Promise<SitePopulation | null> | null = null;
