@@ -2,14 +2,16 @@
  * Builds every site variant the end-to-end tests need ONCE and serves each on a free local
  * port: the demo catalog at the root, the same under a sub-path (/census/), a hostile catalog
  * (markup, quotes and non-Latin text in ids, passthrough columns and the config's texts), and
- * the root build with its Parquet file removed. Catalogs are derived with the CLI.
+ * the root build with its Parquet file removed. Catalogs are derived with the CLI; the demo's population results
+ * (dawn-census population) come from a cheaper sampler than the demo config's (see cheapSurveyConfig).
  * URLs and file paths reach the tests through `inject(...)`.
  */
 import type { TestProject } from 'vitest/node';
 import { execFileSync } from 'node:child_process';
-import { cpSync, mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { cpSync, mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
+import { parse, stringify } from 'yaml';
 import { serveStatic, type StaticServer } from '../../scripts/lib/staticServer.ts';
 import { findChromium } from './browser.ts';
 import { HOSTILE_CONFIG, hostileCsv } from './hostileCatalog.ts';
@@ -39,6 +41,23 @@ const root = resolve(import.meta.dirname, '../..');
 const servers: StaticServer[] = [];
 let outDir: string | undefined;
 
+/**
+ * The demo config with absolute paths, writing to `catalog`, and the smallest sampler the config allows (8 walkers ×
+ * 100 steps instead of 16 × 800): the pages need the population results' shape, not a converged fit, and the full
+ * run costs tens of seconds of CPU on a 2-core machine.
+ */
+function cheapSurveyConfig(catalog: string): string {
+  const doc = parse(readFileSync(join(root, 'data-demo/census.config.yaml'), 'utf8')) as {
+    input: { path: string };
+    output?: string;
+    survey: { relation_fit?: Record<string, unknown> };
+  };
+  doc.input.path = join(root, 'data-demo', doc.input.path);
+  doc.output = catalog;
+  doc.survey.relation_fit = { ...doc.survey.relation_fit, walkers: 8, steps: 100 };
+  return stringify(doc);
+}
+
 function derive(args: string[]): void {
   execFileSync(process.execPath, [join(root, 'bin/dawn-census.js'), 'derive', ...args, '--quiet'], { cwd: root, stdio: ['ignore', 'ignore', 'inherit'] });
 }
@@ -67,6 +86,9 @@ export async function setup(project: TestProject): Promise<void> {
   outDir = mkdtempSync(join(tmpdir(), 'census-e2e-'));
   const demoParquet = join(outDir, 'demo/catalog.parquet');
   derive([join(root, 'data-demo/catalog.csv'), '-c', join(root, 'data-demo/census.config.yaml'), '-o', demoParquet, '--draws', '300']);
+  const cheapConfig = join(outDir, 'demo/census.config.yaml');
+  writeFileSync(cheapConfig, cheapSurveyConfig(demoParquet));
+  execFileSync(process.execPath, [join(root, 'bin/dawn-census.js'), 'population', '-c', cheapConfig, '--quiet'], { cwd: root, stdio: ['ignore', 'ignore', 'inherit'] });
 
   const hostileDir = join(outDir, 'hostile');
   mkdirSync(hostileDir, { recursive: true });

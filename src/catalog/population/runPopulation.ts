@@ -1,6 +1,7 @@
 import { getCosmology } from '../../core/cosmology/getCosmology.ts';
 import { lineRedshiftWindow } from '../../core/population/lineRedshiftWindow.ts';
 import { GEHRELS86_REFERENCE } from '../../core/population/poissonInterval.ts';
+import { RELATION_PIVOT } from '../../core/population/relationLikelihood.ts';
 import type { LineId } from '../../core/derive/types.ts';
 import type { CensusConfig } from '../config/CensusConfig.ts';
 import { ConfigError } from '../config/ConfigError.ts';
@@ -58,7 +59,7 @@ export async function runPopulation(
     },
     objects: rows.length, withVmax, belowSurveyLimit: belowLimit,
     densities: densities.map((d) => ({ quantity: d.quantity, zRange: d.zRange, bins: d.bins })),
-    relation: fit ? fitOut : null,
+    relation: fit ? { ...fitOut, pivotLogMstar: RELATION_PIVOT } : null,
     relationNote: fit ? null : 'fewer than 8 objects with a V_max and a host mass: no relation fit',
     assumptions: {
       eddingtonRatio: survey.fit.eddingtonRatio,

@@ -8,3 +8,6 @@ export { fwhmVsLineLuminosity, type FwhmVsLineLuminosityOptions } from './fwhmVs
 export { chartPoints, type ChartPointIndex } from './chartPoints.ts';
 export { chartSettings } from './chartSettings.ts';
 export { PALETTE } from './palette.ts';
+export { relationBehindSelection, type RelationBehindSelectionOptions } from './relationBehindSelection.ts';
+export { spaceDensityFunction, type SpaceDensityFunctionOptions, type DensityBinRow } from './spaceDensityFunction.ts';
+export { spaceDensityByRedshift, type SpaceDensityByRedshiftOptions, type DensityTotalRow } from './spaceDensityByRedshift.ts';

@@ -29,6 +29,7 @@ import ehWorker from '@duckdb/duckdb-wasm/dist/duckdb-browser-eh.worker.js?url';
 // no-inline: a small file would otherwise become a data: URL, an opaque-origin worker the policy refuses.
 import guardWorker from './networkGuard.worker.js?url&no-inline';
 import { catalogLoadError, friendlyQueryError } from './friendlyError.ts';
+import { populationUrl, registerPopulationTable } from './populationTable.ts';
 import type { ResultSet } from './resultSet.ts';
 import { readingsUrl, registerReadingsTable } from './readingsTable.ts';
 import { statementProblem } from './statementGate.ts';
@@ -114,6 +115,7 @@ async function start(): Promise<duckdb.AsyncDuckDBConnection> {
   gate.searchParams.append('allow', url);
   // The readings table is the catalog's own too (absent for a catalog derived without readings).
   gate.searchParams.append('allow', readingsUrl());
+  gate.searchParams.append('allow', populationUrl());
   const worker = new Worker(gate.href);
   const db = new duckdb.AsyncDuckDB(new duckdb.VoidLogger(), worker);
   current = { db, worker };
@@ -137,6 +139,7 @@ async function start(): Promise<duckdb.AsyncDuckDBConnection> {
     throw new CensusDbError(catalogLoadError(CATALOG_PATH, status, err instanceof Error ? err.message : String(err)));
   }
   await registerReadingsTable(db, conn, copy);
+  await registerPopulationTable(db, conn, copy);
   if (copy) await conn.query('SET enable_external_access = false');
   await conn.query('SET lock_configuration = true');
   return conn;
