@@ -2,6 +2,7 @@
  * The summary `dawn-census population` writes (`<name>.population.json`), as the population page reads it.
  * Normalised without trusting its shape: a part that is missing or malformed becomes null, and the page says so.
  */
+import type { DensityBin } from '../../core/population/binnedDensity.ts';
 import { isRecord, pick } from '../recordPath.ts';
 
 /** 16th, 50th and 84th percentiles. */
@@ -11,19 +12,8 @@ export interface Quantiles {
   p84: number;
 }
 
-/** One bin of a binned space density (per comoving Mpc³ per dex). */
-export interface DensityBinView {
-  lo: number;
-  hi: number;
-  count: number;
-  phi: number;
-  /** Poisson 1σ limits (Gehrels 1986). */
-  phiLo: number;
-  phiHi: number;
-  /** 16th–84th percentiles over the Monte Carlo draws, when recorded. */
-  phiP16: number | null;
-  phiP84: number | null;
-}
+/** One bin of a binned space density (per comoving Mpc³ per dex), as the core computes it. */
+export type DensityBinView = DensityBin;
 
 /** A mass or luminosity function in one redshift range. */
 export interface DensityFunctionView {

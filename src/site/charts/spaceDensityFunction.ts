@@ -1,3 +1,4 @@
+import type { DensityBin } from '../../core/population/binnedDensity.ts';
 import * as Plot from '@observablehq/plot';
 import { LEGEND_LINE, LEGEND_OFFSET, LEGEND_ROW, legendMarks, legendRows, type LegendItem } from './legend.ts';
 import { LIMIT_DOWN } from './limitSymbols.ts';
@@ -5,21 +6,10 @@ import { tag } from './markTag.ts';
 import { PALETTE } from './palette.ts';
 import type { ChartOptions } from './types.ts';
 
-/** One bin of a binned space density in one redshift range (per comoving Mpc³ per dex). */
-export interface DensityBinRow {
+/** One bin of a binned space density in one redshift range (per comoving Mpc³ per dex; see the core's DensityBin). */
+export interface DensityBinRow extends DensityBin {
   zLo: number;
   zHi: number;
-  /** Bin edges in the binned quantity (dex). */
-  lo: number;
-  hi: number;
-  count: number;
-  phi: number;
-  /** Poisson 1σ limits (Gehrels 1986); for an empty bin phiHi is the upper limit. */
-  phiLo: number;
-  phiHi: number;
-  /** 16th–84th percentiles over the Monte Carlo redraws of each object's value, when known. */
-  phiP16: number | null;
-  phiP84: number | null;
 }
 
 /** Options of {@link spaceDensityFunction}. */
