@@ -35,11 +35,12 @@ function table(doc: Document, id: string, caption: string, head: readonly string
   return { table: t, body: t.createTBody() };
 }
 
-function cells(tr: HTMLTableRowElement, values: readonly string[], numeric: readonly boolean[]): void {
+function cells(tr: HTMLTableRowElement, values: readonly string[], numeric: readonly boolean[], idAt: number): void {
   values.forEach((v, i) => {
     const td = tr.insertCell();
     td.textContent = v;
     if (numeric[i]) td.className = 'num';
+    else if (i === idAt) td.className = 'id';
   });
 }
 
@@ -66,7 +67,7 @@ export function batchTable(doc: Document, entries: readonly BatchEntry[]): HTMLE
     tr.dataset.row = String(e.row);
     if ('problem' in e) {
       tr.dataset.placed = 'false';
-      cells(tr, [String(e.row), e.id || MISSING], numeric);
+      cells(tr, [String(e.row), e.id || MISSING], numeric, 1);
       const td = tr.insertCell();
       td.colSpan = 6;
       td.className = 'batch-problem';
@@ -87,7 +88,7 @@ export function batchTable(doc: Document, entries: readonly BatchEntry[]): HTMLE
       `${lim(r.log_edd_ratio_is_limit)}${f2(num(r.log_edd_ratio))}`,
       `${lim(r.delta_log_mbh_local_is_limit)}${f2(num(r.delta_log_mbh_local))}`,
       rank,
-    ], numeric);
+    ], numeric, 1);
   }
   section.append(h, wrap(doc, t));
   return section;
@@ -105,7 +106,7 @@ export function batchReadingsTable(doc: Document, rows: readonly { id: string; r
     const tr = body.insertRow();
     tr.dataset.object = id;
     tr.dataset.readingValue = reading.id;
-    cells(tr, [id, reading.label, f2(row.log_mbh), f2(row.log_lbol), f2(row.log_edd_ratio), f2(row.p_super_eddington), f2(row.delta_log_mbh_local), row.flags.split(',').filter(Boolean).join(', ')], numeric);
+    cells(tr, [id, reading.label, f2(row.log_mbh), f2(row.log_lbol), f2(row.log_edd_ratio), f2(row.p_super_eddington), f2(row.delta_log_mbh_local), row.flags.split(',').filter(Boolean).join(', ')], numeric, 0);
   }
   section.append(h, wrap(doc, t));
   return section;
