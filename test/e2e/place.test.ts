@@ -112,4 +112,59 @@ describe('the compare page (place a new object)', () => {
       await site.close();
     }
   });
+
+  it('places every row pasted with the catalog own column names, each marked on the charts, and names a bad row', async () => {
+    const text = readFileSync(resolve(import.meta.dirname, '../../data-demo/new-objects.csv'), 'utf8');
+    const lines = text.split('\n');
+    // the demo file's own header and units (fluxes in 1e-18 erg s-1 cm-2, as data-demo/census.config.yaml maps them), two good rows and one bad
+    const header = lines.find((l) => l.startsWith('id,'))!;
+    const bad = header.split(',').map((h) => (h === 'id' ? 'INVENTED-E2E-BAD' : h === 'z' ? '6' : h === 'fwhm_halpha' ? '-50' : h === 'flux_halpha' ? '3' : '')).join(',');
+    const snippet = [header, lines.find((l) => l.startsWith('CDW-90001,'))!, bad, lines.find((l) => l.startsWith('CDW-90003,'))!].join('\n');
+    const page = await open();
+    try {
+      await page.selectOption('#place-csv-unit', '');
+      await page.fill('#place-csv', snippet);
+      await page.click('#place-csv-go');
+      await page.waitForSelector('#place-batch');
+      await expect(page.locator('#place-result').getAttribute('data-placed')).resolves.toBe('CDW-90001,CDW-90003');
+      await expect(page.locator('#place-batch tbody tr[data-placed="true"]').count()).resolves.toBe(2);
+      await expect(page.locator('#place-batch tbody tr[data-row="2"]').textContent()).resolves.toContain('not placed: row 2 (id INVENTED-E2E-BAD): fwhm_halpha: -50 km s-1: must be positive');
+      await expect(page.locator('#place-csv-msg').textContent()).resolves.toContain('row 2 (id INVENTED-E2E-BAD): fwhm_halpha: -50 km s-1: must be positive');
+      // both placed objects under every reading the page lists
+      const readings = await page.locator('#place-batch-readings tbody tr').evaluateAll((trs) => trs.map((tr) => (tr as HTMLElement).dataset.object));
+      expect(new Set(readings)).toEqual(new Set(['CDW-90001', 'CDW-90003']));
+      expect(readings.filter((id) => id === 'CDW-90001').length).toBe(readings.length / 2);
+      // CDW-90001 has a stellar mass (drawn on the M_BH–M* chart); both have z and M_BH
+      expect(await newObjectMarks(page, 'mbh-z')).toBe(2);
+      expect(site.errors).toEqual([]);
+      expect(site.foreign()).toEqual([]);
+    } finally {
+      await site.close();
+    }
+  });
+
+  it('places an Hβ object from the λL5100 field of the form', async () => {
+    const page = await open();
+    try {
+      await page.fill('#place-id', 'INVENTED-E2E-4');
+      await page.fill('#place-z', '9.01');
+      await page.selectOption('#place-line', 'hbeta');
+      await page.fill('#place-fwhm', '1534');
+      await page.fill('#place-fwhm_err', '134');
+      await page.fill('#place-lam_l_5100', '1.369e44');
+      await page.fill('#place-lam_l_5100_err', '1.95e43');
+      await page.click('#place-form button[type=submit]');
+      await page.waitForSelector('#place-ranks');
+      await expect(page.locator('#place-result').getAttribute('data-placed')).resolves.toBe('INVENTED-E2E-4');
+      await expect(page.locator('#place-ranks tbody tr[data-quantity="log_mbh"]').textContent()).resolves.toMatch(/percentile of \d+/);
+      expect(await newObjectMarks(page, 'mbh-z')).toBe(1);
+      // a log value typed into the linear field is caught beside it
+      await page.fill('#place-lam_l_5100', '44.1');
+      await page.click('#place-form button[type=submit]');
+      await expect(page.locator('#place-lam_l_5100-msg').textContent()).resolves.toMatch(/is it log10/);
+      expect(site.errors).toEqual([]);
+    } finally {
+      await site.close();
+    }
+  });
 });

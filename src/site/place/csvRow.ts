@@ -1,6 +1,6 @@
 /**
- * Reads a pasted CSV snippet: optional '#' comment lines, a header line of column names and one
- * data row (RFC 4180 quoting: fields in double quotes may hold commas, newlines and doubled
+ * Reads a pasted CSV snippet: optional '#' comment lines, a header line of column names and data
+ * rows (RFC 4180 quoting: fields in double quotes may hold commas, newlines and doubled
  * quotes). Blank lines are skipped.
  */
 

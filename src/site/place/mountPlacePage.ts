@@ -6,7 +6,7 @@
  */
 import { deriveObject } from '../../core/derive/deriveObject.ts';
 import { showUnderReadings } from '../readings/showUnderReadings.ts';
-import type { DeriveSettings, LineId, ObjectInputs } from '../../core/derive/types.ts';
+import type { DerivedObject, DeriveSettings, LineId, ObjectInputs } from '../../core/derive/types.ts';
 import { getLocalRelation } from '../../core/local/index.ts';
 import { createRng, seedFor } from '../../core/random/index.ts';
 import { CensusDbError, queryCensus, TABLE } from '../db/duckdb.ts';
@@ -18,7 +18,11 @@ import { chartSettings, eddingtonRatioDistribution, fwhmVsLineLuminosity, lbolVs
 import { mountChart } from '../charts/mountChart.ts';
 import { derivedRow } from './derivedRow.ts';
 import { FORM_FIELDS, FLUX_UNITS, LUM_UNITS, emptyForm, formToInputs, type FormField, type PlaceFormState } from './placeForm.ts';
-import { pastedRowToInputs } from './pastedRow.ts';
+import { pastedRows } from './pastedRow.ts';
+import type { MappedColumn } from './columnMap.ts';
+import { batchReadingsTable, batchTable, type BatchEntry } from './batchView.ts';
+import { rederiveBatch } from '../readings/rederiveBatch.ts';
+import type { Reading } from '../../core/readings/reading.ts';
 import { placeReport } from './placeReport.ts';
 import { resultView } from './resultView.ts';
 
@@ -77,6 +81,8 @@ export function mountPlacePage(doc: Document): void {
   const csvUnit = doc.getElementById('place-csv-unit') as HTMLSelectElement;
   const result = doc.getElementById('place-result')!;
   const resultBody = doc.getElementById('place-result-body')!;
+  const batchBody = doc.getElementById('place-batch-body')!;
+  const columnMap = JSON.parse(doc.getElementById('place-column-map-data')?.textContent ?? '[]') as MappedColumn[];
   const unitSelect = doc.getElementById('place-strength_unit') as HTMLSelectElement;
   bindDbStatus(doc.querySelector<HTMLElement>('[data-db-status]'));
 
@@ -138,6 +144,7 @@ export function mountPlacePage(doc: Document): void {
     } catch (err) {
       notes = [...notes, `Without the catalog (${dbFailed(err)}) the object cannot be ranked.`];
     }
+    batchBody.replaceChildren();
     resultBody.replaceChildren(resultView({ id: inputs.id, z: inputs.z, zSeed: settings.zSeed }, derived, placeReport(row, rows), relation, base, notes));
     showUnderReadings(doc, inputs, settings);
     result.hidden = false;
@@ -159,23 +166,92 @@ export function mountPlacePage(doc: Document): void {
     void place(r.inputs, r.notes);
   });
 
-  doc.getElementById('place-csv-go')!.addEventListener('click', () => {
-    const r = pastedRowToInputs(csv.value, csvUnit.value);
-    csvMsg.replaceChildren();
-    if (!r.inputs) {
-      csv.setAttribute('aria-invalid', 'true');
-      const ul = doc.createElement('ul');
-      for (const p of r.problems) {
-        const li = doc.createElement('li');
-        li.textContent = p;
-        ul.append(li);
+  /** Places every pasted row that could be read; the others are listed with their problem. */
+  const placeMany = async (entries: { row: number; id: string; inputs: ObjectInputs | null; problems: string[] }[], notes: string[]) => {
+    let rows: CatalogRow[] = [];
+    try {
+      rows = await population;
+    } catch (err) {
+      notes = [...notes, `Without the catalog (${dbFailed(err)}) the objects cannot be ranked.`];
+    }
+    const shown: BatchEntry[] = [];
+    const placed: { inputs: ObjectInputs; row: CatalogRow; derived: DerivedObject }[] = [];
+    const failed: string[] = [];
+    for (const e of entries) {
+      if (!e.inputs) {
+        shown.push({ row: e.row, id: e.id, problem: e.problems.join('; ') });
+        continue;
       }
-      csvMsg.append(ul);
+      try {
+        const d = deriveObject(e.inputs, settings, createRng(seedFor(settings.seed, e.inputs.id)));
+        const row = derivedRow(e.inputs, d);
+        placed.push({ inputs: e.inputs, row, derived: d });
+        shown.push({ row: e.row, id: e.id, placed: row, report: placeReport(row, rows) });
+      } catch (err) {
+        const why = `row ${e.row} (id ${e.id}): could not be derived: ${err instanceof Error ? err.message : String(err)}`;
+        failed.push(why);
+        shown.push({ row: e.row, id: e.id, problem: why });
+      }
+    }
+    if (failed.length) appendList(csvMsg, failed);
+    batchBody.replaceChildren(batchTable(doc, shown));
+    const readingsMount = doc.getElementById('place-readings-body');
+    const readings = JSON.parse(doc.getElementById('place-readings')?.textContent ?? '[]') as Reading[];
+    if (placed.length === 1) {
+      // one object: its full account, as for the form
+      const only = placed[0]!;
+      resultBody.replaceChildren(resultView({ id: only.inputs.id, z: only.inputs.z, zSeed: settings.zSeed }, only.derived, placeReport(only.row, rows), relation, base, notes));
+      showUnderReadings(doc, only.inputs, settings);
+    } else {
+      resultBody.replaceChildren(...notes.map((n) => {
+        const p = doc.createElement('p');
+        p.className = 'small muted';
+        p.textContent = n;
+        return p;
+      }));
+      if (readingsMount) {
+        readingsMount.replaceChildren();
+        if (readings.length && placed.length) {
+          try {
+            const all = placed.map((p) => p.inputs);
+            const byReading = readings.map((reading) => ({ reading, rows: rederiveBatch(all, settings, reading) }));
+            readingsMount.append(batchReadingsTable(doc, placed.flatMap((p, i) => byReading.map(({ reading, rows: rr }) => ({ id: p.inputs.id, reading, row: rr[i]! })))));
+          } catch (err) {
+            readingsMount.textContent = `The objects could not be derived under the readings: ${err instanceof Error ? err.message : String(err)}`;
+          }
+        }
+      }
+    }
+    result.hidden = false;
+    result.dataset.placed = placed.map((p) => p.inputs.id).join(',');
+    drawCharts(rows, placed.map((p) => p.row));
+    result.focus();
+  };
+
+  const appendList = (mount: HTMLElement, lines: readonly string[]) => {
+    const ul = doc.createElement('ul');
+    ul.id = 'place-batch-msgs';
+    for (const line of lines) {
+      const li = doc.createElement('li');
+      li.textContent = line;
+      ul.append(li);
+    }
+    mount.append(ul);
+  };
+
+  doc.getElementById('place-csv-go')!.addEventListener('click', () => {
+    const r = pastedRows(csv.value, csvUnit.value || undefined, columnMap);
+    csvMsg.replaceChildren();
+    const rowProblems = r.rows.flatMap((row) => row.problems);
+    if (r.problems.length || rowProblems.length) appendList(csvMsg, [...r.problems, ...rowProblems]);
+    if (!r.rows.some((row) => row.inputs)) {
+      csv.setAttribute('aria-invalid', 'true');
       csv.focus();
       return;
     }
-    csv.removeAttribute('aria-invalid');
+    if (rowProblems.length) csv.setAttribute('aria-invalid', 'true');
+    else csv.removeAttribute('aria-invalid');
     const ignored = r.ignored.length ? [`Columns left out (not inputs of the derivation): ${r.ignored.join(', ')}.`] : [];
-    void place(r.inputs, [...r.notes, ...ignored]);
+    void placeMany(r.rows, [...r.notes, ...ignored]);
   });
 }

@@ -36,6 +36,26 @@ const identity = (x: number): number => x;
  * none means the canonical unit). Names match canonical columns exactly, then ignoring case.
  */
 export function normalizeOne(header: readonly string[], cells: readonly Cell[], units: Readonly<Record<string, string | undefined>> = {}): NormalizedObject {
+  const res = normalizeRows(header, [cells], units);
+  if (!res.rows) return { inputs: null, problems: res.problems, ignored: res.ignored };
+  const [row] = res.rows;
+  return { inputs: row!.inputs, problems: row!.problems, ignored: res.ignored };
+}
+
+/** What {@link normalizeRows} found: problems of the header (then no rows), or each row's inputs and problems. */
+export interface NormalizedRows {
+  /** Problems of the columns as a whole (a unit that cannot be read, no id or z column); then `rows` is null. */
+  problems: InputProblem[];
+  rows: { row: number; id: string; inputs: ObjectInputs | null; problems: InputProblem[] }[] | null;
+  /** Header names that are not canonical inputs (kept out of the derivation). */
+  ignored: string[];
+}
+
+/**
+ * Checks several objects sharing one header, as {@link normalizeOne} does for one; rows are
+ * numbered from 1 and a repeated id is a problem of the later row, as in the catalog build.
+ */
+export function normalizeRows(header: readonly string[], rows: readonly (readonly Cell[])[], units: Readonly<Record<string, string | undefined>> = {}): NormalizedRows {
   const problems: InputProblem[] = [];
   const lower = header.map((h) => h.trim().toLowerCase());
   const claimed = new Set<number>();
@@ -84,10 +104,10 @@ export function normalizeOne(header: readonly string[], cells: readonly Cell[], 
   for (const req of ['id', 'z']) {
     if (!canonical.some((c) => c.name === req)) problems.push({ column: req, message: `no ${req} column` });
   }
-  if (problems.length) return { inputs: null, problems, ignored };
+  if (problems.length) return { problems, rows: null, ignored };
   const plan: ColumnPlan = { label: 'new object', canonical, passthrough: [], seenIds: new Map() };
-  const [row] = normalizeChunk({ rowOffset: 0, nRows: 1, columns: header.map((_, i) => [cells[i] ?? null]) }, plan);
-  return { inputs: row!.inputs, problems: row!.problems.map(problemOf), ignored };
+  const out = normalizeChunk({ rowOffset: 0, nRows: rows.length, columns: header.map((_, i) => rows.map((r) => r[i] ?? null)) }, plan);
+  return { problems: [], rows: out.map((r) => ({ row: r.row, id: r.id, inputs: r.inputs, problems: r.problems.map(problemOf) })), ignored };
 }
 
 function problemOf(p: RowProblem): InputProblem {

@@ -1,12 +1,31 @@
 import { LINES, type ObjectInputs } from '../../core/derive/types.ts';
+import { mapHeader, type MappedColumn } from './columnMap.ts';
 import { parsePastedCsv } from './csvRow.ts';
-import { normalizeOne } from './normalizeOne.ts';
+import { normalizeRows } from './normalizeOne.ts';
 import { implausibleInputs } from './plausibility.ts';
 
-/** What a pasted CSV row gives: the inputs, or messages naming each bad column. */
-export interface PastedResult {
+/**
+ * Most data rows placed from one paste: each is derived with the catalog's Monte Carlo draws
+ * (and again under every reading) in the page, so a bound keeps the tab responsive.
+ */
+export const MAX_PASTED_ROWS = 200;
+
+/** One pasted data row: its inputs, or one message per problem naming the row, the column and the reason. */
+export interface PastedRow {
+  /** 1-based data-row number (comment and blank lines not counted). */
+  row: number;
+  /** The row's id as pasted ('' when empty). */
+  id: string;
   inputs: ObjectInputs | null;
-  /** One line each, e.g. 'fwhm_halpha: -1200 km s-1: must be positive'. */
+  /** One line each, e.g. 'row 2 (id X-1): fwhm_halpha: -1200 km s-1: must be positive'. */
+  problems: string[];
+}
+
+/** What a pasted CSV snippet gives. */
+export interface PastedResult {
+  /** Every data row, in order (empty when the paste as a whole cannot be read). */
+  rows: PastedRow[];
+  /** Problems of the paste as a whole (no header, no id column, a unit that cannot be read). */
   problems: string[];
   /** Columns that are not canonical inputs and were left out (e.g. ra, notes). */
   ignored: string[];
@@ -14,18 +33,44 @@ export interface PastedResult {
 }
 
 /**
- * Reads a pasted CSV snippet (header line with canonical column names, then one data row)
- * into inputs. Every `flux_<line>` column and its errors are read in `fluxUnit`; the other
- * columns in their canonical units (km s^-1, erg s^-1, log M_sun, mag). Only the first data row
- * is used.
+ * Reads a pasted CSV snippet (a header line, then one or more data rows) into one object per
+ * row. Header names are read through the catalog's column map first (its source column names,
+ * in the units the catalog read them in), then as canonical names (in canonical units: km s^-1,
+ * erg s^-1, log M_sun, mag). When `fluxUnit` is given, every `flux_<line>` column and its
+ * errors are read in it instead. A row with a problem is reported on its own; the other rows
+ * are still read.
+ * @param text - the pasted text.
+ * @param fluxUnit - unit of every line flux, or undefined/'' to follow the column map.
+ * @param map - the catalog's column map (src/site/place/columnMap.ts).
  */
-export function pastedRowToInputs(text: string, fluxUnit: string): PastedResult {
+export function pastedRows(text: string, fluxUnit: string | undefined, map: readonly MappedColumn[] = []): PastedResult {
   const csv = parsePastedCsv(text);
-  if ('error' in csv) return { inputs: null, problems: [csv.error], ignored: [], notes: [] };
-  const units: Record<string, string> = {};
-  for (const l of LINES) units[`flux_${l}`] = fluxUnit;
-  const res = normalizeOne(csv.header, csv.rows[0]!, units);
-  const problems = [...res.problems, ...(res.inputs ? implausibleInputs(res.inputs) : [])].map((p) => (p.column ? `${p.column}: ${p.message}` : p.message));
-  const notes = csv.rows.length > 1 ? [`Only the first of the ${csv.rows.length} data rows is placed.`] : [];
-  return { inputs: problems.length ? null : res.inputs, problems, ignored: res.ignored, notes };
+  if ('error' in csv) return { rows: [], problems: [csv.error], ignored: [], notes: [] };
+  const header = mapHeader(csv.header, map);
+  const units: Record<string, string> = { ...header.units };
+  if (fluxUnit) {
+    for (const l of LINES) {
+      units[`flux_${l}`] = fluxUnit;
+      // errors follow their value's unit
+      for (const e of ['_err', '_err_lo', '_err_hi']) delete units[`flux_${l}${e}`];
+    }
+  }
+  const named = (column: string) => (header.pastedAs[column] ? `${header.pastedAs[column]} (${column})` : column);
+  if (header.problems.length) return { rows: [], problems: header.problems, ignored: [], notes: [] };
+  const notes: string[] = [];
+  let data = csv.rows;
+  if (data.length > MAX_PASTED_ROWS) {
+    notes.push(`${data.length} data rows were pasted; the first ${MAX_PASTED_ROWS} are placed. Paste the rest separately.`);
+    data = data.slice(0, MAX_PASTED_ROWS);
+  }
+  const res = normalizeRows(header.names, data, units);
+  if (!res.rows) {
+    return { rows: [], problems: res.problems.map((p) => (p.column ? `${named(p.column)}: ${p.message}` : p.message)), ignored: res.ignored, notes };
+  }
+  const rows = res.rows.map((r): PastedRow => {
+    const where = `row ${r.row}${r.id === '' ? ' (no id)' : ` (id ${r.id})`}`;
+    const all = [...r.problems, ...(r.inputs ? implausibleInputs(r.inputs) : [])];
+    return { row: r.row, id: r.id, inputs: all.length ? null : r.inputs, problems: all.map((p) => `${where}: ${p.column ? `${named(p.column)}: ` : ''}${p.message}`) };
+  });
+  return { rows, problems: [], ignored: res.ignored, notes };
 }

@@ -12,8 +12,21 @@ import { implausibleInputs } from './plausibility.ts';
 export const FORM_FIELDS = [
   'id', 'z', 'line', 'fwhm', 'fwhm_err', 'strength_kind', 'strength', 'strength_err', 'strength_unit', 'is_limit',
   'mu', 'mu_err', 'log_mstar', 'log_mstar_err', 'balmer', 'balmer_err', 'av', 'av_err',
+  'lam_l_5100', 'lam_l_5100_err', 'lam_l_3000', 'lam_l_3000_err', 'lam_l_1350', 'lam_l_1350_err',
+  'fwhm_hbeta', 'fwhm_hbeta_err', 'flux_hbeta', 'flux_hbeta_err',
+  'fwhm_mgii', 'fwhm_mgii_err', 'flux_mgii', 'flux_mgii_err',
+  'fwhm_civ', 'fwhm_civ_err', 'flux_civ', 'flux_civ_err', 'other_flux_unit',
 ] as const;
 export type FormField = (typeof FORM_FIELDS)[number];
+
+/** The continuum luminosities the form takes (canonical columns `lam_l_<Å>`, in erg s⁻¹). */
+export const CONTINUUM_FIELDS = ['lam_l_5100', 'lam_l_3000', 'lam_l_1350'] as const;
+
+/** The lines the form takes besides the main one (canonical `fwhm_<line>` and `flux_<line>` columns). */
+export const OTHER_LINES = ['hbeta', 'mgii', 'civ'] as const satisfies readonly LineId[];
+
+/** Text fields of the other lines and the continuum, named as their canonical columns. */
+type ExtraField = `${(typeof CONTINUUM_FIELDS)[number]}${'' | '_err'}` | `${'fwhm' | 'flux'}_${(typeof OTHER_LINES)[number]}${'' | '_err'}`;
 
 /** The form's values as typed (text fields as text, the checkbox as a boolean). */
 export interface PlaceFormState {
@@ -35,6 +48,27 @@ export interface PlaceFormState {
   balmer_err: string;
   av: string;
   av_err: string;
+  /** Continuum λL_λ at 5100, 3000 and 1350 Å, erg s⁻¹, with their errors. */
+  lam_l_5100: string;
+  lam_l_5100_err: string;
+  lam_l_3000: string;
+  lam_l_3000_err: string;
+  lam_l_1350: string;
+  lam_l_1350_err: string;
+  /** The other lines' FWHM (km s⁻¹) and flux (in `other_flux_unit`), with errors. */
+  fwhm_hbeta: string;
+  fwhm_hbeta_err: string;
+  flux_hbeta: string;
+  flux_hbeta_err: string;
+  fwhm_mgii: string;
+  fwhm_mgii_err: string;
+  flux_mgii: string;
+  flux_mgii_err: string;
+  fwhm_civ: string;
+  fwhm_civ_err: string;
+  flux_civ: string;
+  flux_civ_err: string;
+  other_flux_unit: string;
 }
 
 /** Units offered for a line flux (VOUnit-style strings read by src/core/units). */
@@ -59,6 +93,9 @@ export function emptyForm(): PlaceFormState {
   return {
     id: '', z: '', line: 'halpha', fwhm: '', fwhm_err: '', strength_kind: 'flux', strength: '', strength_err: '', strength_unit: FLUX_UNITS[0]!.value,
     is_limit: false, mu: '', mu_err: '', log_mstar: '', log_mstar_err: '', balmer: '', balmer_err: '', av: '', av_err: '',
+    lam_l_5100: '', lam_l_5100_err: '', lam_l_3000: '', lam_l_3000_err: '', lam_l_1350: '', lam_l_1350_err: '',
+    fwhm_hbeta: '', fwhm_hbeta_err: '', flux_hbeta: '', flux_hbeta_err: '', fwhm_mgii: '', fwhm_mgii_err: '', flux_mgii: '', flux_mgii_err: '',
+    fwhm_civ: '', fwhm_civ_err: '', flux_civ: '', flux_civ_err: '', other_flux_unit: FLUX_UNITS[0]!.value,
   };
 }
 
@@ -120,9 +157,29 @@ export function formToInputs(state: PlaceFormState): FormResult {
   put('balmer_decrement_err', state.balmer_err, 'balmer_err');
   put('av', state.av, 'av');
   put('av_err', state.av_err, 'av_err');
+  for (const c of CONTINUUM_FIELDS) {
+    put(c, state[c], c);
+    put(`${c}_err`, state[`${c}_err`], `${c}_err`);
+  }
+  const given = (f: ExtraField) => state[f].trim() !== '';
+  let otherWidth = false;
+  let otherStrength = CONTINUUM_FIELDS.some(given);
+  for (const l of OTHER_LINES) {
+    const fields = [`fwhm_${l}`, `fwhm_${l}_err`, `flux_${l}`, `flux_${l}_err`] as const;
+    if (!fields.some(given)) continue;
+    if (l === line) {
+      // the main line's columns are already in the header: a second value would be read twice
+      for (const f of fields) if (given(f)) errors[f] = 'this is the line chosen above: give it there';
+      continue;
+    }
+    otherWidth ||= given(`fwhm_${l}`);
+    otherStrength ||= given(`flux_${l}`);
+    units[`flux_${l}`] = state.other_flux_unit;
+    for (const f of fields) put(f, state[f], f);
+  }
 
-  if (state.fwhm.trim() === '') errors.fwhm = 'needed for the black-hole mass';
-  if (state.strength.trim() === '') errors.strength = `needed for the black-hole mass (the line ${state.strength_kind === 'lum' ? 'luminosity' : 'flux'})`;
+  if (state.fwhm.trim() === '' && !otherWidth) errors.fwhm = 'needed for the black-hole mass';
+  if (state.strength.trim() === '' && !otherStrength) errors.strength = `needed for the black-hole mass (the line ${state.strength_kind === 'lum' ? 'luminosity' : 'flux'})`;
   const res = normalizeOne(header, cells, units);
   for (const p of [...res.problems, ...(res.inputs ? implausibleInputs(res.inputs) : [])]) {
     const f = field.get(p.column) ?? (p.column.startsWith('flux_') || p.column.startsWith('lum_') ? 'strength' : 'id');

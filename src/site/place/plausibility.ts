@@ -49,5 +49,9 @@ export function implausibleInputs(inputs: ObjectInputs): InputProblem[] {
       out.push({ column: `lum_${line}`, message: `${l} erg s-1 is brighter than any broad line: is it in units of 1e-7 (W) or scaled twice? Choose the luminosity unit.` });
     }
   }
+  for (const [column, m] of [['lam_l_5100', inputs.lamL5100], ['lam_l_3000', inputs.lamL3000], ['lam_l_1350', inputs.lamL1350]] as const) {
+    const v = m?.value;
+    if (v !== undefined && v < MIN_PLAUSIBLE_LUM_ERG_S) out.push({ column, message: `${v} erg s-1 is far too faint for an AGN continuum: is it log10 of the luminosity? Give λL_λ in erg s-1 (e.g. 1.4e44).` });
+  }
   return out;
 }

@@ -68,4 +68,43 @@ describe('formToInputs', () => {
     const r = formToInputs(form({ strength_kind: 'lum', strength_unit: 'erg s-1', strength: '42.3', strength_err: '' }));
     expect(r.errors.strength).toMatch(/is it log10/);
   });
+
+  it('reads the continuum λL5100 and its error from their own fields', () => {
+    const r = formToInputs(form({ lam_l_5100: '1.369e44', lam_l_5100_err: '1.95e43' }));
+    expect(r.errors).toEqual({});
+    // data-demo/new-objects.csv, CDW-90003 (invented)
+    expect(r.inputs!.lamL5100).toEqual({ value: 1.369e44, errLo: 1.95e43, errHi: 1.95e43 });
+  });
+
+  it('places an Hβ-only object from the Hβ width and λL5100 without a main-line strength', () => {
+    const r = formToInputs(form({ line: 'hbeta', fwhm: '1534', fwhm_err: '134', strength: '', strength_err: '', lam_l_5100: '1.369e44' }));
+    expect(r.errors).toEqual({});
+    expect(r.inputs!.lines.hbeta!.fwhmKms!.value).toBe(1534);
+    expect(r.inputs!.lamL5100!.value).toBe(1.369e44);
+  });
+
+  it('reads the other lines in their own flux unit beside the main line', () => {
+    const r = formToInputs(form({ fwhm_hbeta: '1315', fwhm_hbeta_err: '92', flux_hbeta: '44.54', flux_hbeta_err: '2.24', fwhm_mgii: '3100', other_flux_unit: '1e-18 erg s-1 cm-2' }));
+    expect(r.errors).toEqual({});
+    const hb = r.inputs!.lines.hbeta!;
+    expect(hb.fwhmKms).toEqual({ value: 1315, errLo: 92, errHi: 92 });
+    // 44.54 × 1e-18 erg s-1 cm-2 (data-demo/new-objects.csv, CDW-90002, invented)
+    expectClose(hb.fluxCgs!.value, 44.54e-18, { rtol: 1e-12, source: 'unit conversion 1e-18' });
+    expectClose(hb.fluxCgs!.errLo!, 2.24e-18, { rtol: 1e-12, source: 'unit conversion 1e-18' });
+    expect(r.inputs!.lines.mgii!.fwhmKms!.value).toBe(3100);
+    expect(r.inputs!.lines.halpha!.fwhmKms!.value).toBe(2100);
+  });
+
+  it('marks an other-line field that repeats the main line', () => {
+    const r = formToInputs(form({ line: 'hbeta', fwhm_hbeta: '1315' }));
+    expect(r.inputs).toBeNull();
+    expect(r.errors.fwhm_hbeta).toBe('this is the line chosen above: give it there');
+  });
+
+  it('puts a problem of a new field beside that field', () => {
+    const r = formToInputs(form({ fwhm_civ: '-40' }));
+    expect(r.inputs).toBeNull();
+    expect(r.errors.fwhm_civ).toBe('-40 km s-1: must be positive');
+    expect(formToInputs(form({ lam_l_5100: '44.1' })).errors.lam_l_5100).toMatch(/^44\.1 erg s-1 is far too faint .*is it log10/);
+  });
 });
