@@ -8,7 +8,7 @@ export interface PastedResult {
   inputs: ObjectInputs | null;
   /** One line each, e.g. 'fwhm_halpha: -1200 km s-1: must be positive'. */
   problems: string[];
-  /** Columns that are not canonical inputs and were left out (e.g. ra, notes). */
+  /** Columns that are not canonical inputs and were left out (e.g. field, notes). */
   ignored: string[];
   notes: string[];
 }

@@ -13,7 +13,7 @@ describe('pastedRowToInputs', () => {
   it('reads a demo new object with its flux unit and leaves out the non-canonical columns', () => {
     const res = pastedRowToInputs(row('CDW-90001'), '1e-18 erg s-1 cm-2');
     expect(res.problems).toEqual([]);
-    expect(res.ignored).toEqual(['ra', 'dec', 'field', 'spec_program', 'notes']);
+    expect(res.ignored).toEqual(['field', 'spec_program', 'notes']);
     const i = res.inputs!;
     expect(i.id).toBe('CDW-90001');
     expect(i.z).toBe(5.4172);
