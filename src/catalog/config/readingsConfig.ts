@@ -15,7 +15,9 @@ export function defaultReadingsConfig(): ReadingsConfig {
   return { primary: 'standard', readings: [...BUILT_IN_READINGS] };
 }
 
-const KEYS = ['primary', 'use', 'custom'] as const;
+/** Keys of the config's `readings:` block. */
+export const READINGS_KEYS = ['primary', 'use', 'custom'] as const;
+const KEYS = READINGS_KEYS;
 const show = (v: unknown): string => (typeof v === 'string' ? JSON.stringify(v) : Array.isArray(v) ? 'a list' : v && typeof v === 'object' ? 'a mapping' : String(v));
 
 /**

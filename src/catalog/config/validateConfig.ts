@@ -54,14 +54,14 @@ export function describeValue(v: unknown): string {
 
 const isObj = (v: unknown): v is Obj => typeof v === 'object' && v !== null && !Array.isArray(v);
 
-/** Rules on numbers shared by the config file and the command-line overrides. */
+/** Rules on numbers shared by the config file, the command-line overrides and the JSON Schema (`schema`: the same range in JSON Schema words). */
 export const NUMBER_RULES = {
-  draws: { ok: (x: number) => Number.isInteger(x) && x >= 1 && x <= MAX_DRAWS, what: `an integer between 1 and ${MAX_DRAWS}` },
-  seed: { ok: (x: number) => Number.isSafeInteger(x) && x >= 0, what: 'an integer of at least 0' },
-  positive: { ok: (x: number) => Number.isFinite(x) && x > 0, what: 'a positive number' },
-  efficiency: { ok: (x: number) => Number.isFinite(x) && x > 0 && x < 1, what: 'a number between 0 and 1' },
-  dutyCycle: { ok: (x: number) => Number.isFinite(x) && x > 0 && x <= 1, what: 'a number between 0 and 1' },
-  zSeed: { ok: (x: number) => Number.isFinite(x) && x > 0, what: 'a number greater than 0' },
+  draws: { ok: (x: number) => Number.isInteger(x) && x >= 1 && x <= MAX_DRAWS, what: `an integer between 1 and ${MAX_DRAWS}`, schema: { type: 'integer', minimum: 1, maximum: MAX_DRAWS } },
+  seed: { ok: (x: number) => Number.isSafeInteger(x) && x >= 0, what: 'an integer of at least 0', schema: { type: 'integer', minimum: 0, maximum: Number.MAX_SAFE_INTEGER } },
+  positive: { ok: (x: number) => Number.isFinite(x) && x > 0, what: 'a positive number', schema: { type: 'number', exclusiveMinimum: 0 } },
+  efficiency: { ok: (x: number) => Number.isFinite(x) && x > 0 && x < 1, what: 'a number between 0 and 1', schema: { type: 'number', exclusiveMinimum: 0, exclusiveMaximum: 1 } },
+  dutyCycle: { ok: (x: number) => Number.isFinite(x) && x > 0 && x <= 1, what: 'a number between 0 and 1', schema: { type: 'number', exclusiveMinimum: 0, maximum: 1 } },
+  zSeed: { ok: (x: number) => Number.isFinite(x) && x > 0, what: 'a number greater than 0', schema: { type: 'number', exclusiveMinimum: 0 } },
 } as const;
 
 /**

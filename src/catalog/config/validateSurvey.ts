@@ -11,9 +11,12 @@ const show = (v: unknown): string => (typeof v === 'string' ? JSON.stringify(v) 
 
 /** Keys of the `survey:` block. */
 export const SURVEY_KEYS = ['fields', 'field_column', 'wavelength_range_angstrom', 'min_fwhm_kms', 'min_snr', 'flux_unit', 'relation_fit', 'densities'] as const;
-const FIELD_KEYS = ['name', 'area_arcmin2', 'source_plane_area_arcmin2', 'limits'];
-const FIT_KEYS = ['eddington_ratio', 'mstar_range', 'walkers', 'steps', 'burn'];
-const DENSITY_KEYS = ['log_mbh_bins', 'log_lbol_bins', 'z_ranges'];
+/** Keys of one `survey.fields[i]` entry. */
+export const FIELD_KEYS = ['name', 'area_arcmin2', 'source_plane_area_arcmin2', 'limits'];
+/** Keys of `survey.relation_fit`. */
+export const FIT_KEYS = ['eddington_ratio', 'mstar_range', 'walkers', 'steps', 'burn'];
+/** Keys of `survey.densities`. */
+export const DENSITY_KEYS = ['log_mbh_bins', 'log_lbol_bins', 'z_ranges'];
 
 /**
  * Checks the `survey:` block (see README, "Space densities and the selection-aware relation"). `fail` throws the

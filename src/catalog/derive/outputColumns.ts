@@ -84,6 +84,8 @@ export function buildOutputColumns(
   // The config's declarations (passthrough: in census.config.yaml) win over the file's own metadata.
   for (const name of Object.keys(declared)) {
     if (!plan.passthrough.some((p) => p.name === name)) {
+      const canonical = plan.canonical.find((c) => c.sourceName === name);
+      if (canonical) throw new CatalogError(`${plan.label}: the config declares passthrough.${name}, but column "${name}" is read as the canonical column ${canonical.name}, which has its own unit, UCD and description`);
       throw new CatalogError(`${plan.label}: the config declares passthrough.${name}, but the file has no such pass-through column`);
     }
   }

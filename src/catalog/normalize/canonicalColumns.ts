@@ -130,6 +130,8 @@ const BASE_COLUMNS: readonly BaseColumn[] = [
   { name: 'sigma_star', kind: 'velocity', unitText: 'km/s', description: 'Stellar velocity dispersion', ucd: 'phys.veloc.dispersion', limits: POSITIVE, measured: true },
   { name: 'av', kind: 'magnitude', unitText: 'mag', description: 'V-band attenuation toward the broad-line region', ucd: 'phys.absorption;em.opt.V', limits: between(0, 10), measured: true },
   { name: 'balmer_decrement', kind: 'dimensionless', unitText: '', description: 'Observed broad Hα/Hβ flux ratio', ucd: 'phot.flux;arith.ratio;spect.line', limits: POSITIVE, measured: true },
+  { name: 'ra', kind: 'angle', unitText: 'deg', description: 'Right ascension, equatorial (in the frame and equinox of the group\'s catalog)', ucd: 'pos.eq.ra;meta.main', limits: between(0, 360), measured: false },
+  { name: 'dec', kind: 'angle', unitText: 'deg', description: 'Declination, equatorial (in the frame and equinox of the group\'s catalog)', ucd: 'pos.eq.dec;meta.main', limits: between(-90, 90), measured: false },
 ];
 
 const ERROR_SIDES = [
@@ -183,8 +185,8 @@ function expand(base: BaseColumn): CanonicalColumn[] {
 
 /**
  * Every canonical input column, in output order: id, z, per-line FWHM/flux/luminosity, the
- * continuum luminosities, magnification, stellar mass, velocity dispersion, attenuation and
- * Balmer decrement, each measured one followed by its `_err`, `_err_lo`, `_err_hi` (and the
+ * continuum luminosities, magnification, stellar mass, velocity dispersion, attenuation,
+ * Balmer decrement and the position (ra, dec in degrees), each measured one followed by its `_err`, `_err_lo`, `_err_hi` (and the
  * line fluxes by `_is_limit`). The Parquet writer and the site reuse it for column metadata.
  */
 export const CANONICAL_COLUMNS: readonly CanonicalColumn[] = BASE_COLUMNS.flatMap(expand);

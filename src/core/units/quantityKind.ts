@@ -11,7 +11,8 @@ export type QuantityKind =
   | 'mass'
   | 'logMass'
   | 'dimensionless'
-  | 'logDimensionless';
+  | 'logDimensionless'
+  | 'angle';
 
 /** A kind's canonical unit: its VOUnits string, dimension, size in cgs, whether it is a log10 unit, and a readable name. */
 export interface KindSpec {
@@ -33,6 +34,7 @@ export const KIND_SPECS: Readonly<Record<QuantityKind, KindSpec>> = {
   logMass: { unit: 'log(solMass)', dimension: dim({ mass: 1 }), cgs: M_SUN_G, log: true, name: 'log mass' },
   dimensionless: { unit: '', dimension: DIMENSIONLESS, cgs: 1, log: false, name: 'dimensionless number' },
   logDimensionless: { unit: 'dex', dimension: DIMENSIONLESS, cgs: 1, log: true, name: 'dimensionless logarithm' },
+  angle: { unit: 'deg', dimension: dim({ angle: 1 }), cgs: 1, log: false, name: 'angle' },
 };
 
 /** Canonical unit string of each kind, e.g. `CANONICAL_UNITS.flux === 'erg s-1 cm-2'`. */

@@ -18,12 +18,15 @@ const u = (cgs: number, dimension: Dimension, prefixable: boolean): UnitSymbol =
 const angstrom = u(1e-8, LENGTH, false);
 const solLum = u(L_SUN_ERG_S, POWER, false);
 const solMass = u(M_SUN_G, MASS, false);
+/** Angles are measured in degrees along the angle axis. */
+const ANGLE = dim({ angle: 1 });
 
 /**
  * Unit symbols accepted in catalog unit strings: the IVOA VOUnits 1.0 (2014) names that the
  * derived quantities need, plus common spellings (Msun, Lsun, Å, A for ångström — there is no
  * electric current among our quantities). Sizes: SI definitions, IAU 2015 B3 nominal solar
- * values, IAU 2012 B2 au, IAU 2015 B2 parsec, Julian year.
+ * values, IAU 2012 B2 au, IAU 2015 B2 parsec, Julian year. Angles are sized in degrees
+ * (`deg`, `rad`, `arcmin`, `arcsec`, `mas`, and astropy's `hourangle` = 15 deg).
  */
 export const UNIT_SYMBOLS: Readonly<Record<string, UnitSymbol>> = {
   m: u(100, LENGTH, true),
@@ -53,6 +56,12 @@ export const UNIT_SYMBOLS: Readonly<Record<string, UnitSymbol>> = {
   M_sun: solMass,
   Msol: solMass,
   mag: u(1, dim({ mag: 1 }), true),
+  deg: u(1, ANGLE, false),
+  rad: u(180 / Math.PI, ANGLE, false),
+  arcmin: u(1 / 60, ANGLE, false),
+  arcsec: u(1 / 3600, ANGLE, true),
+  mas: u(1 / 3.6e6, ANGLE, false),
+  hourangle: u(15, ANGLE, false),
 };
 
 /** SI prefixes (VOUnits 1.0 §2.4); 'u', 'µ' (micro sign) and 'μ' (Greek mu) all mean 1e-6. */

@@ -16,6 +16,7 @@ export const VO_UNITS: Readonly<Record<QuantityKind, string>> = {
   logMass: 'dex(solMass)',
   dimensionless: '',
   logDimensionless: 'dex',
+  angle: 'deg',
 };
 
 /** VOUnits of log10 of a luminosity in erg/s, as astropy writes it. */

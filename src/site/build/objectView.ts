@@ -9,6 +9,7 @@ import { flagText, splitFlags } from '../text/flagText.ts';
 import { formatValue, MISSING } from '../text/formatValue.ts';
 import { limitMark } from '../text/limitMark.ts';
 import type { CatalogRow } from './loadCatalog.ts';
+import { objectPosition, type ObjectPosition } from './objectPosition.ts';
 import type { SiteMeta } from './siteMeta.ts';
 
 export interface ViewLine {
@@ -32,6 +33,8 @@ export interface ObjectView {
   inputs: ViewLine[];
   derived: ViewLine[];
   other: ViewLine[];
+  /** Right ascension and declination in degrees and sexagesimal, when the row has both (then they are in no table). */
+  position: ObjectPosition | null;
   flags: { code: string; text: string }[];
 }
 
@@ -68,9 +71,11 @@ export function objectView(row: CatalogRow, columns: readonly string[], meta: Pi
     numeric: typeof row[column] === 'number',
   });
 
+  const position = objectPosition(row);
+  const placed = (c: string): boolean => position !== null && (c === 'ra' || c === 'dec');
   const inputs: ViewLine[] = [];
   for (const c of columns) {
-    if (groupOf(c, meta) !== 'input' || ERROR_SUFFIX.test(c) || row[c] === null || row[c] === undefined) continue;
+    if (placed(c) || groupOf(c, meta) !== 'input' || ERROR_SUFFIX.test(c) || row[c] === null || row[c] === undefined) continue;
     const err = row[`${c}_err`];
     const lo = row[`${c}_err_lo`];
     const hi = row[`${c}_err_hi`];
@@ -96,11 +101,11 @@ export function objectView(row: CatalogRow, columns: readonly string[], meta: Pi
 
   const other: ViewLine[] = [];
   for (const c of columns) {
-    if (c === 'id' || groupOf(c, meta) !== 'passthrough') continue;
+    if (c === 'id' || placed(c) || groupOf(c, meta) !== 'passthrough') continue;
     if (row[c] === null || row[c] === undefined || row[c] === '') continue;
     other.push(line(c));
   }
 
   const flags = splitFlags(row.flags).map((code) => ({ code, text: flagText(code) }));
-  return { id: String(row.id ?? MISSING), inputs, derived, other, flags };
+  return { id: String(row.id ?? MISSING), inputs, derived, other, position, flags };
 }

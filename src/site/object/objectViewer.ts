@@ -131,6 +131,8 @@ export async function startObjectViewer(root: HTMLElement): Promise<void> {
     const view = objectView(row, rs.names, { columns });
     const z = view.inputs.find((l) => l.column === 'z');
     const parts: HTMLElement[] = [text('p', `Redshift ${z?.value ?? '—'}${view.flags.length ? ` · ${view.flags.length} ${view.flags.length === 1 ? 'flag' : 'flags'}` : ''}`, 'lede')];
+    const pos = view.position;
+    if (pos) parts.push(text('p', `RA ${pos.raHms} (${pos.raDeg}°) · Dec ${pos.decDms} (${pos.decDeg}°)`, 'object-position'));
     const grid = document.createElement('div');
     grid.className = 'two-col';
     const left = document.createElement('section');

@@ -27,7 +27,7 @@ export interface PastedResult {
   rows: PastedRow[];
   /** Problems of the paste as a whole (no header, no id column, a unit that cannot be read). */
   problems: string[];
-  /** Columns that are not canonical inputs and were left out (e.g. ra, notes). */
+  /** Columns that are not canonical inputs and were left out (e.g. field, notes). */
   ignored: string[];
   notes: string[];
 }

@@ -19,7 +19,7 @@ afterEach(async () => {
 });
 
 const CSV = [
-  'id,z,fwhm_halpha,fwhm_halpha_err,ra,notes',
+  'id,z,fwhm_halpha,fwhm_halpha_err,m_f444w,notes',
   'A-1,5.1,2100,150,150.1,"plain"',
   'A-2,6.0,-1200,150,150.2,"negative width"',
   'A-3,4.4,1500,,150.3,"with, comma"',
@@ -62,7 +62,7 @@ describe('runDerive', () => {
     expect(rows.map((r) => r.id)).toEqual(['A-1', 'A-2', 'A-3', 'A-4', 'A-5']);
     expect(rows.map((r) => r.row)).toEqual([1n, 2n, 3n, 4n, 5n]);
     const columns = Object.keys(rows[0]!);
-    expect(columns.slice(0, 6)).toEqual(['id', 'row', 'z', 'fwhm_halpha', 'fwhm_halpha_err', 'ra']);
+    expect(columns.slice(0, 6)).toEqual(['id', 'row', 'z', 'fwhm_halpha', 'fwhm_halpha_err', 'm_f444w']);
     expect(columns).toContain('notes');
     for (const c of ['age_gyr', 'dl_mpc', 'log_lum_halpha', 'log_mbh', 'mbh_method', 'log_lbol', 'lbol_method', 'log_edd_ratio', 'p_super_eddington', 'log_mseed', 'lambda_req_light', 'lambda_req_heavy', 'delta_log_mbh_local', 'local_offset_sigma', 'p_above_local', 'flags', 'log_mbh_p16', 'log_mbh_p50', 'log_mbh_p84', 'delta_log_mbh_local_p84']) {
       expect(columns).toContain(c);

@@ -247,7 +247,7 @@ describe('normalizeChunk builds the inputs of a valid row', () => {
   });
 
   it('copies passthrough cells unchanged, in plan order', async () => {
-    const rows = await normalize([['field', ['N', 'S']], ['id', ['A', 'B']], ['ra', [150.1, 53.2]], ['z', [5, 6]], ['ok', [true, null]]]);
+    const rows = await normalize([['field', ['N', 'S']], ['id', ['A', 'B']], ['m_f444w', [150.1, 53.2]], ['z', [5, 6]], ['ok', [true, null]]]);
     expect(rows.map((r) => r.passthrough)).toEqual([
       ['N', 150.1, true],
       ['S', 53.2, null],

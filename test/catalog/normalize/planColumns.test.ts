@@ -28,16 +28,17 @@ const failure = (infos: ColumnInfo[], cfg?: CensusConfig): string => {
 
 describe('planColumns', () => {
   it('finds canonical columns by exact name, then ignoring case, and passes the rest through in file order', () => {
-    const plan = planOf([s('ID'), f('Z'), f('FWHM_Halpha'), f('fwhm_halpha_err'), s('field'), f('RA')]);
+    const plan = planOf([s('ID'), f('Z'), f('FWHM_Halpha'), f('fwhm_halpha_err'), s('field'), f('RA'), f('mag_f444w')]);
     expect(plan.canonical.map((c) => [c.name, c.sourceName, c.sourceIndex])).toEqual([
       ['id', 'ID', 0],
       ['z', 'Z', 1],
       ['fwhm_halpha', 'FWHM_Halpha', 2],
       ['fwhm_halpha_err', 'fwhm_halpha_err', 3],
+      ['ra', 'RA', 5],
     ]);
     expect(plan.passthrough.map((p) => [p.name, p.sourceIndex])).toEqual([
       ['field', 4],
-      ['RA', 5],
+      ['mag_f444w', 6],
     ]);
     expect(plan.label).toBe('catalog.csv');
   });

@@ -114,6 +114,26 @@ describe('unitConverter errors', () => {
   });
 });
 
+describe('unitConverter for angles', () => {
+  it.each<[string, number, number]>([
+    // Definitions: 1 h of hour angle = 15 deg; π rad = 180 deg; 60 arcmin = 3600 arcsec = 1 deg (IAU/SI definitions).
+    ['deg', 47.342485, 47.342485],
+    ['hourangle', 10, 150],
+    ['rad', Math.PI, 180],
+    ['arcmin', 90, 1.5],
+    ['arcsec', 5400, 1.5],
+    ['mas', 3.6e6, 1],
+  ])('converts %s to degrees (%s → %s)', (unit, x, deg) => {
+    expectClose(unitConverter(unit, 'angle')(x), deg, { rtol: 1e-14, source: 'definition of the unit' });
+  });
+
+  it('keeps angles apart from pure numbers', () => {
+    expect(() => unitConverter('deg', 'dimensionless')).toThrow('unit "deg" is an angle, expected a dimensionless number (dimensionless)');
+    expect(() => unitConverter('', 'angle')).not.toThrow();
+    expect(() => unitConverter('km/s', 'angle')).toThrow('unit "km/s" is a velocity, expected an angle (deg)');
+  });
+});
+
 describe('describeUnit', () => {
   it('says what a unit measures and its size in cgs', () => {
     const d = describeUnit('1e-18 erg/s/cm2');
@@ -135,6 +155,7 @@ describe('describeUnit', () => {
       logMass: 'log(solMass)',
       dimensionless: '',
       logDimensionless: 'dex',
+      angle: 'deg',
     });
   });
 });

@@ -63,7 +63,9 @@ describe('reading the catalog at build time', () => {
     const mbh = view.derived.find((l) => l.column === 'log_mbh')!;
     expect(mbh.spread).toBe(`${(Number(row.log_mbh) - 0.4).toFixed(2)} – ${(Number(row.log_mbh) + 0.4).toFixed(2)}`);
     expect(view.inputs.find((l) => l.column === 'fwhm_halpha')!.spread).toBe('± 150');
-    expect(view.other.map((l) => l.column)).toEqual(expect.arrayContaining(['ra', 'dec', 'field', 'notes']));
+    expect(view.other.map((l) => l.column)).toEqual(expect.arrayContaining(['field', 'notes']));
+    expect(view.position).not.toBeNull();
+    expect([...view.inputs, ...view.other].map((l) => l.column)).not.toContain('ra');
     expect(view.flags.map((f) => f.code)).toEqual(['no_host_mass']);
   });
 

@@ -22,7 +22,7 @@ describe('pastedRows', () => {
   it('reads a demo new object with its flux unit and leaves out the non-canonical columns', () => {
     const res = pastedRows(row('CDW-90001'), '1e-18 erg s-1 cm-2');
     expect(res.problems).toEqual([]);
-    expect(res.ignored).toEqual(['ra', 'dec', 'field', 'spec_program', 'notes']);
+    expect(res.ignored).toEqual(['field', 'spec_program', 'notes']);
     expect(res.rows).toHaveLength(1);
     expect(res.rows[0]!.problems).toEqual([]);
     const i = res.rows[0]!.inputs!;
