@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { launchBrowser } from './browser.ts';
-import { openSite } from './sitePage.ts';
+import { openSite, runSql } from './sitePage.ts';
 
 const CHARTS = ['relation', 'mbh-function', 'lbol-function', 'totals'];
 
@@ -67,8 +67,7 @@ describe('population page', () => {
     try {
       const sql = 'SELECT count(*) AS n FROM census JOIN population USING (id) WHERE population.vmax_cmpc3 > 0';
       await page.goto(new URL('query/', inject('siteUrl')).href);
-      await page.locator('#sql').fill(sql);
-      await page.locator('#sql').press('Control+Enter');
+      await runSql(page, sql, 60_000);
       await page.waitForSelector('table[data-results] tbody tr', { timeout: 60_000 });
       const n = Number(await page.locator('table[data-results] tbody tr').first().locator('td').first().textContent());
       expect(n).toBeGreaterThan(100);
