@@ -1,6 +1,8 @@
 import type { DeriveSettings, DerivedObject, ObjectInputs } from '../../core/derive/types.ts';
 import { createRng, seedFor } from '../../core/random/index.ts';
 import type { Rng } from '../../core/random/index.ts';
+import { ReusableDrawBank, type DrawBank } from '../../core/random/drawBank.ts';
+import { drawCount } from '../../core/derive/drawCount.ts';
 import { allocatePacked, packInto } from './packedDerived.ts';
 import type { PackedDerived } from './packedDerived.ts';
 import type { Reading } from '../../core/readings/reading.ts';
@@ -13,7 +15,7 @@ export interface BatchReadings {
 }
 
 /** Signature of `deriveObject` (src/core/derive/deriveObject.ts). */
-export type DeriveObjectFn = (inputs: ObjectInputs, settings: DeriveSettings, rng: Rng) => DerivedObject;
+export type DeriveObjectFn = (inputs: ObjectInputs, settings: DeriveSettings, random: Rng | DrawBank) => DerivedObject;
 
 /**
  * Derives every object of a batch, each with its own random stream seeded from
@@ -30,15 +32,19 @@ export function deriveBatch(
   const packed = allocatePacked(inputs.length);
   const under = readings ? readings.list.map(() => allocatePacked(inputs.length)) : null;
   const rngOf = (id: string): Rng => createRng(seedFor(settings.seed, id));
+  // One bank of deviates per object, shared by its readings: the same results as a fresh
+  // stream per reading, with the deviates drawn once.
+  const bank = new ReusableDrawBank();
+  const draws = drawCount(settings);
   for (let i = 0; i < inputs.length; i++) {
     const input = inputs[i]!;
     try {
-      const main = readings ? deriveUnderReading(input, settings, readings.primary, deriveObject, rngOf(input.id)) : deriveObject(input, settings, rngOf(input.id));
+      const deviates = bank.reset(rngOf(input.id), draws);
+      const main = readings ? deriveUnderReading(input, settings, readings.primary, deriveObject, deviates) : deriveObject(input, settings, deviates);
       packInto(packed, i, main);
       if (readings && under) {
-        // Each reading draws from the object's own stream afresh: the same draws under every reading.
         readings.list.forEach((r, j) => {
-          const d = r.id === readings.primary.id ? main : deriveUnderReading(input, settings, r, deriveObject, rngOf(input.id));
+          const d = r.id === readings.primary.id ? main : deriveUnderReading(input, settings, r, deriveObject, deviates);
           packInto(under[j]!, i, d);
         });
       }

@@ -1,6 +1,8 @@
 import type { DeriveSettings, DerivedObject, LimitMarks, LineId, ObjectInputs, Percentiles } from './types.ts';
 import { PLAUSIBLE } from './plausibleRanges.ts';
+import { drawCount } from './drawCount.ts';
 import type { Rng } from '../random/rng.ts';
+import { isDrawBank, ReusableDrawBank, type DrawBank } from '../random/drawBank.ts';
 import { percentiles16_50_84 } from '../random/percentiles.ts';
 import { logL5100FromLogLHalpha, logL5100FromLogLHbeta, inCalibrationRange } from '../virial/index.ts';
 import { inLocalRelationRange } from '../local/localRelation.ts';
@@ -11,6 +13,8 @@ import { createBuffers, evaluateChain, sampleInputs, OUT, type ChainBuffers } fr
 /** Working arrays, reused across objects: one sample for the nominal values, `draws` for the Monte Carlo. */
 const nominalBuffers = createBuffers(1);
 let drawBuffers: ChainBuffers = createBuffers(0);
+/** The deviates of the object being derived, when the caller passes its random stream. */
+const ownBank = new ReusableDrawBank();
 
 /** Slack, dex, when testing that a nominal value lies in its interval (rounding of the linear L_bol form). */
 const INTERVAL_TOL = 1e-9;
@@ -34,13 +38,16 @@ const finiteOrNull = (x: number): number | null => (Number.isFinite(x) ? x : nul
  * or outside its own 16–84 % interval (with at least 100 draws) is null and flagged `implausible`,
  * with what rests on it.
  *
- * The random stream is the caller's: the catalog build seeds it from (global seed, object
- * id) so results do not depend on row order or thread count.
+ * The randomness is the caller's: the catalog build seeds the object's stream from (global
+ * seed, object id) so results do not depend on row order or thread count. Given a stream, the
+ * object's deviates are drawn from it role by role (see DrawBank); given a DrawBank (the
+ * readings pass one per object), its deviates are used, so derivations of one object under
+ * several readings share them and give exactly what each would give alone from the same stream.
  * @param inputs - validated inputs in canonical units (see types.ts).
  * @param settings - calibrations, cosmology, constants and Monte Carlo settings.
- * @param rng - the object's random source.
+ * @param random - the object's random stream, or its bank of deviates with `settings.draws` per role.
  */
-export function deriveObject(inputs: ObjectInputs, settings: DeriveSettings, rng: Rng): DerivedObject {
+export function deriveObject(inputs: ObjectInputs, settings: DeriveSettings, random: Rng | DrawBank): DerivedObject {
   const plan = planObject(inputs, settings);
   const nb = nominalBuffers;
   sampleInputs(plan, settings, null, nb);
@@ -73,10 +80,12 @@ export function deriveObject(inputs: ObjectInputs, settings: DeriveSettings, rng
     if (!inLocalRelationRange(plan.local.rel, nb.x[0] as number)) flags.add('local_relation_extrapolated');
   }
 
-  const draws = Math.max(1, Math.floor(settings.draws));
+  const draws = drawCount(settings);
+  const bank = isDrawBank(random) ? random : ownBank.reset(random, draws);
+  if (bank.n !== draws) throw new RangeError(`the bank holds ${bank.n} draws per role, the settings ask for ${draws}`);
   if (drawBuffers.n !== draws) drawBuffers = createBuffers(draws);
   const db = drawBuffers;
-  sampleInputs(plan, settings, rng, db);
+  sampleInputs(plan, settings, bank, db);
   evaluateChain(plan, settings, db, false);
   const [dMbh, dLbol, dEdd, , dDelta] = db.out as [Float64Array, Float64Array, Float64Array, Float64Array, Float64Array];
   const localScatter = db.localScatter;

@@ -1,7 +1,7 @@
 import type { Rng } from '../random/rng.ts';
 import { splitNormal } from '../random/splitNormal.ts';
-import { standardNormal } from '../random/standardNormal.ts';
 import type { Measured } from './types.ts';
+import type { DrawBank } from '../random/drawBank.ts';
 
 /** Redraws allowed before a non-positive draw is replaced by a tiny positive value. */
 const MAX_REDRAWS = 64;
@@ -26,55 +26,48 @@ export function drawPositive(rng: Rng, m: Measured): number {
   return m.value * 1e-3;
 }
 
-/**
- * Fills `out` with draws of a positive quantity, as {@link drawPositive} one by one; the
- * common symmetric case runs as one tight loop (the Monte Carlo's hot path).
- * @param rng - random source.
- * @param m - the measurement.
- * @param out - receives `out.length` draws.
- */
-export function drawPositiveInto(rng: Rng, m: Measured, out: Float64Array): void {
-  const lo = m.errLo ?? m.errHi ?? 0;
-  const hi = m.errHi ?? lo;
-  const v = m.value;
-  if (lo === 0 && hi === 0) {
-    out.fill(v);
-    return;
-  }
-  for (let k = 0; k < out.length; k++) {
-    const x = lo === hi ? v + lo * standardNormal(rng) : splitNormal(rng, v, lo, hi);
-    out[k] = x > 0 ? x : drawPositive(rng, m);
-  }
-}
-
-/**
- * One Monte Carlo draw of a quantity that may take any sign (log masses, A_V before clipping).
- * @param rng - random source.
- * @param m - the measurement.
- */
-export function drawMeasured(rng: Rng, m: Measured): number {
-  const lo = m.errLo ?? m.errHi ?? 0;
-  const hi = m.errHi ?? lo;
-  return lo === 0 && hi === 0 ? m.value : splitNormal(rng, m.value, lo, hi);
-}
-
-/**
- * Fills `out` with draws of a quantity of any sign (see {@link drawMeasured}).
- * @param rng - random source.
- * @param m - the measurement.
- * @param out - receives `out.length` draws.
- */
-export function drawMeasuredInto(rng: Rng, m: Measured, out: Float64Array): void {
-  const lo = m.errLo ?? m.errHi ?? 0;
-  const hi = m.errHi ?? lo;
-  const v = m.value;
-  if (lo === 0 && hi === 0) out.fill(v);
-  else if (lo === hi) for (let k = 0; k < out.length; k++) out[k] = v + lo * standardNormal(rng);
-  else for (let k = 0; k < out.length; k++) out[k] = splitNormal(rng, v, lo, hi);
-}
-
 /** Signal-to-noise of a positive measurement (Infinity when exact). */
 export function snr(m: Measured): number {
   const err = Math.max(m.errLo ?? 0, m.errHi ?? m.errLo ?? 0);
   return err > 0 ? m.value / err : Infinity;
+}
+
+/**
+ * Fills `out` with draws of a measurement from the deviates a bank keeps for `role`: the same
+ * deviates for every reading, whatever the measurement's scale. Symmetric errors: value + σ·z.
+ * Split normal (as {@link splitNormal}): below the value with probability σ_lo/(σ_lo + σ_hi),
+ * from the role's uniforms, at distance σ·|z|. A positive quantity drawn ≤ 0 is redrawn from
+ * the role's own redraw stream (as {@link drawPositive}), the same stream for every reading.
+ * @param bank - the object's deviates.
+ * @param role - the measurement's role, e.g. 'width_halpha'.
+ * @param m - the measurement (errors absent = exact).
+ * @param out - receives `bank.n` draws.
+ * @param positive - truncate at zero.
+ */
+export function drawFromBank(bank: DrawBank, role: string, m: Measured, out: Float64Array, positive: boolean): void {
+  const lo = m.errLo ?? m.errHi ?? 0;
+  const hi = m.errHi ?? lo;
+  const v = m.value;
+  const n = out.length;
+  if (lo === 0 && hi === 0) {
+    out.fill(v);
+    return;
+  }
+  const z = bank.normals(role);
+  if (lo === hi) for (let k = 0; k < n; k++) out[k] = v + lo * (z[k] as number);
+  else {
+    const u = bank.uniforms(role);
+    const width = lo + hi;
+    for (let k = 0; k < n; k++) {
+      const a = Math.abs(z[k] as number);
+      out[k] = (u[k] as number) * width < lo ? v - lo * a : v + hi * a;
+    }
+  }
+  if (!positive) return;
+  let redraw: Rng | null = null;
+  for (let k = 0; k < n; k++) {
+    if ((out[k] as number) > 0) continue;
+    redraw ??= bank.redraws(role);
+    out[k] = drawPositive(redraw, m);
+  }
 }

@@ -1,7 +1,7 @@
 import type { DeriveSettings } from './types.ts';
 import type { LumSource, ObjectPlan } from './objectPlan.ts';
-import type { Rng } from '../random/rng.ts';
-import { fillNormal } from '../random/fillNormal.ts';
+import type { DrawBank } from '../random/drawBank.ts';
+import { DRAW_ROLES } from './drawRoles.ts';
 import { ebvFromBalmerDecrement } from '../dust/balmerDecrement.ts';
 import { virialLogMass } from '../virial/virialCalibration.ts';
 import { logL5100FromLogLHbeta } from '../virial/lineContinuumRelations.ts';
@@ -10,7 +10,7 @@ import { logLbolFromContinuum } from '../bolometric/logLbolFromContinuum.ts';
 import { logLbolFixedBC } from '../bolometric/fixedCorrections.ts';
 import { logSeedMassRequired } from '../growth/salpeterGrowth.ts';
 import { localLogMbh } from '../local/localRelation.ts';
-import { drawMeasuredInto, drawPositiveInto } from './drawPositive.ts';
+import { drawFromBank } from './drawPositive.ts';
 
 /** Slots of the chain's outputs. */
 export const OUT = { logMbh: 0, logLbol: 1, logEddRatio: 2, logMseed: 3, deltaLocal: 4 } as const;
@@ -54,38 +54,39 @@ export function createBuffers(n: number): ChainBuffers {
 }
 
 /**
- * Fills the input arrays: with draws of every measurement the chain uses (`rng` given; split
+ * Fills the input arrays: with draws of every measurement the chain uses (`bank` given; split
  * normals, positive quantities truncated at zero, upper-limit fluxes held at their limit, the
  * calibration's and the local relation's intrinsic scatter; a Balmer decrement formed from the
- * given Hα and Hβ fluxes is formed from each draw's fluxes), or with the central values and no scatter (`rng` null:
- * the nominal evaluation, which also fills every source, used or not, for `log_lum_<line>`).
- * Draws are taken input by input, in a fixed order, so a seeded stream gives fixed results.
+ * given Hα and Hβ fluxes is formed from each draw's fluxes), or with the central values and no
+ * scatter (`bank` null: the nominal evaluation, which also fills every source, used or not, for
+ * `log_lum_<line>`). Each measurement draws from the bank's deviates of its role (see
+ * {@link DRAW_ROLES}), so the draws do not depend on which other inputs an object has, and every
+ * reading of the object sees the same deviates.
  */
-export function sampleInputs(plan: ObjectPlan, settings: DeriveSettings, rng: Rng | null, b: ChainBuffers): void {
-  const draw = (m: { value: number }, out: Float64Array, positive: boolean) => {
-    if (!rng) out.fill(m.value);
-    else if (positive) drawPositiveInto(rng, m, out);
-    else drawMeasuredInto(rng, m, out);
+export function sampleInputs(plan: ObjectPlan, settings: DeriveSettings, bank: DrawBank | null, b: ChainBuffers): void {
+  const draw = (role: string, m: { value: number }, out: Float64Array, positive: boolean) => {
+    if (!bank) out.fill(m.value);
+    else drawFromBank(bank, role, m, out, positive);
   };
-  if (plan.mu) {
-    draw(plan.mu, b.logMu, true);
+  if (plan.mu && !isExact(plan.mu)) {
+    draw(DRAW_ROLES.mu, plan.mu, b.logMu, true);
     for (let k = 0; k < b.n; k++) b.logMu[k] = Math.log10(b.logMu[k] as number);
-  } else b.logMu.fill(0);
+  } else b.logMu.fill(plan.mu ? Math.log10(plan.mu.value) : 0);
 
   const dust = plan.dust;
   if (dust.mode === 'av') {
-    draw(dust.m, b.ebv, false);
+    draw(DRAW_ROLES.av, dust.m, b.ebv, false);
     for (let k = 0; k < b.n; k++) b.ebv[k] = Math.max(0, b.ebv[k] as number) / dust.rv;
   } else if (dust.mode === 'decrement') {
-    draw(dust.m, b.ebv, true);
+    draw(DRAW_ROLES.decrement, dust.m, b.ebv, true);
     for (let k = 0; k < b.n; k++) b.ebv[k] = ebvFromBalmerDecrement(b.ebv[k] as number, settings.dustCurve, settings.intrinsicBalmer);
   } else b.ebv.fill(0);
 
-  const indices = rng ? plan.used : plan.sources.map((_, i) => i);
+  const indices = bank ? plan.used : plan.sources.map((_, i) => i);
   for (const i of indices) {
     const s = plan.sources[i] as LumSource;
     if (s.isLimit) (b.logL[i] as Float64Array).fill(s.m.value);
-    else draw(s.m, b.logL[i] as Float64Array, true);
+    else draw(DRAW_ROLES.luminosity[s.key], s.m, b.logL[i] as Float64Array, true);
   }
   if (dust.mode === 'fluxes') {
     // The decrement of each draw from that draw's own Hα and Hβ fluxes (still observed fluxes here).
@@ -96,18 +97,28 @@ export function sampleInputs(plan: ObjectPlan, settings: DeriveSettings, rng: Rn
   }
 
   if (plan.mass) {
-    draw(plan.mass.fwhm, b.logFwhm, true);
+    draw(DRAW_ROLES.width[plan.mass.line], plan.mass.fwhm, b.logFwhm, true);
     for (let k = 0; k < b.n; k++) b.logFwhm[k] = Math.log10(b.logFwhm[k] as number);
-    if (rng) fillNormal(rng, b.scatter, 0, plan.mass.cal.scatterDex);
+    if (bank) scaled(bank.normals(DRAW_ROLES.massScatter), plan.mass.cal.scatterDex, b.scatter);
     else b.scatter.fill(0);
   }
 
   if (plan.local) {
-    draw(plan.local.x, b.x, plan.local.xIsSigma);
+    draw(DRAW_ROLES.host, plan.local.x, b.x, plan.local.xIsSigma);
     if (plan.local.xIsSigma) for (let k = 0; k < b.n; k++) b.x[k] = Math.log10(b.x[k] as number);
-    if (rng) fillNormal(rng, b.localScatter, 0, plan.local.rel.scatterDex);
+    if (bank) scaled(bank.normals(DRAW_ROLES.localScatter), plan.local.rel.scatterDex, b.localScatter);
     else b.localScatter.fill(0);
   }
+}
+
+/** True for a measurement without errors: every draw is its value. */
+function isExact(m: { errLo?: number; errHi?: number }): boolean {
+  return !m.errLo && !m.errHi;
+}
+
+/** out = sigma · z, draw by draw. */
+function scaled(z: Float64Array, sigma: number, out: Float64Array): void {
+  for (let k = 0; k < out.length; k++) out[k] = sigma * (z[k] as number);
 }
 
 /** log10 L_bol from the corrected log10 luminosity of the plan's bolometric source. */

@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { drawMeasured, drawMeasuredInto, drawPositive, drawPositiveInto, snr } from '../../../src/core/derive/drawPositive.ts';
+import { drawFromBank, drawPositive, snr } from '../../../src/core/derive/drawPositive.ts';
+import type { Measured } from '../../../src/core/derive/types.ts';
+import { createDrawBank } from '../../../src/core/random/drawBank.ts';
 import { createRng } from '../../../src/core/random/createRng.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 
@@ -19,53 +21,58 @@ function mean(a: ArrayLike<number>): number {
   return s / a.length;
 }
 
-describe('drawPositive and drawPositiveInto', () => {
-  it('return the value itself for an exact measurement', () => {
-    const rng = createRng(1);
-    expect(drawPositive(rng, { value: 3 })).toBe(3);
-    const out = new Float64Array(4);
-    drawPositiveInto(rng, { value: 3, errLo: 0, errHi: 0 }, out);
-    expect([...out]).toEqual([3, 3, 3, 3]);
+/** A bank of N deviates per role, from a seeded stream. */
+const bankOf = (seed: number) => createDrawBank(createRng(seed), N);
+const drawn = (seed: number, m: Measured, positive: boolean, role = 'x') => {
+  const out = new Float64Array(N);
+  drawFromBank(bankOf(seed), role, m, out, positive);
+  return out;
+};
+
+/** Index of the first difference of two arrays, −1 when equal element by element. */
+const firstDifference = (a: Float64Array, b: Float64Array): number => {
+  if (a.length !== b.length) return 0;
+  for (let k = 0; k < a.length; k++) if (!Object.is(a[k], b[k])) return k;
+  return -1;
+};
+
+describe('drawPositive', () => {
+  it('returns the value itself for an exact measurement', () => {
+    expect(drawPositive(createRng(1), { value: 3 })).toBe(3);
   });
 
-  it('draw N(1, 1) truncated at zero: every draw positive, mean 1.2876', () => {
+  it('draws N(1, 1) truncated at zero: every draw positive, mean 1.2876', () => {
     const rng = createRng(2);
     const one = Array.from({ length: N }, () => drawPositive(rng, { value: 1, errLo: 1, errHi: 1 }));
     expect(Math.min(...one)).toBeGreaterThan(0);
     expectClose(mean(one), TRUNC_MEAN, { atol: meanTol(TRUNC_SD), source: 'truncated normal mean, closed form, 4 standard errors' });
-    const many = new Float64Array(N);
-    drawPositiveInto(rng, { value: 1, errLo: 1, errHi: 1 }, many);
-    expect(Math.min(...many)).toBeGreaterThan(0);
-    expectClose(mean(many), TRUNC_MEAN, { atol: meanTol(TRUNC_SD), source: 'truncated normal mean, closed form, 4 standard errors' });
-  });
-
-  it('take an error given on one side only as symmetric', () => {
-    const a = new Float64Array(N);
-    const b = new Float64Array(N);
-    drawPositiveInto(createRng(3), { value: 1, errHi: 1 }, a);
-    drawPositiveInto(createRng(3), { value: 1, errLo: 1, errHi: 1 }, b);
-    expect(a).toEqual(b);
-    expectClose(mean(a), TRUNC_MEAN, { atol: meanTol(TRUNC_SD), source: 'truncated normal mean, closed form, 4 standard errors' });
-  });
-
-  it('draw asymmetric errors as a split normal, a fraction σlo/(σlo+σhi) below the value', () => {
-    const out = new Float64Array(N);
-    drawPositiveInto(createRng(4), { value: 10, errLo: 1, errHi: 3 }, out);
-    let below = 0;
-    for (const x of out) if (x < 10) below++;
-    // split normal (John 1982): P(x < mode) = 1/4; binomial standard error sqrt(p(1−p)/N), 4 of them
-    expectClose(below / N, 0.25, { atol: 4 * Math.sqrt((0.25 * 0.75) / N), source: 'split normal, closed form' });
-    // mean = mode + √(2/π)(σhi − σlo) = 10 + 1.595769 (closed form); sd² = (1 − 2/π)(σhi − σlo)² + σlo σhi = 4.4535
-    expectClose(mean(out), 10 + Math.sqrt(2 / Math.PI) * 2, { atol: meanTol(Math.sqrt(4.4535)), source: 'split normal mean, closed form' });
   });
 });
 
-describe('drawMeasured and drawMeasuredInto', () => {
-  it('return the value for an exact measurement and keep negative draws', () => {
-    const rng = createRng(5);
-    expect(drawMeasured(rng, { value: -2 })).toBe(-2);
+describe('drawFromBank', () => {
+  it('fills the value itself for an exact measurement, without touching the bank', () => {
+    const out = new Float64Array(4);
+    const bank = { n: 4, normals: () => { throw new Error('drew'); }, uniforms: () => { throw new Error('drew'); }, redraws: () => { throw new Error('drew'); } };
+    drawFromBank(bank, 'x', { value: 3, errLo: 0, errHi: 0 }, out, true);
+    expect([...out]).toEqual([3, 3, 3, 3]);
+  });
+
+  it('draws value + σ·z from the role\'s normal deviates for a symmetric error', () => {
+    const bank = bankOf(7);
     const out = new Float64Array(N);
-    drawMeasuredInto(rng, { value: 0, errLo: 1, errHi: 1 }, out);
+    drawFromBank(bank, 'width_halpha', { value: 2000, errLo: 150, errHi: 150 }, out, false);
+    const z = bank.normals('width_halpha');
+    for (let k = 0; k < N; k += 997) expect(out[k]).toBe(2000 + 150 * (z[k] as number));
+  });
+
+  it('draws a positive quantity as N(1, 1) truncated at zero: every draw positive, mean 1.2876', () => {
+    const out = drawn(2, { value: 1, errLo: 1, errHi: 1 }, true);
+    expect(Math.min(...out)).toBeGreaterThan(0);
+    expectClose(mean(out), TRUNC_MEAN, { atol: meanTol(TRUNC_SD), source: 'truncated normal mean, closed form, 4 standard errors' });
+  });
+
+  it('keeps negative draws of a quantity of any sign: N(0, 1), half below zero', () => {
+    const out = drawn(5, { value: 0, errLo: 1, errHi: 1 }, false);
     let below = 0;
     for (const x of out) if (x < 0) below++;
     // N(0, 1): half below zero, none clipped; binomial, 4 standard errors
@@ -73,20 +80,45 @@ describe('drawMeasured and drawMeasuredInto', () => {
     expectClose(mean(out), 0, { atol: meanTol(1), source: 'normal mean, closed form' });
   });
 
-  it('draw a split normal for asymmetric errors, one by one and into an array alike', () => {
-    const rng = createRng(6);
-    const one = Array.from({ length: N }, () => drawMeasured(rng, { value: 0, errLo: 3, errHi: 1 }));
-    const many = new Float64Array(N);
-    drawMeasuredInto(rng, { value: 0, errLo: 3, errHi: 1 }, many);
-    for (const draws of [one, many]) {
+  it('takes an error given on one side only as symmetric', () => {
+    const both = drawn(3, { value: 1, errLo: 1, errHi: 1 }, true);
+    expect(firstDifference(drawn(3, { value: 1, errHi: 1 }, true), both)).toBe(-1);
+    expect(firstDifference(drawn(3, { value: 1, errLo: 1 }, true), both)).toBe(-1);
+    expect(firstDifference(drawn(3, { value: 1, errLo: 1, errHi: 1.5 }, true), both)).not.toBe(-1);
+  });
+
+  it('draws asymmetric errors as a split normal, a fraction σlo/(σlo+σhi) below the value', () => {
+    for (const [lo, hi, p] of [[1, 3, 0.25], [3, 1, 0.75]] as const) {
+      const out = drawn(4, { value: 10, errLo: lo, errHi: hi }, true);
       let below = 0;
-      for (const x of draws) if (x < 0) below++;
-      expectClose(below / N, 0.75, { atol: 4 * Math.sqrt((0.25 * 0.75) / N), source: 'split normal, closed form' });
-      expectClose(mean(draws), -Math.sqrt(2 / Math.PI) * 2, { atol: meanTol(Math.sqrt(4.4535)), source: 'split normal mean, closed form' });
+      for (const x of out) if (x < 10) below++;
+      // split normal (John 1982): P(x < mode) = σlo/(σlo+σhi); binomial standard error sqrt(p(1−p)/N), 4 of them
+      expectClose(below / N, p, { atol: 4 * Math.sqrt((p * (1 - p)) / N), source: 'split normal, closed form' });
+      // mean = mode + √(2/π)(σhi − σlo) (closed form); sd² = (1 − 2/π)(σhi − σlo)² + σlo σhi = 4.4535
+      expectClose(mean(out), 10 + Math.sqrt(2 / Math.PI) * (hi - lo), { atol: meanTol(Math.sqrt(4.4535)), source: 'split normal mean, closed form' });
     }
-    const exact = new Float64Array(3);
-    drawMeasuredInto(rng, { value: 7 }, exact);
-    expect([...exact]).toEqual([7, 7, 7]);
+  });
+
+  it('draws a measurement scaled by d as the draws of the measurement divided by d: a deflated width is paired with the measured one', () => {
+    const d = 3.7;
+    const measured = drawn(8, { value: 1200, errLo: 500, errHi: 900 }, true);
+    const deflated = drawn(8, { value: 1200 / d, errLo: 500 / d, errHi: 900 / d }, true);
+    let worst = 0;
+    // Rounding only: both are value + σ·z in floating point, relative to the value's scale.
+    for (let k = 0; k < N; k++) worst = Math.max(worst, Math.abs((deflated[k] as number) * d - (measured[k] as number)) / 1200);
+    expect(worst).toBeLessThan(1e-14);
+  });
+
+  it('redraws a non-positive draw from the role\'s own redraw stream, the same for every reading', () => {
+    // S/N 0.5: about 16 % of the first draws are ≤ 0 and are redrawn.
+    const a = drawn(9, { value: 1, errLo: 2, errHi: 2 }, true);
+    const b = drawn(9, { value: 1, errLo: 2, errHi: 2 }, true);
+    expect(Math.min(...a)).toBeGreaterThan(0);
+    expect(firstDifference(a, b)).toBe(-1);
+    const z = bankOf(9).normals('x');
+    let redrawn = 0;
+    for (let k = 0; k < N; k++) if (1 + 2 * (z[k] as number) <= 0) redrawn++;
+    expect(redrawn).toBeGreaterThan(0.1 * N);
   });
 });
 

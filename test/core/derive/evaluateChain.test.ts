@@ -4,6 +4,9 @@ import { DEFAULT_SETTINGS } from '../../../src/core/derive/defaultSettings.ts';
 import type { DeriveSettings, ObjectInputs } from '../../../src/core/derive/types.ts';
 import { createRng } from '../../../src/core/random/createRng.ts';
 import { seedFor } from '../../../src/core/random/seedFor.ts';
+import { createDrawBank } from '../../../src/core/random/drawBank.ts';
+import { createBuffers, sampleInputs } from '../../../src/core/derive/evaluateChain.ts';
+import { planObject } from '../../../src/core/derive/objectPlan.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 
 // Tests of the chain's steps that a changed or dropped line would get wrong without any
@@ -104,5 +107,33 @@ describe('evaluateChain: A_V draws below zero', () => {
       atol: 4 * 0.0107 * dexPerMag,
       source: 'closed form: Calzetti 2000 k(Hα), normal 84th percentile, 4 standard errors',
     });
+  });
+});
+
+describe('sampleInputs: every measurement draws from its own role', () => {
+  it('draws the same widths, fluxes and host masses whether or not the object has a dust measurement', () => {
+    const base: ObjectInputs = {
+      id: 'ROLE-1',
+      z: 6,
+      lines: { halpha: { fluxCgs: { value: 2e-18, errLo: 3e-19, errHi: 3e-19 }, fwhmKms: { value: 2200, errLo: 300, errHi: 400 } } },
+      logMstar: { value: 9, errLo: 0.3, errHi: 0.3 },
+      mu: { value: 2, errLo: 0.2, errHi: 0.2 },
+    };
+    const s = settings({ draws: 500 });
+    const sample = (inputs: ObjectInputs) => {
+      const b = createBuffers(500);
+      sampleInputs(planObject(inputs, s), s, createDrawBank(rngFor(inputs.id), 500), b);
+      return b;
+    };
+    const without = sample(base);
+    const withDust = sample({ ...base, av: { value: 0.4, errLo: 0.2, errHi: 0.2 } });
+    expect([...withDust.logFwhm]).toEqual([...without.logFwhm]);
+    expect([...(withDust.logL[0] as Float64Array)]).toEqual([...(without.logL[0] as Float64Array)]);
+    expect([...withDust.x]).toEqual([...without.x]);
+    expect([...withDust.logMu]).toEqual([...without.logMu]);
+    expect([...withDust.scatter]).toEqual([...without.scatter]);
+    // … while the dust itself is drawn: E(B−V) varies from draw to draw.
+    expect(new Set(withDust.ebv).size).toBeGreaterThan(400);
+    expect(new Set(without.ebv)).toEqual(new Set([0]));
   });
 });

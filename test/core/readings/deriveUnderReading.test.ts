@@ -3,6 +3,7 @@ import { deriveObject } from '../../../src/core/derive/deriveObject.ts';
 import { DEFAULT_SETTINGS } from '../../../src/core/derive/defaultSettings.ts';
 import type { DeriveSettings } from '../../../src/core/derive/types.ts';
 import { createRng, seedFor } from '../../../src/core/random/index.ts';
+import { createDrawBank } from '../../../src/core/random/drawBank.ts';
 import {
   DENSE_GAS_READING,
   SCATTERING_CORE_READING,
@@ -47,8 +48,9 @@ describe('deriveUnderReading', () => {
     const r = under(halphaObject, custom({ width: 'deflated', deflation: d }));
     // rv15_halpha: FWHM exponent 2.06 (Reines & Volonteri 2015, ApJ 813, 82, eq. 5); the shift is exact arithmetic.
     expectClose(base.logMbh! - r.logMbh!, 2.06 * Math.log10(d), { atol: 1e-12, source: 'Reines & Volonteri 2015 eq. 5, FWHM exponent 2.06' });
-    // Same draws under both readings: every percentile moves by the same amount.
-    expectClose(base.pct.logMbh!.p50 - r.pct.logMbh!.p50, 2.06 * Math.log10(d), { atol: 1e-9, source: 'same stream, shifted draws' });
+    // Same deviates under both readings: every percentile moves by the same amount, to rounding.
+    for (const p of ['p16', 'p50', 'p84'] as const)
+      expectClose(base.pct.logMbh![p] - r.pct.logMbh![p], 2.06 * Math.log10(d), { atol: 1e-12, source: 'same deviates, deflated widths' });
     expect(r.flags).toContain('width_deflated');
     expect(r.logLbol).toBe(base.logLbol);
   });
@@ -114,6 +116,25 @@ describe('deriveUnderReading', () => {
     const r = under(halphaObject, custom({ efficiency: 0.2 }));
     expect(r.logMbh).toBe(base.logMbh);
     expect(r.lambdaReqLight!).toBeGreaterThan(base.lambdaReqLight!);
+  });
+
+  it('gives every reading the same deviates for the same measurement: switching dust off leaves the width draws, so only the dust moves the mass', () => {
+    // Hβ mass on λL5100 with A_V: without dust the mass moves by b·0.4·A_5100-equivalent per draw, the width draws unchanged.
+    const withAv: ReadingObjectInputs = { ...hbetaObject, av: { value: 0.5 } };
+    const dusty = under(withAv, STANDARD_READING);
+    const clean = under(withAv, custom({ dust: 'none' }));
+    const shift = dusty.logMbh! - clean.logMbh!;
+    expect(shift).toBeGreaterThan(0);
+    // An exact A_V shifts λL5100 by the same amount in every draw: the percentiles move with the nominal value.
+    for (const p of ['p16', 'p50', 'p84'] as const) expectClose(dusty.pct.logMbh![p] - clean.pct.logMbh![p], shift, { atol: 1e-12, source: 'same deviates, exact A_V' });
+  });
+
+  it('gives the same results from one bank of deviates shared by every reading as from a fresh stream per reading', () => {
+    const readings = [STANDARD_READING, SCATTERING_CORE_READING, DENSE_GAS_READING, SMALL_BOLOMETRIC_READING, custom({ width: 'deflated', deflation: 2, dust: 'none' })];
+    for (const object of [halphaObject, hbetaObject]) {
+      const bank = createDrawBank(rng(object.id), settings.draws);
+      for (const r of readings) expect(deriveUnderReading(object, settings, r, deriveObject, bank)).toEqual(under(object, r));
+    }
   });
 
   it('does not change the object it is given', () => {
