@@ -41,6 +41,13 @@ describe('drawPositive', () => {
     expect(drawPositive(createRng(1), { value: 3 })).toBe(3);
   });
 
+  it('draws only above the value when the lower error is zero (a one-sided error, not an exact value)', () => {
+    const rng = createRng(21);
+    const draws = Array.from({ length: 200 }, () => drawPositive(rng, { value: 1, errLo: 0, errHi: 1 }));
+    expect(Math.min(...draws)).toBeGreaterThanOrEqual(1);
+    expect(new Set(draws).size).toBe(200);
+  });
+
   it('draws N(1, 1) truncated at zero: every draw positive, mean 1.2876', () => {
     const rng = createRng(2);
     const one = Array.from({ length: N }, () => drawPositive(rng, { value: 1, errLo: 1, errHi: 1 }));
@@ -63,6 +70,22 @@ describe('drawFromBank', () => {
     drawFromBank(bank, 'width_halpha', { value: 2000, errLo: 150, errHi: 150 }, out, false);
     const z = bank.normals('width_halpha');
     for (let k = 0; k < N; k += 997) expect(out[k]).toBe(2000 + 150 * (z[k] as number));
+  });
+
+  it('keeps value + σ·z for every draw of a positive quantity far from zero (nothing redrawn)', () => {
+    const bank = bankOf(22);
+    const out = new Float64Array(N);
+    drawFromBank(bank, 'lum_halpha', { value: 100, errLo: 5, errHi: 5 }, out, true);
+    const z = bank.normals('lum_halpha');
+    let differ = 0;
+    for (let k = 0; k < N; k++) if (out[k] !== 100 + 5 * (z[k] as number)) differ++;
+    expect(differ).toBe(0);
+  });
+
+  it('draws a one-sided error (lower error zero) only above the value', () => {
+    const out = drawn(23, { value: 10, errLo: 0, errHi: 2 }, true);
+    expect(Math.min(...out)).toBeGreaterThanOrEqual(10);
+    expect(new Set(out).size).toBeGreaterThan(N / 2);
   });
 
   it('draws a positive quantity as N(1, 1) truncated at zero: every draw positive, mean 1.2876', () => {

@@ -51,6 +51,8 @@ describe('the draw bank', () => {
     const b = bank(14);
     expectClose(correlation(b.normals('lum_halpha'), b.normals('width_halpha')), 0, { atol: 4 / Math.sqrt(N), source: 'independent samples: r has SE 1/√N' });
     expect(same(b.normals('lum_halpha'), b.normals('lum_hbeta'))).toBe(false);
+    // … and independent sides for their split normals.
+    expectClose(correlation(b.uniforms('lum_halpha'), b.uniforms('width_halpha')), 0, { atol: 4 / Math.sqrt(N), source: 'independent samples: r has SE 1/√N' });
   });
 
   it('follows the object\'s stream: the same stream gives the same deviates, another stream others', () => {
