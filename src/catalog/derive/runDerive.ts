@@ -132,7 +132,8 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
   const settings = opts.config.settings;
   const paths = outputPaths(opts.outputPath);
   for (const note of await recoverLeftovers(paths)) opts.onNotice?.(note);
-  await checkOutputTargets(opts.catalogPath, paths, opts.force ?? false);
+  const exportTargets = (opts.config.outputFormats ?? []).map((format) => ({ format, path: exportPath(paths.catalog, format) }));
+  await checkOutputTargets(opts.catalogPath, paths, opts.force ?? false, exportTargets);
   const identity = await inputIdentity(opts.catalogPath);
   let staged: OutputSet | null = null;
   let source: TableSource | null = null;
@@ -287,11 +288,11 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
     await writer.finish({ [METADATA_KEY]: catalogMetadataJson(metadata), ...parquetStandardKeys(doc) });
     writer = null;
     // ECSV, VOTable and FITS copies, staged with the rest so that all files are replaced together.
-    const exports = (opts.config.outputFormats ?? []).map((format) => ({ format, path: set.stagedExtra(exportPath(paths.catalog, format)) }));
+    const exports = exportTargets.map((t) => ({ format: t.format, path: set.stagedExtra(t.path) }));
     await exportCatalog(set.staged('catalog'), doc, exports);
     await writeFile(set.staged('meta'), `${JSON.stringify(metadata, null, 2)}\n`);
     // Files may have appeared at the output paths during the run: the same rules apply to them.
-    await checkOutputTargets(opts.catalogPath, paths, opts.force ?? false);
+    await checkOutputTargets(opts.catalogPath, paths, opts.force ?? false, exportTargets);
     await set.commit();
     staged = null;
     return {
