@@ -32,8 +32,10 @@ export interface TargetRule {
   force: boolean;
   /** The message for a folder at the target (default: choose another output with -o). */
   folderMessage?: string;
-  /** What to change to avoid the target, at the end of messages (default "choose another output with -o"). */
+  /** What to do about a file that may be replaced with --force (default "choose another output with -o"). */
   remedy?: string;
+  /** What to do about a target never written, even with --force: the input, a system or special file (default: choose with -o). */
+  elsewhere?: string;
 }
 
 /**
@@ -51,18 +53,18 @@ export async function checkTarget(target: string, input: RunInput | null, rule: 
   const remedy = rule.remedy ?? 'choose another output with -o';
   const real = await realTarget(file);
   const system = SYSTEM_FOLDERS.find((d) => real === d || real.startsWith(`${d}/`));
-  if (system) throw new OutputRefused(`${what} is in the system folder ${system}; choose a file in your own folders with -o`);
+  if (system) throw new OutputRefused(`${what} is in the system folder ${system}; ${rule.elsewhere ?? 'choose a file in your own folders with -o'}`);
   const link = await lstat(file).catch(() => null);
   const info = link?.isSymbolicLink() ? await stat(file).catch(() => null) : link;
   const sameAsInput = input !== null && (real === input.real || (input.stat !== null && info !== null && info.dev === input.stat.dev && info.ino === input.stat.ino));
-  if (sameAsInput) throw new OutputRefused(`${what} is the catalog itself; choose another with -o`);
+  if (sameAsInput) throw new OutputRefused(`${what} is the catalog itself; ${rule.elsewhere ?? 'choose another with -o'}`);
   if (link === null) return;
   if (info === null) {
     if (!rule.force) throw new OutputRefused(`${what} is a link to a missing file; remove it, ${remedy}, or add --force to replace the link`);
     return;
   }
   if (info.isDirectory()) throw new OutputRefused(rule.folderMessage ?? `${what} is a folder; ${remedy}`);
-  if (!info.isFile()) throw new OutputRefused(`${what} is ${specialKind(info)}, not a regular file; choose a file with -o`);
+  if (!info.isFile()) throw new OutputRefused(`${what} is ${specialKind(info)}, not a regular file; ${rule.elsewhere ?? 'choose a file with -o'}`);
   if (!rule.force && !(await rule.isOurs(file))) {
     throw new OutputRefused(`${what} exists and was not written by dawn-census; ${remedy}, or add --force to replace it`);
   }
