@@ -8,6 +8,7 @@ import { METADATA_KEY } from '../metadata/catalogMetadata.ts';
 import { parquetStandardKeys } from '../publish/parquetStandardKeys.ts';
 import { tableDocOf } from '../publish/tableDoc.ts';
 import { exportCatalog, exportPath } from '../publish/exportCatalog.ts';
+import { DEFAULT_GZIP_LIMITS } from '../readers/gzipLimits.ts';
 import { sha256File } from '../metadata/sha256.ts';
 import { settingsProvenance } from '../metadata/settingsProvenance.ts';
 import { normalizeChunk } from '../normalize/normalizeChunk.ts';
@@ -143,7 +144,11 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
   let deriver: BatchDeriver | null = null;
   try {
     const comment = opts.config.input?.comment;
-    const src = await openTable(opts.catalogPath, { ...(opts.format ? { format: opts.format } : {}), ...(comment ? { commentPrefix: comment } : {}) });
+    const gzipLimits = {
+      maxRatio: opts.config.input?.gzipMaxRatio ?? DEFAULT_GZIP_LIMITS.maxRatio,
+      maxBytes: (opts.config.input?.gzipMaxGb ?? DEFAULT_GZIP_LIMITS.maxBytes / 1e9) * 1e9,
+    };
+    const src = await openTable(opts.catalogPath, { ...(opts.format ? { format: opts.format } : {}), ...(comment ? { commentPrefix: comment } : {}), gzipLimits });
     source = src;
     const plan = planColumns(src, opts.config);
     const provenance = settingsProvenance(settings);
