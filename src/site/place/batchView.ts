@@ -107,6 +107,18 @@ export function batchTable(doc: Document, entries: readonly BatchEntry[]): HTMLE
   return section;
 }
 
+/**
+ * The cells of one placed object under one reading: object, reading, log M_BH, log L_bol, log λ_Edd,
+ * P(λ > 1), offset from the local relation and flags; bounds (from the row's flags) written with '<' or '>'.
+ */
+export function readingCells(id: string, reading: Pick<Reading, 'label'>, row: RederivedRow): string[] {
+  const v = (column: 'log_mbh' | 'log_lbol' | 'log_edd_ratio' | 'delta_log_mbh_local'): string => {
+    const mark = row[column] === null ? '' : limitMark(column, row as unknown as Record<string, unknown>);
+    return `${mark ? `${mark} ` : ''}${f2(row[column])}`;
+  };
+  return [id, reading.label, v('log_mbh'), v('log_lbol'), v('log_edd_ratio'), f2(row.p_super_eddington), v('delta_log_mbh_local'), row.flags.split(',').filter(Boolean).join(', ')];
+}
+
 /** Each placed object under every reading: one row per object and reading, grouped by object. */
 export function batchReadingsTable(doc: Document, rows: readonly { id: string; reading: Reading; row: RederivedRow }[]): HTMLElement {
   const section = doc.createElement('section');
@@ -119,7 +131,7 @@ export function batchReadingsTable(doc: Document, rows: readonly { id: string; r
     const tr = body.insertRow();
     tr.dataset.object = id;
     tr.dataset.readingValue = reading.id;
-    cells(tr, [id, reading.label, f2(row.log_mbh), f2(row.log_lbol), f2(row.log_edd_ratio), f2(row.p_super_eddington), f2(row.delta_log_mbh_local), row.flags.split(',').filter(Boolean).join(', ')], numeric, 0);
+    cells(tr, readingCells(id, reading, row), numeric, 0);
   }
   section.append(h, wrap(doc, t));
   return section;
