@@ -6,11 +6,13 @@ export interface PopulationArgs {
   catalog?: string;
   quiet: boolean;
   help: boolean;
+  /** `--force`: replace output files `dawn-census population` did not write. */
+  force: boolean;
 }
 
-/** Parses the arguments after `population`: `-c <config>`, `--catalog <parquet>`, `--quiet`, `--help`. */
+/** Parses the arguments after `population`: `-c <config>`, `--catalog <parquet>`, `--force`, `--quiet`, `--help`. */
 export function parsePopulationArgs(argv: readonly string[]): PopulationArgs {
-  const out: PopulationArgs = { quiet: false, help: false };
+  const out: PopulationArgs = { quiet: false, help: false, force: false };
   for (let i = 0; i < argv.length; i++) {
     const a = argv[i] as string;
     const [flag, inline] = a.startsWith('--') && a.includes('=') ? [a.slice(0, a.indexOf('=')), a.slice(a.indexOf('=') + 1)] : [a, undefined];
@@ -23,12 +25,13 @@ export function parsePopulationArgs(argv: readonly string[]): PopulationArgs {
     else if (flag === '--catalog') out.catalog = value();
     else if (flag === '-q' || flag === '--quiet') out.quiet = true;
     else if (flag === '-h' || flag === '--help') out.help = true;
+    else if (flag === '--force') out.force = true;
     else throw new UsageError(`unknown option "${a}" for population (see dawn-census population --help)`);
   }
   return out;
 }
 
-export const POPULATION_HELP = `dawn-census population -c census.config.yaml [--catalog out/catalog.parquet] [--quiet]
+export const POPULATION_HELP = `dawn-census population -c census.config.yaml [--catalog out/catalog.parquet] [--force] [--quiet]
 
 Space densities and the selection-aware black-hole–host relation of a derived catalog, under the
 config's survey: block (fields, areas, limiting fluxes, spectrograph range, width and S/N cuts).
@@ -37,5 +40,7 @@ The catalog is the config's output (or --catalog). Writes beside it, as one set:
   <name>.population.parquet   per object: field, detection line, vmax_cmpc3, below_survey_limit
   <name>.densities.parquet    binned mass and luminosity functions with Poisson and Monte Carlo intervals
   <name>.posterior.parquet    posterior samples of the selection-aware and the naive fits
+An existing file there is replaced only when dawn-census population wrote it (else add --force);
+the catalog itself, folders and special files are never replaced.
 `;
 

@@ -45,7 +45,7 @@ export async function populationCommand(args: PopulationArgs, err: TextOut): Pro
   const bar = progress(err, args.quiet);
   let s: PopulationSummary;
   try {
-    s = await runPopulation(config, catalog, displayPath(path.resolve(args.config)), bar.step);
+    s = await runPopulation(config, catalog, displayPath(path.resolve(args.config)), bar.step, args.force);
   } finally {
     bar.end();
   }

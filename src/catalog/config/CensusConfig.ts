@@ -24,7 +24,15 @@ export interface CensusConfig {
    * a one-character comment prefix valid on every line (without it only `#` lines above the
    * header are comments).
    */
-  input?: { path: string; format?: TableFormat; comment?: string };
+  input?: {
+    path: string;
+    format?: TableFormat;
+    comment?: string;
+    /** Most decompressed bytes per compressed byte of a gzip catalog (default 250; see gzipLimits.ts). */
+    gzipMaxRatio?: number;
+    /** Most decompressed gigabytes (1e9 bytes) of a gzip catalog (default 64). */
+    gzipMaxGb?: number;
+  };
   /** Canonical column name → where and in which unit it is in the file. */
   columns: Record<string, ColumnMapping>;
   /** Every choice of the derivation. */

@@ -15,6 +15,7 @@ import {
 } from './knownIds.ts';
 import { EXPORT_FORMATS } from './publicationConfig.ts';
 import { READINGS_KEYS } from './readingsConfig.ts';
+import { DEFAULT_GZIP_LIMITS } from '../readers/gzipLimits.ts';
 import { CONFIG_KEYS, NUMBER_RULES } from './validateConfig.ts';
 import { DENSITY_KEYS, FIELD_KEYS, FIT_KEYS, SURVEY_KEYS } from './validateSurvey.ts';
 
@@ -187,6 +188,8 @@ export function buildConfigSchema(): JsonSchema {
             path: str('Catalog file, relative to the config file', { minLength: 1 }),
             format: oneOfIds(INPUT_FORMATS, 'Format, when the extension does not say'),
             comment: str('One character starting a comment line (CSV/TSV), e.g. "%"', { minLength: 1, maxLength: 1, pattern: '^[^\\s",]$' }),
+            gzip_max_ratio: rule(NUMBER_RULES.gzipRatio, 'Most times a gzip catalog may expand its compressed size, read so far', DEFAULT_GZIP_LIMITS.maxRatio),
+            gzip_max_gb: rule(NUMBER_RULES.positive, 'Most gigabytes (1e9 bytes) a gzip catalog may expand to', DEFAULT_GZIP_LIMITS.maxBytes / 1e9),
           },
           required: ['path'],
           additionalProperties: false,

@@ -62,6 +62,7 @@ export const NUMBER_RULES = {
   efficiency: { ok: (x: number) => Number.isFinite(x) && x > 0 && x < 1, what: 'a number between 0 and 1', schema: { type: 'number', exclusiveMinimum: 0, exclusiveMaximum: 1 } },
   dutyCycle: { ok: (x: number) => Number.isFinite(x) && x > 0 && x <= 1, what: 'a number between 0 and 1', schema: { type: 'number', exclusiveMinimum: 0, maximum: 1 } },
   zSeed: { ok: (x: number) => Number.isFinite(x) && x > 0, what: 'a number greater than 0', schema: { type: 'number', exclusiveMinimum: 0 } },
+  gzipRatio: { ok: (x: number) => Number.isFinite(x) && x >= 2, what: 'a number of at least 2', schema: { type: 'number', minimum: 2 } },
 } as const;
 
 /**
@@ -111,7 +112,7 @@ export function validateConfig(doc: unknown, label: string, baseDir: string): Ce
     if (typeof input === 'string') input = { path: input };
     if (!isObj(input)) fail(`input must be a mapping with path and format, got ${describeValue(input)}`);
     const i = input as Obj;
-    checkKeys(i, ['path', 'format', 'comment'], 'input.');
+    checkKeys(i, ['path', 'format', 'comment', 'gzip_max_ratio', 'gzip_max_gb'], 'input.');
     const p = str('input.path', i.path, 'the catalog file name (relative to the config file)');
     if (p.trim() === '') fail('input.path is empty');
     cfg.input = { path: path(p) };
@@ -123,6 +124,8 @@ export function validateConfig(doc: unknown, label: string, baseDir: string): Ce
       if ([...c].length !== 1 || c.length !== 1 || /[\s",]/.test(c)) fail(`input.comment must be one character other than a blank, quote or comma, got ${JSON.stringify(c)}`);
       cfg.input.comment = c;
     }
+    if (i.gzip_max_ratio !== undefined && i.gzip_max_ratio !== null) cfg.input.gzipMaxRatio = num('input.gzip_max_ratio', i.gzip_max_ratio, NUMBER_RULES.gzipRatio);
+    if (i.gzip_max_gb !== undefined && i.gzip_max_gb !== null) cfg.input.gzipMaxGb = num('input.gzip_max_gb', i.gzip_max_gb, NUMBER_RULES.positive);
   }
 
   if (has('columns')) {

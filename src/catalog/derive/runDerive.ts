@@ -8,6 +8,7 @@ import { METADATA_KEY } from '../metadata/catalogMetadata.ts';
 import { parquetStandardKeys } from '../publish/parquetStandardKeys.ts';
 import { tableDocOf } from '../publish/tableDoc.ts';
 import { exportCatalog, exportPath } from '../publish/exportCatalog.ts';
+import { DEFAULT_GZIP_LIMITS } from '../readers/gzipLimits.ts';
 import { sha256File } from '../metadata/sha256.ts';
 import { settingsProvenance } from '../metadata/settingsProvenance.ts';
 import { normalizeChunk } from '../normalize/normalizeChunk.ts';
@@ -132,7 +133,8 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
   const settings = opts.config.settings;
   const paths = outputPaths(opts.outputPath);
   for (const note of await recoverLeftovers(paths)) opts.onNotice?.(note);
-  await checkOutputTargets(opts.catalogPath, paths, opts.force ?? false);
+  const exportTargets = (opts.config.outputFormats ?? []).map((format) => ({ format, path: exportPath(paths.catalog, format) }));
+  await checkOutputTargets(opts.catalogPath, paths, opts.force ?? false, exportTargets);
   const identity = await inputIdentity(opts.catalogPath);
   let staged: OutputSet | null = null;
   let source: TableSource | null = null;
@@ -142,7 +144,11 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
   let deriver: BatchDeriver | null = null;
   try {
     const comment = opts.config.input?.comment;
-    const src = await openTable(opts.catalogPath, { ...(opts.format ? { format: opts.format } : {}), ...(comment ? { commentPrefix: comment } : {}) });
+    const gzipLimits = {
+      maxRatio: opts.config.input?.gzipMaxRatio ?? DEFAULT_GZIP_LIMITS.maxRatio,
+      maxBytes: (opts.config.input?.gzipMaxGb ?? DEFAULT_GZIP_LIMITS.maxBytes / 1e9) * 1e9,
+    };
+    const src = await openTable(opts.catalogPath, { ...(opts.format ? { format: opts.format } : {}), ...(comment ? { commentPrefix: comment } : {}), gzipLimits });
     source = src;
     const plan = planColumns(src, opts.config);
     const provenance = settingsProvenance(settings);
@@ -287,11 +293,11 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
     await writer.finish({ [METADATA_KEY]: catalogMetadataJson(metadata), ...parquetStandardKeys(doc) });
     writer = null;
     // ECSV, VOTable and FITS copies, staged with the rest so that all files are replaced together.
-    const exports = (opts.config.outputFormats ?? []).map((format) => ({ format, path: set.stagedExtra(exportPath(paths.catalog, format)) }));
+    const exports = exportTargets.map((t) => ({ format: t.format, path: set.stagedExtra(t.path) }));
     await exportCatalog(set.staged('catalog'), doc, exports);
     await writeFile(set.staged('meta'), `${JSON.stringify(metadata, null, 2)}\n`);
     // Files may have appeared at the output paths during the run: the same rules apply to them.
-    await checkOutputTargets(opts.catalogPath, paths, opts.force ?? false);
+    await checkOutputTargets(opts.catalogPath, paths, opts.force ?? false, exportTargets);
     await set.commit();
     staged = null;
     return {

@@ -5,7 +5,9 @@ import { RELATION_PIVOT } from '../../core/population/relationLikelihood.ts';
 import type { LineId } from '../../core/derive/types.ts';
 import type { CensusConfig } from '../config/CensusConfig.ts';
 import { ConfigError } from '../config/ConfigError.ts';
+import { checkPopulationTargets } from './checkPopulationTargets.ts';
 import { objectVolumes } from './objectVolumes.ts';
+import { POPULATION_SUMMARY_FORMAT } from './populationSignature.ts';
 import { populationPaths, type PopulationPaths } from './populationPaths.ts';
 import { readPopulationRows } from './readPopulationRows.ts';
 import { relationFitRun } from './relationFitRun.ts';
@@ -28,9 +30,11 @@ export interface PopulationSummary {
  * @param catalogPath - the derived catalog (Parquet written by `derive`).
  * @param label - the config as named in messages.
  * @param onStep - progress of the relation fit (sampler steps done, total).
+ * @param force - replace output files `dawn-census population` did not write (never the catalog or a special file).
+ * Throws OutputRefused, before reading the catalog, when an output may not be written (see checkPopulationTargets).
  */
 export async function runPopulation(
-  config: CensusConfig, catalogPath: string, label: string, onStep?: (done: number, total: number) => void,
+  config: CensusConfig, catalogPath: string, label: string, onStep?: (done: number, total: number) => void, force = false,
 ): Promise<PopulationSummary> {
   const survey = config.survey;
   if (!survey) throw new ConfigError(`${label}: no survey block: describe the survey's fields, limits and spectrograph range under survey: (see README)`);
@@ -39,6 +43,7 @@ export async function runPopulation(
     const [a, b] = survey.spec.lamObsRangeAngstrom;
     throw new ConfigError(`${label}: survey.wavelength_range_angstrom [${a}, ${b}] excludes every line the fields search (${[...searched].join(', ')}) at every redshift`);
   }
+  await checkPopulationTargets(catalogPath, populationPaths(catalogPath), force);
   const cosmo = getCosmology(config.settings.cosmology);
   const rows = await readPopulationRows(catalogPath, survey.fieldColumn, survey.limitColumns, survey.fluxScale);
   const volumes = objectVolumes(rows, survey, cosmo, catalogPath);
@@ -50,6 +55,7 @@ export async function runPopulation(
   const { samples: _drop, ...fitOut } = fit ?? { samples: null };
   void _drop;
   const summary = {
+    format: POPULATION_SUMMARY_FORMAT,
     catalog: catalogPath,
     cosmology: config.settings.cosmology,
     seed: config.settings.seed,
@@ -73,6 +79,6 @@ export async function runPopulation(
       selection: 'selection inside the likelihood, as in Li et al. 2024 (arXiv:2403.00074); our own implementation',
     },
   };
-  await writePopulationOutputs(paths, volumes, survey.spec.fields.map((f) => f.name), densities, fit, summary);
+  await writePopulationOutputs(paths, volumes, survey.spec.fields.map((f) => f.name), densities, fit, summary, { catalogPath, force });
   return { paths, objects: rows.length, withVmax, belowLimit, sentence: fit?.sentence ?? null };
 }

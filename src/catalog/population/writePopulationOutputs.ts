@@ -1,5 +1,7 @@
 import { writeFile } from 'node:fs/promises';
 import { openParquetWriter, type CellValue, type ParquetColumn } from '../parquet/parquetWriter.ts';
+import { checkPopulationTargets } from './checkPopulationTargets.ts';
+import { POPULATION_METADATA_KEY } from './populationSignature.ts';
 import { StagedFiles } from './stagedFiles.ts';
 import type { ObjectVolume } from './objectVolumes.ts';
 import type { PopulationPaths } from './populationPaths.ts';
@@ -19,15 +21,18 @@ async function writeTable(staged: StagedFiles, finalPath: string, columns: Parqu
 
 /**
  * Writes the population results as one set: every file under a temporary name, renamed into place only when all
- * were written, so a failure leaves any earlier results untouched.
+ * were written, so a failure leaves any earlier results untouched. Just before the renames the targets are checked
+ * again (checkPopulationTargets: files may have appeared there while the fit ran): a refused target leaves every
+ * file as it was.
+ * @param guard - the catalog read (never replaced) and whether files this tool did not write may be replaced.
  */
 export async function writePopulationOutputs(
   paths: PopulationPaths, volumes: readonly ObjectVolume[], fieldNames: readonly string[], densities: readonly DensityFunction[],
-  fit: RelationFitSummary | null, summary: object,
+  fit: RelationFitSummary | null, summary: object, guard: { catalogPath: string; force: boolean },
 ): Promise<void> {
   const staged = new StagedFiles();
   try {
-    const kv = { dawn_census_population: JSON.stringify({ summary: paths.summary }) };
+    const kv = { [POPULATION_METADATA_KEY]: JSON.stringify({ summary: paths.summary }) };
     await writeTable(staged, paths.objects, [
       { name: 'id', kind: 'string' }, { name: 'survey_field', kind: 'string' }, { name: 'detection_line', kind: 'string' },
       { name: 'vmax_cmpc3', kind: 'float' }, { name: 'v_over_vmax', kind: 'float' }, { name: 'below_survey_limit', kind: 'bool' },
@@ -48,6 +53,7 @@ export async function writePopulationOutputs(
       { name: 'fit', kind: 'string' }, { name: 'alpha', kind: 'float' }, { name: 'beta', kind: 'float' }, { name: 'sigma', kind: 'float' },
     ], post, kv);
     await writeFile(staged.stage(paths.summary), `${JSON.stringify(summary, null, 2)}\n`);
+    await checkPopulationTargets(guard.catalogPath, paths, guard.force);
     await staged.commit();
   } catch (e) {
     await staged.discard();

@@ -2,9 +2,13 @@ import { createReadStream } from 'node:fs';
 import { open } from 'node:fs/promises';
 import { createGunzip } from 'node:zlib';
 import { CatalogError } from './CatalogError.ts';
+import { DEFAULT_GZIP_LIMITS, GZIP_RATIO_FLOOR_BYTES, type GzipLimits } from './gzipLimits.ts';
 
 /** Bytes read from disk per step (1 MiB keeps memory flat and syscalls few). */
 export const READ_BYTES = 1 << 20;
+
+/** Compressed bytes read per step from a gzip file. */
+const GZIP_READ_BYTES = 64 << 10;
 
 /** True when the file begins with the gzip magic bytes 1f 8b. */
 export async function isGzipFile(path: string): Promise<boolean> {
@@ -21,18 +25,39 @@ export async function isGzipFile(path: string): Promise<boolean> {
 /**
  * Streams the bytes of a file, decompressed when it is gzip (detected from its magic bytes,
  * whatever its name). A corrupt or truncated gzip stream is a {@link CatalogError}
- * `<file>: corrupt gzip data (...)`. Memory is bounded by one read buffer.
+ * `<file>: corrupt gzip data (...)`. Memory is bounded by one read buffer. Decompressed bytes
+ * are bounded by `limits` (see gzipLimits.ts): more than `maxBytes` in all, or more than
+ * `maxRatio` per compressed byte read once 16 MiB have come out, is a CatalogError naming the
+ * config key that raises the bound.
  *
  * @param path - file to read
  * @param label - file name used in error messages
+ * @param limits - bounds on the decompressed bytes of a gzip file
  */
-export async function* readBytes(path: string, label: string): AsyncGenerator<Buffer> {
+export async function* readBytes(path: string, label: string, limits: Readonly<GzipLimits> = DEFAULT_GZIP_LIMITS): AsyncGenerator<Buffer> {
   const gz = await isGzipFile(path);
-  const file = createReadStream(path, { highWaterMark: READ_BYTES });
+  // Compressed input is read in small steps, so the ratio check sees a bomb after a few megabytes out.
+  const file = createReadStream(path, { highWaterMark: gz ? GZIP_READ_BYTES : READ_BYTES });
   const stream = gz ? file.pipe(createGunzip({ chunkSize: 256 * 1024 })) : file;
-  if (gz) file.on('error', (e) => stream.destroy(e));
+  let compressed = 0;
+  let expanded = 0;
+  if (gz) {
+    file.on('error', (e) => stream.destroy(e));
+    file.on('data', (b) => { compressed += b.length; });
+  }
   try {
-    for await (const b of stream as AsyncIterable<Buffer>) yield b;
+    for await (const b of stream as AsyncIterable<Buffer>) {
+      if (gz) {
+        expanded += b.length;
+        if (expanded > limits.maxBytes) {
+          throw new CatalogError(`${label}: gzip data expands to more than ${formatBytes(limits.maxBytes)}; stopped (raise input.gzip_max_gb in the config if the catalog really is that large)`);
+        }
+        if (expanded > GZIP_RATIO_FLOOR_BYTES && expanded > limits.maxRatio * compressed) {
+          throw new CatalogError(`${label}: gzip data expands more than ${limits.maxRatio} times (${formatBytes(expanded)} from ${formatBytes(compressed)} so far), as a decompression bomb does; stopped (raise input.gzip_max_ratio in the config if the catalog is right)`);
+        }
+      }
+      yield b;
+    }
   } catch (e) {
     const err = e as NodeJS.ErrnoException;
     if (gz && typeof err.code === 'string' && err.code.startsWith('Z_')) {
@@ -88,4 +113,13 @@ export class ForwardReader {
   async close(): Promise<void> {
     await this.it.return?.();
   }
+}
+
+/** Bytes in decimal units, e.g. "64 GB", "1.2 MB". */
+function formatBytes(n: number): string {
+  const units = ['bytes', 'kB', 'MB', 'GB', 'TB'];
+  let u = 0;
+  let v = n;
+  while (v >= 1000 && u < units.length - 1) { v /= 1000; u++; }
+  return `${u === 0 ? v : Number(v.toPrecision(3))} ${units[u]}`;
 }

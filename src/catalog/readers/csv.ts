@@ -1,3 +1,4 @@
+import { DEFAULT_GZIP_LIMITS, type GzipLimits } from './gzipLimits.ts';
 import type { Cell, ColumnInfo, ColumnKind, TableChunk, TableSource } from './types.ts';
 import { CatalogError } from './CatalogError.ts';
 import { ChunkBuilder, checkChunkRows } from './ChunkBuilder.ts';
@@ -21,8 +22,9 @@ import { readTextChunks } from './textChunks.ts';
  * @param path - file to read
  * @param format - `'csv'` or `'tsv'` (picks the delimiter)
  * @param commentPrefix - optional one-character comment prefix valid on every line
+ * @param limits - bounds on the decompressed bytes of a gzip file (see readBytes)
  */
-export async function openCsv(path: string, format: 'csv' | 'tsv', commentPrefix?: string): Promise<TableSource> {
+export async function openCsv(path: string, format: 'csv' | 'tsv', commentPrefix?: string, limits: Readonly<GzipLimits> = DEFAULT_GZIP_LIMITS): Promise<TableSource> {
   const delimiter = format === 'tsv' ? '\t' : ',';
   const tokOpts = { delimiter, label: path, ...(commentPrefix !== undefined ? { commentPrefix } : {}) };
   let names: string[] | null = null as string[] | null;
@@ -50,12 +52,12 @@ export async function openCsv(path: string, format: 'csv' | 'tsv', commentPrefix
       if (names === null && comments.length < MAX_META_COMMENTS) comments.push(text.trim());
     },
   );
-  for await (const text of readTextChunks(path, path)) tok.push(text);
+  for await (const text of readTextChunks(path, path, limits)) tok.push(text);
   tok.end();
   const header: string[] | null = names;
   if (header === null) throw new CatalogError(`${path}: empty file: no header line`);
   const columns: ColumnInfo[] = header.map((name, i) => ({ name, kind: inference[i]!.kind }));
-  return delimitedSource(path, format, columns, nRows, comments.length ? { comments } : {}, tokOpts, 1);
+  return delimitedSource(path, format, columns, nRows, comments.length ? { comments } : {}, tokOpts, 1, limits);
 }
 
 /**
@@ -71,6 +73,7 @@ export function delimitedSource(
   meta: Record<string, unknown>,
   tokOpts: { delimiter: string; label: string; commentPrefix?: string },
   skipRecords: number,
+  limits: Readonly<GzipLimits> = DEFAULT_GZIP_LIMITS,
 ): TableSource {
   const converters = columns.map((c) => converterFor(c.kind));
   let closed = false;
@@ -90,7 +93,7 @@ export function delimitedSource(
         for (let i = 0; i < converters.length; i++) cols[i]!.push(converters[i]!(fields[i] ?? ''));
         builder.rowDone();
       });
-      for await (const text of readTextChunks(path, path)) {
+      for await (const text of readTextChunks(path, path, limits)) {
         tok.push(text);
         yield* builder.takeReady();
       }

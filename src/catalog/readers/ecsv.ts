@@ -1,3 +1,4 @@
+import { DEFAULT_GZIP_LIMITS, type GzipLimits } from './gzipLimits.ts';
 import type { ColumnInfo, TableSource } from './types.ts';
 import { CatalogError } from './CatalogError.ts';
 import { DelimitedTokenizer } from './DelimitedTokenizer.ts';
@@ -19,8 +20,8 @@ import { readTextChunks } from './textChunks.ts';
  *
  * @param path - file to read
  */
-export async function openEcsv(path: string): Promise<TableSource> {
-  const header = parseEcsvHeader(await readHeaderLines(path), path);
+export async function openEcsv(path: string, limits: Readonly<GzipLimits> = DEFAULT_GZIP_LIMITS): Promise<TableSource> {
+  const header = parseEcsvHeader(await readHeaderLines(path, limits), path);
   const names = settleColumnNames(header.columns.map((c) => c.name), `${path}: ECSV header`);
   const checks = header.columns.map(valueCheck);
   const unsafeInt = header.columns.map(() => false);
@@ -50,7 +51,7 @@ export async function openEcsv(path: string): Promise<TableSource> {
     }
     nRows++;
   });
-  for await (const text of readTextChunks(path, path)) tok.push(text);
+  for await (const text of readTextChunks(path, path, limits)) tok.push(text);
   tok.end();
   if (!sawHeaderLine) throw new CatalogError(`${path}: ECSV file has no data header line after the YAML header`);
   const columns: ColumnInfo[] = header.columns.map((c, i) => {
@@ -60,14 +61,14 @@ export async function openEcsv(path: string): Promise<TableSource> {
     if (c.ucd !== undefined) info.ucd = c.ucd;
     return info;
   });
-  return delimitedSource(path, 'ecsv', columns, nRows, header.meta, { delimiter: header.delimiter, label: path }, 1);
+  return delimitedSource(path, 'ecsv', columns, nRows, header.meta, { delimiter: header.delimiter, label: path }, 1, limits);
 }
 
 /** Reads the leading `#` lines (the ECSV header block) without reading the rest of the file. */
-async function readHeaderLines(path: string): Promise<string[]> {
+async function readHeaderLines(path: string, limits: Readonly<GzipLimits>): Promise<string[]> {
   const lines: string[] = [];
   let rest = '';
-  for await (const text of readTextChunks(path, path)) {
+  for await (const text of readTextChunks(path, path, limits)) {
     rest += text;
     let nl: number;
     while ((nl = rest.indexOf('\n')) !== -1) {

@@ -1,3 +1,4 @@
+import { DEFAULT_GZIP_LIMITS, type GzipLimits } from './gzipLimits.ts';
 import { open } from 'node:fs/promises';
 import type { TableChunk, TableSource } from './types.ts';
 import { CatalogError } from './CatalogError.ts';
@@ -32,11 +33,11 @@ const STRUCTURAL = /^(SIMPLE|BITPIX|NAXIS\d*|EXTEND|XTENSION|PCOUNT|GCOUNT|TFIEL
  *
  * @param path - file to read
  */
-export async function openFits(path: string): Promise<TableSource> {
-  const gzip = await isGzipFile(path);
+export async function openFits(path: string, limits: Readonly<GzipLimits> = DEFAULT_GZIP_LIMITS): Promise<TableSource> {
+  const gzip = await isGzipFile(path) ? limits : null;
   const fh = await openBytes(path, gzip);
   try {
-    const size = gzip ? await decompressedSize(path) : fh.size;
+    const size = gzip ? await decompressedSize(path, gzip) : fh.size;
     const { header, primary, dataStart, hdu } = await findBintable(fh, size, path);
     const where = `${path}: HDU ${hdu + 1}`;
     dataByteLength(header, where); // checks BITPIX, NAXISn, PCOUNT, GCOUNT
@@ -59,9 +60,9 @@ export async function openFits(path: string): Promise<TableSource> {
 }
 
 /** A positional byte reader over the file: a file handle, or a forward-only reader over the decompressed bytes. */
-async function openBytes(path: string, gzip: boolean): Promise<ByteSource & { size: number; close(): Promise<void> }> {
+async function openBytes(path: string, gzip: Readonly<GzipLimits> | null): Promise<ByteSource & { size: number; close(): Promise<void> }> {
   if (gzip) {
-    const r = new ForwardReader(readBytes(path, path));
+    const r = new ForwardReader(readBytes(path, path, gzip));
     return { size: 0, read: (b, o, l, p) => r.read(b, o, l, p), close: () => r.close() };
   }
   const fh = await open(path, 'r');
@@ -69,9 +70,9 @@ async function openBytes(path: string, gzip: boolean): Promise<ByteSource & { si
   return { size, read: (b, o, l, p) => fh.read(b, o, l, p), close: () => fh.close() };
 }
 
-async function decompressedSize(path: string): Promise<number> {
+async function decompressedSize(path: string, limits: Readonly<GzipLimits>): Promise<number> {
   let n = 0;
-  for await (const b of readBytes(path, path)) n += b.length;
+  for await (const b of readBytes(path, path, limits)) n += b.length;
   return n;
 }
 
@@ -109,7 +110,7 @@ async function markUnsafeInt64(fh: ByteSource, cols: FitsColumn[], dataStart: nu
   }
 }
 
-function fitsSource(path: string, gzip: boolean, cols: FitsColumn[], nRows: number, rowBytes: number, dataStart: number, meta: Record<string, unknown>): TableSource {
+function fitsSource(path: string, gzip: Readonly<GzipLimits> | null, cols: FitsColumn[], nRows: number, rowBytes: number, dataStart: number, meta: Record<string, unknown>): TableSource {
   const decoders = cols.map(columnDecoder);
   let closed = false;
   return {

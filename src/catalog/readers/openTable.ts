@@ -2,6 +2,7 @@ import { stat } from 'node:fs/promises';
 import type { TableFormat, TableSource } from './types.ts';
 import { CatalogError } from './CatalogError.ts';
 import { readBytes } from './byteStream.ts';
+import { DEFAULT_GZIP_LIMITS, type GzipLimits } from './gzipLimits.ts';
 import { openCsv } from './csv.ts';
 import { openEcsv } from './ecsv.ts';
 import { openFits } from './fits.ts';
@@ -33,23 +34,25 @@ const SNIFF_BYTES = 64 * 1024;
  * @param opts.format - force a format regardless of the extension
  * @param opts.commentPrefix - CSV/TSV only: one character that starts a comment line anywhere
  *   (without it, only `#` lines above the header are comments)
+ * @param opts.gzipLimits - bounds on a gzip file's decompressed bytes (default DEFAULT_GZIP_LIMITS; see readBytes)
  */
-export async function openTable(path: string, opts: { format?: TableFormat; commentPrefix?: string } = {}): Promise<TableSource> {
+export async function openTable(path: string, opts: { format?: TableFormat; commentPrefix?: string; gzipLimits?: Readonly<GzipLimits> } = {}): Promise<TableSource> {
+  const limits = opts.gzipLimits ?? DEFAULT_GZIP_LIMITS;
   let format = opts.format ?? formatFromPath(path);
   if (format === undefined) {
     throw new CatalogError(`unknown catalog format for "${path}": expected .csv, .tsv, .ecsv, .fits, .vot or .parquet (or set input.format in the config)`);
   }
   await checkReadableFile(path);
-  if (format === 'csv' && opts.format === undefined && (await head(path)).replace(/^\uFEFF/, '').startsWith('# %ECSV')) format = 'ecsv';
+  if (format === 'csv' && opts.format === undefined && (await head(path, limits)).replace(/^\uFEFF/, '').startsWith('# %ECSV')) format = 'ecsv';
   switch (format) {
-    case 'csv': return openCsv(path, 'csv', opts.commentPrefix);
-    case 'tsv': return openCsv(path, 'tsv', opts.commentPrefix);
-    case 'ecsv': return openEcsv(path);
-    case 'fits': return openFits(path);
+    case 'csv': return openCsv(path, 'csv', opts.commentPrefix, limits);
+    case 'tsv': return openCsv(path, 'tsv', opts.commentPrefix, limits);
+    case 'ecsv': return openEcsv(path, limits);
+    case 'fits': return openFits(path, limits);
     case 'parquet': return openParquet(path);
     case 'votable':
-      if (!looksLikeVotable(await head(path))) throw new CatalogError(`${path}: not a VOTable: no <VOTABLE> element at the start of the file`);
-      return openVotable(path);
+      if (!looksLikeVotable(await head(path, limits))) throw new CatalogError(`${path}: not a VOTable: no <VOTABLE> element at the start of the file`);
+      return openVotable(path, limits);
     default:
       throw new CatalogError(`unknown catalog format "${String(format)}" for "${path}"`);
   }
@@ -73,10 +76,10 @@ async function checkReadableFile(path: string): Promise<void> {
 }
 
 /** The first SNIFF_BYTES bytes of the file (decompressed when it is gzip) as text. */
-async function head(path: string): Promise<string> {
+async function head(path: string, limits: Readonly<GzipLimits>): Promise<string> {
   const parts: Buffer[] = [];
   let n = 0;
-  for await (const b of readBytes(path, path)) {
+  for await (const b of readBytes(path, path, limits)) {
     parts.push(b);
     n += b.length;
     if (n >= SNIFF_BYTES) break;

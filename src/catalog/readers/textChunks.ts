@@ -1,5 +1,6 @@
 import { CatalogError } from './CatalogError.ts';
 import { readBytes, READ_BYTES } from './byteStream.ts';
+import { DEFAULT_GZIP_LIMITS, type GzipLimits } from './gzipLimits.ts';
 
 /** Bytes read from disk per step for the text formats (1 MiB keeps memory flat and syscalls few). */
 export const TEXT_READ_BYTES = READ_BYTES;
@@ -16,12 +17,13 @@ const decoder = new TextDecoder('utf-8', { fatal: true, ignoreBOM: true });
  *
  * @param path - file to read
  * @param label - file name used in error messages
+ * @param limits - bounds on the decompressed bytes of a gzip file (see readBytes)
  */
-export async function* readTextChunks(path: string, label: string): AsyncGenerator<string> {
+export async function* readTextChunks(path: string, label: string, limits: Readonly<GzipLimits> = DEFAULT_GZIP_LIMITS): AsyncGenerator<string> {
   let carry: Buffer | null = null;
   let linesBefore = 0;
   let first = true;
-  for await (const raw of readBytes(path, label)) {
+  for await (const raw of readBytes(path, label, limits)) {
     let buf: Buffer = carry ? Buffer.concat([carry, raw]) : raw;
     if (first) {
       first = false;

@@ -1,3 +1,4 @@
+import { DEFAULT_GZIP_LIMITS, type GzipLimits } from './gzipLimits.ts';
 import type { ColumnInfo, ColumnKind, TableChunk, TableSource } from './types.ts';
 import { CatalogError } from './CatalogError.ts';
 import { ChunkBuilder, checkChunkRows } from './ChunkBuilder.ts';
@@ -25,9 +26,9 @@ import type { Cell } from './types.ts';
  *
  * @param path - file to read
  */
-export async function openVotable(path: string): Promise<TableSource> {
+export async function openVotable(path: string, limits: Readonly<GzipLimits> = DEFAULT_GZIP_LIMITS): Promise<TableSource> {
   const scan = new VotHandler(path, null);
-  await parseFile(path, scan);
+  await parseFile(path, scan, limits);
   if (scan.fields === null) {
     throw new CatalogError(scan.tables === 0 ? `${path}: VOTable has no TABLE element` : `${path}: the first VOTable TABLE has no FIELD elements`);
   }
@@ -47,7 +48,7 @@ export async function openVotable(path: string): Promise<TableSource> {
       const rows = new VotHandler(path, { parsers, builder, kinds: columns.map((c) => c.kind) });
       const tok = new XmlTokenizer(path, rows);
       rows.tok = tok;
-      for await (const text of readTextChunks(path, path)) {
+      for await (const text of readTextChunks(path, path, limits)) {
         tok.push(text);
         yield* builder.takeReady();
         if (rows.targetDone) break;
@@ -58,10 +59,10 @@ export async function openVotable(path: string): Promise<TableSource> {
   };
 }
 
-async function parseFile(path: string, handler: VotHandler): Promise<void> {
+async function parseFile(path: string, handler: VotHandler, limits: Readonly<GzipLimits>): Promise<void> {
   const tok = new XmlTokenizer(path, handler);
   handler.tok = tok;
-  for await (const text of readTextChunks(path, path)) tok.push(text);
+  for await (const text of readTextChunks(path, path, limits)) tok.push(text);
   tok.end();
 }
 

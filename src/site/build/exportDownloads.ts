@@ -6,6 +6,7 @@ import type { ExportFormat } from '../../catalog/config/publicationConfig.ts';
 import type { CatalogMetadata } from '../../catalog/metadata/catalogMetadata.ts';
 import { exportCatalog } from '../../catalog/publish/exportCatalog.ts';
 import { tableDocOf } from '../../catalog/publish/tableDoc.ts';
+import { boundsNoteLines } from '../text/boundsNote.ts';
 import type { CatalogFiles } from './catalogFiles.ts';
 
 /** The sidecar as written by derive. */
@@ -25,9 +26,11 @@ export async function catalogIn(files: CatalogFiles, format: ExportFormat): Prom
   }
 }
 
-/** `# name [unit]: description` lines (and the UCD) put before a CSV header, so the units travel with the file. */
+/** `# name [unit]: description` lines (and the UCD) put before a CSV header, so the units travel with the file; with the note on bounds (boundsNoteLines). */
 export function csvUnitsComment(m: CatalogMetadata): string {
-  const lines = [`# ${m.title ?? 'Derived catalog'} — written by ${m.tool.name} ${m.tool.version}; input SHA-256 ${m.input.sha256}`, '# column [unit] (UCD): description'];
+  const lines = [`# ${m.title ?? 'Derived catalog'} — written by ${m.tool.name} ${m.tool.version}; input SHA-256 ${m.input.sha256}`];
+  for (const l of boundsNoteLines(m.columns.map((c) => c.name))) lines.push(`# ${l}`);
+  lines.push('# column [unit] (UCD): description');
   for (const c of m.columns) lines.push(`# ${c.name}${c.unit ? ` [${c.unit}]` : ''}${c.ucd ? ` (${c.ucd})` : ''}: ${c.description.replace(/\s+/g, ' ')}`);
   return lines.join('\n') + '\n';
 }

@@ -8,6 +8,7 @@ import type { RederivedRow } from '../readings/rederiveBatch.ts';
 import { formatFixed, formatValue, MISSING } from '../text/formatValue.ts';
 import type { CatalogRow } from '../charts/types.ts';
 import { num } from '../charts/rowValues.ts';
+import { limitMark } from '../text/limitMark.ts';
 import type { PlaceReport } from './placeReport.ts';
 import { ordinalPercentile } from './ranks.ts';
 
@@ -51,6 +52,31 @@ const wrap = (doc: Document, el: HTMLElement): HTMLElement => {
   return d;
 };
 
+/**
+ * The cells of one placed object in the table of pasted objects: row, id, z, log M_BH, log L_bol,
+ * log λ_Edd, offset from the local relation (each bound written with '<' or '>', as on the object
+ * pages; a lower-limit λ_Edd is '>'), and the rank of M_BH in the catalog.
+ */
+export function placedCells(e: { row: number; id: string; placed: CatalogRow; report: PlaceReport }): string[] {
+  const r = e.placed;
+  const lim = (column: string): string => {
+    const mark = limitMark(column, r);
+    return mark ? `${mark} ` : '';
+  };
+  const mbhRank = e.report.ranks.find((q) => q.column === 'log_mbh');
+  const rank = mbhRank && mbhRank.all.percentile !== null ? `${mbhRank.isLimit ? 'at most the ' : ''}${ordinalPercentile(mbhRank.all.percentile)} percentile of ${mbhRank.all.n}` : MISSING;
+  return [
+    String(e.row),
+    e.id,
+    formatValue('z', r.z),
+    `${lim('log_mbh')}${f2(num(r.log_mbh))}`,
+    `${lim('log_lbol')}${f2(num(r.log_lbol))}`,
+    `${lim('log_edd_ratio')}${f2(num(r.log_edd_ratio))}`,
+    `${lim('delta_log_mbh_local')}${f2(num(r.delta_log_mbh_local))}`,
+    rank,
+  ];
+}
+
 /** The table of pasted objects with the catalog's settings: row, id, z, M_BH, L_bol, λ_Edd, offset, rank of M_BH, or why the row was not placed. */
 export function batchTable(doc: Document, entries: readonly BatchEntry[]): HTMLElement {
   const section = doc.createElement('section');
@@ -75,23 +101,22 @@ export function batchTable(doc: Document, entries: readonly BatchEntry[]): HTMLE
       continue;
     }
     tr.dataset.placed = 'true';
-    const r = e.placed;
-    const lim = (flag: unknown) => (flag === true ? '< ' : '');
-    const mbhRank = e.report.ranks.find((q) => q.column === 'log_mbh');
-    const rank = mbhRank && mbhRank.all.percentile !== null ? `${mbhRank.isLimit ? 'at most the ' : ''}${ordinalPercentile(mbhRank.all.percentile)} percentile of ${mbhRank.all.n}` : MISSING;
-    cells(tr, [
-      String(e.row),
-      e.id,
-      formatValue('z', r.z),
-      `${lim(r.log_mbh_is_limit)}${f2(num(r.log_mbh))}`,
-      `${lim(r.log_lbol_is_limit)}${f2(num(r.log_lbol))}`,
-      `${lim(r.log_edd_ratio_is_limit)}${f2(num(r.log_edd_ratio))}`,
-      `${lim(r.delta_log_mbh_local_is_limit)}${f2(num(r.delta_log_mbh_local))}`,
-      rank,
-    ], numeric, 1);
+    cells(tr, placedCells(e), numeric, 1);
   }
   section.append(h, wrap(doc, t));
   return section;
+}
+
+/**
+ * The cells of one placed object under one reading: object, reading, log M_BH, log L_bol, log λ_Edd,
+ * P(λ > 1), offset from the local relation and flags; bounds (from the row's flags) written with '<' or '>'.
+ */
+export function readingCells(id: string, reading: Pick<Reading, 'label'>, row: RederivedRow): string[] {
+  const v = (column: 'log_mbh' | 'log_lbol' | 'log_edd_ratio' | 'delta_log_mbh_local'): string => {
+    const mark = row[column] === null ? '' : limitMark(column, row as unknown as Record<string, unknown>);
+    return `${mark ? `${mark} ` : ''}${f2(row[column])}`;
+  };
+  return [id, reading.label, v('log_mbh'), v('log_lbol'), v('log_edd_ratio'), f2(row.p_super_eddington), v('delta_log_mbh_local'), row.flags.split(',').filter(Boolean).join(', ')];
 }
 
 /** Each placed object under every reading: one row per object and reading, grouped by object. */
@@ -106,7 +131,7 @@ export function batchReadingsTable(doc: Document, rows: readonly { id: string; r
     const tr = body.insertRow();
     tr.dataset.object = id;
     tr.dataset.readingValue = reading.id;
-    cells(tr, [id, reading.label, f2(row.log_mbh), f2(row.log_lbol), f2(row.log_edd_ratio), f2(row.p_super_eddington), f2(row.delta_log_mbh_local), row.flags.split(',').filter(Boolean).join(', ')], numeric, 0);
+    cells(tr, readingCells(id, reading, row), numeric, 0);
   }
   section.append(h, wrap(doc, t));
   return section;

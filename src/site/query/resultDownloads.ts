@@ -8,6 +8,7 @@ import { astropyHeaderLines } from '../../catalog/publish/astropyHeader.ts';
 import type { TableDoc } from '../../catalog/publish/tableDoc.ts';
 import { votableParts, xmlText } from '../../catalog/publish/votableXml.ts';
 import type { ResultSet } from '../db/resultSet.ts';
+import { boundsNoteLines } from '../text/boundsNote.ts';
 
 /** What the page knows about the catalog (see src/site/build/queryContext.ts). */
 export interface ResultContext {
@@ -29,6 +30,7 @@ export function resultDoc(rs: ResultSet, sql: string, ctx: ResultContext): Table
     description: `Result of a query on ${ctx.title}`,
     meta: [
       ['query', sql],
+      ...boundsNoteLines(rs.names).map((l, i): [string, string] => [i === 0 ? 'bounds' : `bounds_warning_${i}`, l]),
       ['catalog_sha256', ctx.catalogSha256],
       ['input_sha256', ctx.inputSha256],
       ['tool', ctx.tool],
@@ -48,10 +50,15 @@ const csvField = (v: unknown): string => {
 const rowIndex = (order: ArrayLike<number> | undefined, k: number): number => (order ? order[k]! : k);
 const oneLine = (s: string): string => s.replace(/\s+/g, ' ').trim();
 
-/** CSV after '#' lines: the query, the catalog's SHA-256, the tool, and `name [unit]: description` for each column. */
+/**
+ * CSV after '#' lines: the query, the catalog's SHA-256, the tool, the note on bounds (and a
+ * warning for each column that can hold bounds whose `_is_limit` column the query left out), and
+ * `name [unit]: description` for each column.
+ */
 export function resultCsvWithHeader(rs: ResultSet, sql: string, ctx: ResultContext, order?: ArrayLike<number>): string {
   const doc = resultDoc(rs, sql, ctx);
   const lines = [`# ${oneLine(ctx.title)}: query result`, `# query: ${oneLine(sql)}`, `# catalog SHA-256: ${ctx.catalogSha256}`, `# written by: ${ctx.tool}`];
+  for (const l of boundsNoteLines(rs.names)) lines.push(`# ${l}`);
   for (const c of doc.columns) lines.push(`# ${c.name}${c.unit ? ` [${c.unit}]` : ''}: ${oneLine(c.description)}`);
   lines.push(rs.names.map(csvField).join(','));
   for (let k = 0; k < rs.numRows; k++) lines.push(rs.columns.map((col) => csvField(col[rowIndex(order, k)])).join(','));

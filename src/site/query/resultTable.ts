@@ -7,6 +7,7 @@
 import type { ResultSet } from '../db/resultSet.ts';
 import { objectHrefHere } from '../objectLink.ts';
 import { formatValue, isNumericType } from '../text/formatValue.ts';
+import { LIMIT_COLUMN, limitMark } from '../text/limitMark.ts';
 import { sortOrder, type SortDirection } from './sortOrder.ts';
 
 export interface ResultTableOptions {
@@ -119,6 +120,13 @@ export class ResultTable {
     const tbody = document.createElement('tbody');
     const numeric = rs.types.map(isNumericType);
     const idCol = rs.names.findIndex((n) => n.toLowerCase() === 'id');
+    // a bound is written with '<' or '>' when the result holds its _is_limit column or the flags
+    const limitSources = rs.names.map((name) => {
+      const marker = LIMIT_COLUMN[name] ?? (name === 'log_edd_ratio' ? 'log_edd_ratio_is_limit' : undefined);
+      const m = marker ? rs.names.indexOf(marker) : -1;
+      const f = rs.names.indexOf('flags');
+      return marker && (m >= 0 || f >= 0) ? { marker, m, f } : null;
+    });
     const from = this.page * this.pageSize;
     const to = Math.min(rs.numRows, from + this.pageSize);
     for (let k = from; k < to; k++) {
@@ -135,7 +143,11 @@ export class ResultTable {
           td.className = 'id-cell';
           td.append(a);
         } else {
-          td.textContent = formatValue(rs.names[c]!, v);
+          const src = limitSources[c];
+          const mark = src && v !== null && v !== undefined
+            ? limitMark(rs.names[c]!, { ...(src.m >= 0 ? { [src.marker]: rs.columns[src.m]![r] } : {}), ...(src.f >= 0 ? { flags: rs.columns[src.f]![r] } : {}) })
+            : '';
+          td.textContent = `${mark ? `${mark} ` : ''}${formatValue(rs.names[c]!, v)}`;
           if (v === null || v === undefined) td.classList.add('null');
         }
         tr.append(td);

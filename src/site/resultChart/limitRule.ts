@@ -1,10 +1,12 @@
 /**
  * Which rows of a plotted column are limits, and which way, from the catalog's own markers:
- * the `flags` column (mbh_upper_limit, lbol_upper_limit, edd_ratio_upper_limit,
- * edd_ratio_lower_limit) for the derived quantities, and the `flux_<line>_is_limit` columns
- * for a line's flux and the luminosity made from it.
+ * the `<quantity>_is_limit` columns and the `flags` column (mbh_upper_limit, lbol_upper_limit,
+ * edd_ratio_upper_limit, edd_ratio_lower_limit) for the derived quantities (the mass, L_bol,
+ * λ_Edd and what rests on the mass: seed mass, required ratios, offset from the local relation),
+ * and the `flux_<line>_is_limit` columns for a line's flux and the luminosity made from it.
  */
 import { splitFlags } from '../text/flagText.ts';
+import { LIMIT_COLUMN } from '../text/limitMark.ts';
 import { percentileStem } from './intervalColumns.ts';
 
 export type LimitKind = 'upper' | 'lower';
@@ -18,10 +20,21 @@ export interface LimitRule {
   isLimitColumn?: string;
 }
 
+/** A derived column's rule: its upper-limit flags, lower-limit flags and `_is_limit` column (LIMIT_COLUMN). */
+const derived = (column: string, upperFlags: readonly string[], lowerFlags: readonly string[] = []): LimitRule => ({
+  upperFlags,
+  lowerFlags,
+  ...(LIMIT_COLUMN[column] ? { isLimitColumn: LIMIT_COLUMN[column] } : {}),
+});
+
 const FLAG_RULES: [RegExp, LimitRule][] = [
-  [/^log_mbh$/, { upperFlags: ['mbh_upper_limit'], lowerFlags: [] }],
-  [/^log_lbol$/, { upperFlags: ['lbol_upper_limit'], lowerFlags: [] }],
-  [/^log_edd_ratio$/, { upperFlags: ['edd_ratio_upper_limit'], lowerFlags: ['edd_ratio_lower_limit'] }],
+  [/^log_mbh$/, derived('log_mbh', ['mbh_upper_limit'])],
+  [/^log_lbol$/, derived('log_lbol', ['lbol_upper_limit'])],
+  [/^log_edd_ratio$/, derived('log_edd_ratio', ['edd_ratio_upper_limit'], ['edd_ratio_lower_limit'])],
+  // quantities built on the mass are bounds where the mass is one
+  ...(['log_mseed', 'lambda_req_light', 'lambda_req_heavy', 'delta_log_mbh_local', 'local_offset_sigma'] as const).map(
+    (c): [RegExp, LimitRule] => [new RegExp(`^${c}$`), derived(c, ['mbh_upper_limit'])],
+  ),
 ];
 
 /** The limit rule of `column`, or null for a column whose values are never limits. */
@@ -33,13 +46,20 @@ export function limitRule(column: string): LimitRule | null {
   return null;
 }
 
-/** The limit kind of one row's value under `rule`, or null for a measurement. */
+/**
+ * The limit kind of one row's value under `rule`, or null for a measurement. The `_is_limit`
+ * column, when the row has it, says whether the value is a bound (its direction from the lower
+ * limit flags, else upper); without it (older catalogs), the flags alone.
+ */
 export function limitOf(rule: LimitRule | null, row: { flags?: unknown; [c: string]: unknown }): LimitKind | null {
   if (!rule) return null;
-  if (rule.isLimitColumn && row[rule.isLimitColumn] === true) return 'upper';
   const flags = splitFlags(row.flags);
+  const lower = rule.lowerFlags.some((f) => flags.includes(f));
+  const marked = rule.isLimitColumn ? row[rule.isLimitColumn] : undefined;
+  if (marked === true) return lower ? 'lower' : 'upper';
+  if (marked === false && !lower && !rule.lowerFlags.length) return null;
   if (rule.upperFlags.some((f) => flags.includes(f))) return 'upper';
-  if (rule.lowerFlags.some((f) => flags.includes(f))) return 'lower';
+  if (lower) return 'lower';
   return null;
 }
 

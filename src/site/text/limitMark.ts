@@ -36,7 +36,8 @@ export function limitMark(column: string, row: Readonly<Record<string, unknown>>
   if (column === 'log_edd_ratio') {
     if (flags.includes('edd_ratio_lower_limit')) return '>';
     if (flags.includes('edd_ratio_upper_limit')) return '<';
-    return '';
+    // a bound without its direction flag is an upper limit, as every other bound
+    return row.log_edd_ratio_is_limit === true ? '<' : '';
   }
   const col = LIMIT_COLUMN[column];
   if (!col) return '';

@@ -127,6 +127,50 @@ describe('outputs never overwrite the input or a file dawn-census did not write'
     expect(statSync('pipe.parquet').isFIFO()).toBe(true);
   });
 
+  it('refuses an ECSV, VOTable or FITS copy path holding a file dawn-census did not write, and replaces it with --force', async () => {
+    await writeFile('cat.csv', CSV);
+    for (const [format, name] of [['ecsv', 'cat.census.ecsv'], ['votable', 'cat.census.vot'], ['fits', 'cat.census.fits']] as const) {
+      await writeFile(name, 'my own table\n');
+      const before = await snapshot();
+      const r = await run(['cat.csv', '--threads', '1', '--format', format]);
+      const what = { ecsv: 'ECSV copy', votable: 'VOTable copy', fits: 'FITS copy' }[format];
+      expect(r).toEqual({ status: 64, out: '', err: `dawn-census: the ${what} ${name} (beside the output) exists and was not written by dawn-census; choose another output with -o, or add --force to replace it\n` });
+      expect(await snapshot()).toEqual(before);
+      await rm(name);
+    }
+    await writeFile('cat.census.ecsv', 'my own table\n');
+    const forced = await run(['cat.csv', '--threads', '1', '--format', 'ecsv', '--force', '--quiet']);
+    expect(forced.status, forced.err).toBe(0);
+    expect(readFileSync('cat.census.ecsv', 'utf8').startsWith('# %ECSV 1.0')).toBe(true);
+  });
+
+  it('replaces its own earlier ECSV, VOTable and FITS copies without --force', async () => {
+    await writeFile('cat.csv', CSV);
+    const args = ['cat.csv', '--threads', '1', '--quiet', '--format', 'ecsv', '--format', 'votable', '--format', 'fits'];
+    expect((await run(args)).status).toBe(0);
+    await writeFile('cat.csv', CSV.replace('C,7,1500\n', 'C,7,1500\nD,8,900\n'));
+    const again = await run(args);
+    expect(again.status, again.err).toBe(0);
+    expect(readFileSync('cat.census.ecsv', 'utf8')).toContain('\nD,');
+    expect((await readdir('.')).sort()).toEqual([...OUTS, 'cat.census.ecsv', 'cat.census.fits', 'cat.census.vot', 'cat.csv'].sort());
+  });
+
+  it('refuses an extra copy that is the catalog itself or a FIFO, even with --force', async () => {
+    await writeFile('cat.csv', CSV);
+    expect((await run(['cat.csv', '--threads', '1', '--quiet', '--format', 'ecsv', '-o', 'first.parquet'])).status).toBe(0);
+    const before = await snapshot();
+    // the ECSV copy of out.parquet would be out.ecsv: here a hard link to the catalog being read
+    await link('first.ecsv', 'out.ecsv');
+    const same = await run(['first.ecsv', '-o', 'out.parquet', '--format', 'ecsv', '--force']);
+    expect(same).toEqual({ status: 64, out: '', err: 'dawn-census: the ECSV copy out.ecsv (beside the output) is the catalog itself; choose another with -o\n' });
+    await rm('out.ecsv');
+    expect(await snapshot()).toEqual(before);
+    execFileSync('mkfifo', ['out.vot']);
+    const fifo = await run(['cat.csv', '-o', 'out.parquet', '--format', 'votable', '--force']);
+    expect(fifo).toEqual({ status: 64, out: '', err: 'dawn-census: the VOTable copy out.vot (beside the output) is a FIFO (named pipe), not a regular file; choose a file with -o\n' });
+    expect(statSync('out.vot').isFIFO()).toBe(true);
+  });
+
   it("refuses a config's output outside the config's folder unless --force", async () => {
     await mkdir('cfg');
     await writeFile('cfg/cat.csv', CSV);

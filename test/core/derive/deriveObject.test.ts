@@ -120,6 +120,17 @@ describe('deriveObject corrections', () => {
     expect(d.flags).toContain('edd_ratio_unconstrained');
     expect(d.flags).not.toContain('edd_ratio_upper_limit');
     expect(d.flags).toEqual(expect.arrayContaining(['mbh_upper_limit', 'lbol_upper_limit']));
+    // The bounds themselves: the mass at the Hβ limit flux, L_bol at the Hα limit flux, no ratio.
+    const dl = getCosmology('planck18').luminosityDistanceMpc(6) * 3.0856775814913673e24; // cm per Mpc (IAU 2015 parsec)
+    const logLhb = Math.log10(2e-18 * 4 * Math.PI * dl * dl);
+    const logLha = Math.log10(6e-18 * 4 * Math.PI * dl * dl);
+    // Vestergaard & Peterson 2006, ApJ 641, 689, Hβ line-luminosity calibration (coefficients from memory, as in src/core/virial): 6.67 + 0.63 (log L_Hβ − 42) + 2 log(FWHM/1000)
+    expectClose(d.logMbh!, 6.67 + 0.63 * (logLhb - 42) + 2 * Math.log10(2.5), { atol: 1e-9, source: 'Vestergaard & Peterson 2006 L(Hβ) calibration (from memory), closed form' });
+    // Greene & Ho 2005, ApJ 630, 122, eq. 1 inverted × BC5100 = 9.26 (Shen et al. 2011)
+    expectClose(d.logLbol!, 44 + (logLha - Math.log10(5.25e42)) / 1.157 + Math.log10(9.26), { atol: 1e-9, source: 'Greene & Ho 2005 eq. 1 inverted × 9.26, closed form' });
+    expect(d.logEddRatio).toBeNull();
+    expect(d.pct.logMbh).toBeNull();
+    expect(d.pct.logLbol).toBeNull();
   });
 
   it('flags a mass taken from a later line when an earlier one has a width but no luminosity', () => {

@@ -118,6 +118,35 @@ describe('limits are bounds', () => {
     expect(d.deltaLogMbhLocal).not.toBeNull();
   });
 
+  it('writes every bound at the value a measurement at the limit flux would give (internal check against the same object measured)', () => {
+    const bound = deriveObject(limitOnly, settings(), rngFor('u'));
+    const measuredHa = { ...limitOnly.lines!.halpha!, fluxIsLimit: false };
+    const measured = deriveObject({ ...limitOnly, lines: { halpha: measuredHa } }, settings(), rngFor('u'));
+    for (const k of ['logMbh', 'logLbol', 'logEddRatio', 'logMseed', 'lambdaReqLight', 'lambdaReqHeavy', 'deltaLogMbhLocal'] as const) {
+      expect(bound[k], k).not.toBeNull();
+      expectClose(bound[k]!, measured[k]!, { atol: 1e-12, source: `internal: ${k} of the bound equals the measured value at the limit` });
+    }
+    // Reines & Volonteri 2015, ApJ 813, 82, eq. 4 (AGN): log M = 7.45 + 1.05 (log M* − 11), at log M* = 9
+    expectClose(bound.deltaLogMbhLocal!, bound.logMbh! - (7.45 + 1.05 * (9 - 11)), { atol: 1e-12, source: 'Reines & Volonteri 2015 eq. 4 (coefficients from memory, as in src/core/local), closed form' });
+    expect(bound.isLimit.logMseed && bound.isLimit.lambdaReq && bound.isLimit.deltaLogMbhLocal).toBe(true);
+  });
+
+  it('writes a lower-limit Eddington ratio from the measured L_bol over the upper-limit mass, with no interval and no probability', () => {
+    const inputs: ObjectInputs = { id: 'low', z: 6, lines: { halpha: { fwhmKms: { value: 2000 }, fluxCgs: { value: 5e-18 }, fluxIsLimit: true } }, lamL5100: { value: 1e44 }, av: { value: 0 } };
+    const d = deriveObject(inputs, settings(), rngFor('low'));
+    expect(d.flags).toEqual(expect.arrayContaining(['edd_ratio_lower_limit', 'mbh_upper_limit']));
+    const dl = getCosmology('planck18').luminosityDistanceMpc(6) * MPC_CM;
+    const logL = Math.log10(5e-18 * 4 * Math.PI * dl * dl);
+    // Reines & Volonteri 2015 eq. 5 (ε = 1.075) at the limit flux; L_bol = 9.26 × 1e44 (BC5100, Shen et al. 2011, ApJS 194, 45)
+    expectClose(d.logMbh!, Math.log10(1.075) + 6.57 + 0.47 * (logL - 42) + 2.06 * Math.log10(2), { atol: 1e-9, source: 'Reines & Volonteri 2015 eq. 5, closed form' });
+    expectClose(d.logLbol!, 44 + Math.log10(9.26), { atol: 1e-12, source: 'BC5100 = 9.26 (Shen et al. 2011), closed form' });
+    expectClose(d.logEddRatio!, d.logLbol! - Math.log10(1.26e38) - d.logMbh!, { atol: 1e-12, source: 'closed form, L_Edd = 1.26e38 M/M_sun erg/s' });
+    expect(d.isLimit).toMatchObject({ logMbh: true, logLbol: false, logEddRatio: true });
+    expect(d.pct.logEddRatio).toBeNull();
+    expect(d.pSuperEddington).toBeNull();
+    expect(d.pct.logLbol).not.toBeNull();
+  });
+
   it('leaves the Eddington ratio and its probability empty when mass and L_bol rest on two different limits', () => {
     const inputs: ObjectInputs = {
       id: 'two',

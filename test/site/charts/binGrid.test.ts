@@ -42,4 +42,9 @@ describe('stackedBins', () => {
       [0.5, 1, 0],
     ]);
   });
+
+  it('counts lower limits apart from upper limits and detections', () => {
+    const bins = stackedBins([{ v: 0.1, limit: false }, { v: 0.1, limit: 'upper' }, { v: 0.2, limit: 'lower' }, { v: 0.2, limit: 'lower' }], 0.25);
+    expect(bins.map((b) => [b.x1, b.detections, b.limits, b.lowerLimits])).toEqual([[0, 1, 1, 2]]);
+  });
 });

@@ -5,6 +5,7 @@ import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import type { ResultSet } from '../../../src/site/db/resultSet.ts';
 import { resultCsvWithHeader, resultEcsv, resultVotable, type ResultContext } from '../../../src/site/query/resultDownloads.ts';
+import { BOUNDS_NOTE } from '../../../src/site/text/boundsNote.ts';
 
 const ctx: ResultContext = {
   title: 'Invented catalog',
@@ -31,16 +32,40 @@ function astropy(text: string, ext: string, fmt: string): any {
 describe('query result downloads', () => {
   it('records the query, the catalog hash and each unit in the CSV comment header', () => {
     const csv = resultCsvWithHeader(rs, SQL, ctx);
-    expect(csv.split('\r\n').slice(0, 7)).toEqual([
+    expect(csv.split('\r\n').slice(0, 9)).toEqual([
       '# Invented catalog: query result',
       '# query: SELECT id, log_mbh, 1 AS n FROM census',
       `# catalog SHA-256: ${'ab'.repeat(32)}`,
       '# written by: dawn-census 0.1.0',
+      `# ${BOUNDS_NOTE}`,
+      '# WARNING: log_mbh can hold bounds, but this result lacks log_mbh_is_limit: add it to the SELECT to tell bounds from measurements.',
       '# id: Object identifier',
       '# log_mbh [dex(solMass)]: log10 of the mass',
       '# n: Computed by the query (no unit recorded)',
     ]);
-    expect(csv.split('\r\n').slice(7)).toEqual(['id,log_mbh,n', '"A,1",7.5,1', 'B,,2', '']);
+    expect(csv.split('\r\n').slice(9)).toEqual(['id,log_mbh,n', '"A,1",7.5,1', 'B,,2', '']);
+  });
+
+  it('keeps a bound visible in the CSV: the number in its column, the _is_limit column beside it, and the note on bounds in the header', () => {
+    const withMarker: ResultSet = { names: ['id', 'log_mbh', 'log_mbh_is_limit', 'log_edd_ratio', 'log_edd_ratio_is_limit'], types: ['Utf8', 'Float64', 'Bool', 'Float64', 'Bool'], columns: [['A', 'B'], [7.3, 8.1], [true, false], [-0.2, -1.1], [true, false]], numRows: 2 };
+    const lines = resultCsvWithHeader(withMarker, 'SELECT id, log_mbh, log_mbh_is_limit, log_edd_ratio, log_edd_ratio_is_limit FROM census', ctx).split('\r\n');
+    expect(lines).toContain(`# ${BOUNDS_NOTE}`);
+    // the direction of a λ_Edd bound lives in the flags, which this result lacks
+    expect(lines.filter((l) => l.startsWith('# WARNING'))).toEqual(['# WARNING: log_edd_ratio can hold bounds, but this result lacks flags: add it to the SELECT to tell bounds from measurements.']);
+    expect(lines.slice(-3)).toEqual(['A,7.3,true,-0.2,true', 'B,8.1,false,-1.1,false', '']);
+    expect(resultEcsv(withMarker, 'SELECT 1', ctx)).toContain('bounds: ');
+  });
+
+  it('warns, in the CSV header, for each column that can hold bounds when the query left out its _is_limit column', () => {
+    const bare: ResultSet = { names: ['id', 'log_edd_ratio', 'log_lum_halpha', 'log_mseed_p16'], types: ['Utf8', 'Float64', 'Float64', 'Float64'], columns: [['A'], [-0.2], [42.1], [5.5]], numRows: 1 };
+    const warnings = resultCsvWithHeader(bare, 'SELECT 1', ctx).split('\r\n').filter((l) => l.startsWith('# WARNING'));
+    expect(warnings).toEqual([
+      '# WARNING: log_edd_ratio can hold bounds, but this result lacks log_edd_ratio_is_limit and flags: add them to the SELECT to tell bounds from measurements.',
+      '# WARNING: log_lum_halpha can hold bounds, but this result lacks flux_halpha_is_limit: add it to the SELECT to tell bounds from measurements.',
+      '# WARNING: log_mseed_p16 can hold bounds, but this result lacks log_mseed_is_limit: add it to the SELECT to tell bounds from measurements.',
+    ]);
+    const plain: ResultSet = { names: ['id', 'z'], types: ['Utf8', 'Float64'], columns: [['A'], [5]], numRows: 1 };
+    expect(resultCsvWithHeader(plain, 'SELECT id, z FROM census', ctx)).not.toContain('Bounds:');
   });
 
   it('writes ECSV that astropy (5.2.1) reads with units, UCDs, values and the query', () => {

@@ -32,6 +32,23 @@ describe('ResultTable', () => {
     expect(root.querySelector('.pager-info')!.textContent).toBe('Rows 1–50 of 1,234');
   });
 
+  it('writes a bound with "<" or ">" when the result holds its _is_limit column or the flags, and a measurement as a plain number', () => {
+    const root = document.getElementById('t')!;
+    const t = new ResultTable(root, { units: {}, base: '/census/' });
+    t.setResult({
+      names: ['id', 'log_mbh', 'log_mbh_is_limit', 'log_edd_ratio', 'flags', 'log_mseed'],
+      types: ['Utf8', 'Float64', 'Bool', 'Float64', 'Utf8', 'Float64'],
+      numRows: 2,
+      columns: [['A', 'B'], [7.3, 8.1], [true, false], [-0.2, -1.1], ['mbh_upper_limit,edd_ratio_lower_limit', ''], [3.1, 4.2]],
+    });
+    const rows = [...root.querySelectorAll('tbody tr')].map((tr) => [...tr.querySelectorAll('td')].map((td) => td.textContent));
+    expect(rows[0]![1]).toMatch(/^< 7\.3/);
+    expect(rows[0]![3]).toMatch(/^> −0\.2/);
+    // log_mseed_is_limit is not in the result: the flags say the mass, and so the seed mass, is a bound
+    expect(rows[0]![5]).toMatch(/^< 3\.1/);
+    expect(rows[1]!.slice(1).every((c) => !c!.startsWith('<') && !c!.startsWith('>'))).toBe(true);
+  });
+
   it('writes catalog text as text and links ids to their object pages', () => {
     const root = document.getElementById('t')!;
     const t = new ResultTable(root, { units: {}, base: '/census/' });

@@ -89,7 +89,22 @@ describe('what the result chart reads from column names', () => {
     expect(limitOf(limitRule('log_edd_ratio_p50'), { flags: 'lensed, edd_ratio_upper_limit' })).toBe('upper');
     expect(limitOf(limitRule('flux_halpha'), { flux_halpha_is_limit: true })).toBe('upper');
     expect(limitOf(limitRule('z'), { flags: 'mbh_upper_limit' })).toBeNull();
-    expect(limitSourceColumns(['log_mbh', 'log_lum_hbeta', 'z']).sort()).toEqual(['flags', 'flux_hbeta_is_limit']);
+    expect(limitSourceColumns(['log_mbh', 'log_lum_hbeta', 'z']).sort()).toEqual(['flags', 'flux_hbeta_is_limit', 'log_mbh_is_limit']);
+  });
+
+  it('reads the bounds of the seed mass, the required ratios and the offset from the local relation, not only of the mass', () => {
+    for (const c of ['log_mseed', 'lambda_req_light', 'lambda_req_heavy', 'delta_log_mbh_local', 'local_offset_sigma']) {
+      expect(limitOf(limitRule(c), { flags: 'mbh_upper_limit' }), c).toBe('upper');
+      expect(limitOf(limitRule(c), { flags: '' }), c).toBeNull();
+    }
+    expect(limitOf(limitRule('log_mseed'), { log_mseed_is_limit: true, flags: '' })).toBe('upper');
+    expect(limitOf(limitRule('lambda_req_heavy'), { lambda_req_is_limit: true })).toBe('upper');
+    expect(limitOf(limitRule('local_offset_sigma'), { delta_log_mbh_local_is_limit: true })).toBe('upper');
+    // the _is_limit column decides where the row has it
+    expect(limitOf(limitRule('log_mbh'), { log_mbh_is_limit: false, flags: 'mbh_upper_limit' })).toBeNull();
+    expect(limitOf(limitRule('log_edd_ratio'), { log_edd_ratio_is_limit: true, flags: 'edd_ratio_lower_limit' })).toBe('lower');
+    expect(limitOf(limitRule('log_edd_ratio'), { log_edd_ratio_is_limit: true, flags: '' })).toBe('upper');
+    expect(limitSourceColumns(['log_mseed', 'lambda_req_light']).sort()).toEqual(['flags', 'lambda_req_is_limit', 'log_mseed_is_limit']);
   });
 
   it('allows Eddington lines only for bolometric luminosity against black-hole mass on linear axes', () => {
