@@ -32,6 +32,21 @@ const scriptPolicy = {
   },
 };
 
+/**
+ * Streams the catalog's CSV, ECSV, VOTable and FITS downloads into data/ once the pages are
+ * written (src/site/build/writeDownloads.ts): as Astro endpoints each would sit whole in memory.
+ */
+/** @type {import('astro').AstroIntegration} */
+const downloads = {
+  name: 'census-downloads',
+  hooks: {
+    'astro:build:done': async ({ dir }) => {
+      const { writeDownloads } = await import('./src/site/build/writeDownloads.ts');
+      await writeDownloads(fileURLToPath(new URL('data/', dir)));
+    },
+  },
+};
+
 // The site is built for one derived catalog. Which one, and under which sub-path it is
 // deployed, come from the environment so that `npm start`, the end-to-end tests and a
 // group's own deployment can build different catalogs from the same sources:
@@ -51,7 +66,7 @@ export default defineConfig({
   trailingSlash: 'ignore',
   build: { format: 'directory' },
   devToolbar: { enabled: false },
-  integrations: [tidyOutput, scriptPolicy],
+  integrations: [tidyOutput, scriptPolicy, downloads],
   vite: {
     // DuckDB-WASM ships its own worker and wasm bundles; Vite must not pre-bundle it.
     optimizeDeps: { exclude: ['@duckdb/duckdb-wasm'] },
