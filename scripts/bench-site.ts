@@ -16,7 +16,7 @@
  * Options: --n <rows> (default 100000), --draws <n> (200), --runs <n> (3), --keep (leave the
  * work directory), --work <dir> (reuse a kept work directory: skips what is already there).
  */
-import { execFileSync } from 'node:child_process';
+import { spawnSync } from 'node:child_process';
 import { copyFileSync, createWriteStream, existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import { loadavg, tmpdir } from 'node:os';
 import { parse, stringify } from 'yaml';
@@ -56,13 +56,15 @@ const TIME = '/usr/bin/time';
 /** Runs node with `cmd`; returns the peak resident memory in bytes when /usr/bin/time is there. */
 function run(cmd: string[], env: Record<string, string> = {}): number | null {
   const measured = existsSync(TIME);
-  const out = execFileSync(measured ? TIME : process.execPath, measured ? ['-f', 'census-bench-maxrss %M', process.execPath, ...cmd] : cmd, {
+  const r = spawnSync(measured ? TIME : process.execPath, measured ? ['-f', 'census-bench-maxrss %M', process.execPath, ...cmd] : cmd, {
     cwd: root,
     stdio: ['ignore', 'ignore', 'pipe'],
     env: { ...process.env, ...env },
     maxBuffer: 64 * 1024 * 1024,
-  }).toString();
-  const m = /census-bench-maxrss (\d+)/.exec(out);
+  });
+  const err = r.stderr?.toString() ?? '';
+  if (r.status !== 0) throw new Error(`${cmd.slice(0, 2).join(' ')} failed (${r.status ?? r.signal}):\n${err.slice(-4000)}`);
+  const m = /census-bench-maxrss (\d+)/.exec(err);
   return m ? Number(m[1]) * 1024 : null;
 }
 
