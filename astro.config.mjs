@@ -4,6 +4,7 @@ import { readdir, readFile, rm, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { applyPolicy } from './src/site/build/contentSecurityPolicy.ts';
 import { fileURLToPath } from 'node:url';
+import { writeDownloads } from './src/site/build/writeDownloads.ts';
 
 /** Removes Astro's empty content-collection modules from the published folder (the site has no collections). */
 /** @type {import('astro').AstroIntegration} */
@@ -41,7 +42,6 @@ const downloads = {
   name: 'census-downloads',
   hooks: {
     'astro:build:done': async ({ dir }) => {
-      const { writeDownloads } = await import('./src/site/build/writeDownloads.ts');
       await writeDownloads(fileURLToPath(new URL('data/', dir)));
     },
   },
