@@ -4,6 +4,7 @@ import { readdir, readFile, rm, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { applyPolicy } from './src/site/build/contentSecurityPolicy.ts';
 import { fileURLToPath } from 'node:url';
+import { writeDownloads } from './src/site/build/writeDownloads.ts';
 
 /** Removes Astro's empty content-collection modules from the published folder (the site has no collections). */
 /** @type {import('astro').AstroIntegration} */
@@ -32,6 +33,20 @@ const scriptPolicy = {
   },
 };
 
+/**
+ * Streams the catalog's CSV, ECSV, VOTable and FITS downloads into data/ once the pages are
+ * written (src/site/build/writeDownloads.ts): as Astro endpoints each would sit whole in memory.
+ */
+/** @type {import('astro').AstroIntegration} */
+const downloads = {
+  name: 'census-downloads',
+  hooks: {
+    'astro:build:done': async ({ dir }) => {
+      await writeDownloads(fileURLToPath(new URL('data/', dir)));
+    },
+  },
+};
+
 // The site is built for one derived catalog. Which one, and under which sub-path it is
 // deployed, come from the environment so that `npm start`, the end-to-end tests and a
 // group's own deployment can build different catalogs from the same sources:
@@ -51,7 +66,7 @@ export default defineConfig({
   trailingSlash: 'ignore',
   build: { format: 'directory' },
   devToolbar: { enabled: false },
-  integrations: [tidyOutput, scriptPolicy],
+  integrations: [tidyOutput, scriptPolicy, downloads],
   vite: {
     // DuckDB-WASM ships its own worker and wasm bundles; Vite must not pre-bundle it.
     optimizeDeps: { exclude: ['@duckdb/duckdb-wasm'] },

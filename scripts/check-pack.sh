@@ -1,11 +1,19 @@
 #!/usr/bin/env bash
 # Checks the package as a group receives it: packs the tool, installs the tarball in an empty
-# folder, and from there runs the CLI, derives the demo catalog, and builds the site for it
-# (with a non-root site.base). Run by .ci/run after the tests. Usage: scripts/check-pack.sh
+# folder, and from there runs the CLI, derives the demo catalog, builds the site for it (with a
+# non-root site.base), serves it with `site preview`, and opens its main pages in headless
+# Chromium (scripts/check-site-pages.ts, playwright-core from this checkout's node_modules):
+# no console error, no failed request, nothing asked of another host.
+# Run by .ci/run after the tests. Usage: scripts/check-pack.sh
 set -euo pipefail
 root="$(cd "$(dirname "$0")/.." && pwd)"
 work="$(mktemp -d)"
-trap 'rm -rf "$work"' EXIT
+preview_pid=""
+cleanup() {
+  if [ -n "$preview_pid" ]; then kill "$preview_pid" 2>/dev/null || true; fi
+  rm -rf "$work"
+}
+trap cleanup EXIT
 
 cd "$root"
 tarball="$(npm pack --silent --pack-destination "$work" | tail -1)"
@@ -28,3 +36,21 @@ npx --no-install dawn-census site build -c census.config.yaml --out site
 test -f site/index.html
 grep -q 'href="/census/' site/index.html || { echo "pack: the built site ignores site.base" >&2; exit 1; }
 echo "pack: installed tarball derived the demo catalog and built its site under /census/"
+
+# Serve the built site from the installed package and open its pages in Chromium.
+npx --no-install dawn-census site preview -c census.config.yaml --out site --port 0 > preview.log 2>&1 &
+preview_pid=$!
+url=""
+for _ in $(seq 1 100); do
+  url="$(grep -o 'http://[^ ]*' preview.log | head -1 || true)"
+  [ -n "$url" ] && break
+  kill -0 "$preview_pid" 2>/dev/null || { cat preview.log >&2; echo "pack: site preview stopped" >&2; exit 1; }
+  sleep 0.2
+done
+[ -n "$url" ] || { cat preview.log >&2; echo "pack: site preview did not start" >&2; exit 1; }
+case "$url" in */census/) ;; *) echo "pack: site preview serves at $url, not under /census/" >&2; exit 1 ;; esac
+(cd "$root" && node_modules/.bin/tsx scripts/check-site-pages.ts "$url" "$work/group/site")
+kill "$preview_pid" 2>/dev/null || true
+wait "$preview_pid" 2>/dev/null || true
+preview_pid=""
+echo "pack: the site built from the installed tarball opens in Chromium without errors"

@@ -56,6 +56,27 @@ describe('SQL workspace', () => {
     }
   });
 
+  it('runs the query in the editor on Ctrl+Enter, without the Run button, even while the page\'s first query runs (it gave "0 rows")', async () => {
+    const [expected] = await nodeQuery(inject('demoParquet'), 'SELECT count(*) AS n FROM census WHERE z > 6');
+    const site = await openSite(browser, inject('siteUrl'));
+    try {
+      const { page } = site;
+      await page.goto(new URL('query/', inject('siteUrl')).href);
+      // At once, while the page's own first query may still run: that used to end the reader's query with "0 rows".
+      await setSql(page, 'SELECT id FROM census WHERE z > 6');
+      await page.evaluate(() => document.querySelector('[data-result-summary]')?.removeAttribute('data-rows'));
+      // The focus is still in the editor (setSql typed there); Ctrl+Enter is CodeMirror's Mod-Enter on Linux.
+      await expect(page.evaluate(() => document.activeElement?.closest('[data-sql-input]') !== null)).resolves.toBe(true);
+      await page.keyboard.press('Control+Enter');
+      await page.waitForFunction((n) => document.querySelector('[data-result-summary]')?.getAttribute('data-rows') === String(n), expected!.n, { timeout: 60_000 });
+      // The key ran the query rather than adding a line to it.
+      await expect(page.locator('#sql').inputValue()).resolves.toBe('SELECT id FROM census WHERE z > 6');
+      expect(new URL(page.url()).searchParams.get('sql')).toBe('SELECT id FROM census WHERE z > 6');
+    } finally {
+      await site.close();
+    }
+  });
+
   it('shows a SQL error inline beside the editor in plain words', async () => {
     const site = await openSite(browser, inject('siteUrl'));
     try {

@@ -42,6 +42,24 @@ describe('readings', () => {
     }
   });
 
+  it('fits a 390 px wide screen without horizontal scrolling, with its charts, tables and form drawn', async () => {
+    const site = await openSite(browser, inject('siteUrl'));
+    const { page } = site;
+    try {
+      await page.setViewportSize({ width: 390, height: 844 });
+      await page.goto(new URL('readings/', inject('siteUrl')).href);
+      await waitForReading(page, 'standard');
+      const [scroll, client] = await page.evaluate(() => [document.documentElement.scrollWidth, document.documentElement.clientWidth]);
+      expect(scroll, `the Readings page is ${scroll} px wide in a ${client} px window`).toBeLessThanOrEqual(client);
+      // Nothing is cut off instead: every chart fits its cell.
+      const widest = await page.evaluate(() => Math.max(...Array.from(document.querySelectorAll('[data-readings-page] svg')).map((s) => s.getBoundingClientRect().right)));
+      expect(widest).toBeLessThanOrEqual(client);
+      expect(site.errors).toEqual([]);
+    } finally {
+      await site.close();
+    }
+  });
+
   it('restores the reading and the compared pair from its URL', async () => {
     const site = await openSite(browser, inject('siteUrl'));
     try {

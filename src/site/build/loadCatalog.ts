@@ -134,17 +134,19 @@ export function loadCatalog(): Promise<SiteCatalog> {
 }
 
 /**
- * Writes the catalog as CSV (header line, RFC 4180 quoting, `\n` line ends) and returns the
- * bytes. Cells go through the shared `csvCell`, as the query download does: text that starts
- * like a spreadsheet formula gets a leading `'` and control characters are escaped; numbers are
+ * Writes the catalog as CSV to `csvPath` (header line, RFC 4180 quoting, `\n` line ends), after
+ * `head` (e.g. `#` lines with units), streaming DuckDB's chunks so memory stays bounded. Cells
+ * go through the shared `csvCell`, as the query download does: text that starts like a
+ * spreadsheet formula gets a leading `'` and control characters are escaped; numbers are
  * written as JavaScript prints them (shortest round-trip form), missing values empty.
  */
-export async function catalogCsv(parquet: string, csvPath: string): Promise<Buffer> {
+export async function writeCatalogCsv(parquet: string, csvPath: string, head = ''): Promise<void> {
   const instance = await DuckDBInstance.create(':memory:');
   const con = await instance.connect();
   const out = createWriteStream(csvPath, { encoding: 'utf8' });
   try {
     const result = await con.stream(`SELECT * FROM read_parquet(${quote(parquet)})`);
+    out.write(head);
     out.write(`${result.columnNames().map(csvCell).join(',')}\n`);
     for (let chunk = await result.fetchChunk(); chunk && chunk.rowCount > 0; chunk = await result.fetchChunk()) {
       const lines = chunk.getRows().map((row) => row.map((v) => (typeof v === 'number' && !Number.isFinite(v) ? '' : csvCell(v))).join(','));
@@ -155,5 +157,10 @@ export async function catalogCsv(parquet: string, csvPath: string): Promise<Buff
     con.closeSync();
     instance.closeSync();
   }
+}
+
+/** {@link writeCatalogCsv} without a head, returning the bytes written (small catalogs, tests). */
+export async function catalogCsv(parquet: string, csvPath: string): Promise<Buffer> {
+  await writeCatalogCsv(parquet, csvPath);
   return readFileSync(csvPath);
 }

@@ -8,6 +8,7 @@ import { DuckDBInstance } from '@duckdb/node-api';
 import type { Reading } from '../../core/readings/reading.ts';
 import type { ReadingSummary } from '../../core/readings/readingSummary.ts';
 import { catalogFiles, sidecarPath } from './catalogFiles.ts';
+import { loadCatalog } from './loadCatalog.ts';
 
 /** One object's values under one reading, as the pages show them. */
 export interface ReadingValues {
@@ -30,7 +31,7 @@ export interface SiteReadings {
   summary: ReadingSummary[];
   intervalMethod: string;
   flags: Record<string, string>;
-  /** Object id → its values under each reading, in reading order. */
+  /** Object id → its values under each reading, in reading order (empty when the build makes no object pages). */
   byId: Map<string, ReadingValues[]>;
 }
 
@@ -42,8 +43,12 @@ export function readingsFileOf(parquet: string): string | null {
 
 const num = (v: unknown): number | null => (typeof v === 'number' && Number.isFinite(v) ? v : typeof v === 'bigint' ? Number(v) : null);
 
-/** Reads the readings of the catalog `parquet` (default: the build's catalog). */
-export async function readReadings(parquet: string = catalogFiles().parquet): Promise<SiteReadings> {
+/**
+ * Reads the readings of the catalog `parquet` (default: the build's catalog). `withObjects`
+ * false skips every object's values (`byId` stays empty): a large catalog has no static object
+ * pages to list them on, and a million objects under four readings would not fit the build's memory.
+ */
+export async function readReadings(parquet: string = catalogFiles().parquet, withObjects = true): Promise<SiteReadings> {
   const meta = JSON.parse(readFileSync(sidecarPath(parquet), 'utf8')) as { readings?: Partial<SiteReadings> };
   const r = meta.readings;
   const out: SiteReadings = {
@@ -55,7 +60,7 @@ export async function readReadings(parquet: string = catalogFiles().parquet): Pr
     byId: new Map(),
   };
   const file = readingsFileOf(parquet);
-  if (!file || out.readings.length === 0) return out;
+  if (!file || out.readings.length === 0 || !withObjects) return out;
   const instance = await DuckDBInstance.create(':memory:');
   const con = await instance.connect();
   try {
@@ -78,8 +83,8 @@ export async function readReadings(parquet: string = catalogFiles().parquet): Pr
 
 let cached: Promise<SiteReadings> | null = null;
 
-/** The build's readings, read once. */
+/** The build's readings, read once (every object's values only when the build makes one page per object). */
 export function loadReadings(): Promise<SiteReadings> {
-  cached ??= readReadings();
+  cached ??= loadCatalog().then((c) => readReadings(c.files.parquet, c.objectPages === 'static'));
   return cached;
 }

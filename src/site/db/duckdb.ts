@@ -212,6 +212,34 @@ interface BatchLike {
 }
 
 /**
+ * After a stop: asks DuckDB to cancel the running query and resolves once the cancel was answered
+ * and the query has ended; a worker that stays busy (e.g. inside a long synchronous read) is
+ * replaced after STOP_GRACE_MS. Without this order, a query run while the page's first query was
+ * still running (Ctrl+Enter) ended with "0 rows" and no error.
+ */
+function drainAfterStop(conn: duckdb.AsyncDuckDBConnection, work: Promise<unknown>): Promise<void> {
+  return new Promise<void>((resolve) => {
+    const grace = setTimeout(() => {
+      replaceWorker();
+      resolve();
+    }, STOP_GRACE_MS);
+    const cancelled = conn.cancelSent().catch(() => false);
+    const ended = work.then(
+      () => undefined,
+      () => undefined,
+    );
+    // A cancel that finds nothing left to stop may linger and stop the next query on the
+    // connection; a throwaway query takes it.
+    void Promise.all([cancelled, ended])
+      .then(() => conn.query('SELECT 1').catch(() => undefined))
+      .finally(() => {
+        clearTimeout(grace);
+        resolve();
+      });
+  });
+}
+
+/**
  * Runs a visitor's `sql` through the statement gate, streaming batches to `onBatch` until it
  * returns false (enough rows) or the result ends. Stops on abort and on timeout: the query is
  * cancelled, and a worker that does not answer the cancel within STOP_GRACE_MS is replaced.
@@ -221,6 +249,8 @@ async function visitorStream(sql: string, onBatch: (b: ResultSet) => boolean | P
   if (problem) throw new CensusDbError(problem);
   await draining;
   const conn = await connection();
+  // Stopped while DuckDB was starting (the reader ran another query): send nothing.
+  if (options.signal?.aborted) throw new CensusDbError('The query was stopped.');
   const timeoutMs = options.timeoutMs ?? QUERY_TIMEOUT_MS;
   let stopped: string | null = null;
   let settled = false;
@@ -229,6 +259,9 @@ async function visitorStream(sql: string, onBatch: (b: ResultSet) => boolean | P
     stop = (message: string) => {
       if (settled || stopped) return;
       stopped = message;
+      // Set at once, not when this call unwinds: the query that stopped this one (the reader ran
+      // another) waits on it before it is sent.
+      draining = drainAfterStop(conn, work);
       reject(new CensusDbError(message));
     };
   });
@@ -256,24 +289,7 @@ async function visitorStream(sql: string, onBatch: (b: ResultSet) => boolean | P
   try {
     return await Promise.race([work, stoppedPromise]);
   } catch (err) {
-    if (stopped) {
-      // Ask DuckDB to cancel; a worker that stays busy (e.g. inside a long synchronous read) is replaced.
-      draining = new Promise<void>((resolve) => {
-        const grace = setTimeout(() => {
-          replaceWorker();
-          resolve();
-        }, STOP_GRACE_MS);
-        conn.cancelSent().catch(() => false);
-        work.then(
-          () => undefined,
-          () => undefined,
-        ).finally(() => {
-          clearTimeout(grace);
-          resolve();
-        });
-      });
-      throw err;
-    }
+    if (stopped) throw err;
     throw new CensusDbError(friendlyQueryError(err), rawText(err));
   } finally {
     settled = true;

@@ -4,6 +4,7 @@
  * catalog has them. Joinable with `census` on `id`. A catalog without them simply has no such table.
  */
 import * as duckdb from '@duckdb/duckdb-wasm';
+import { publishedTables } from './publishedTables.ts';
 
 /** The documented name of the per-object population table. */
 export const POPULATION_TABLE = 'population';
@@ -22,6 +23,7 @@ export function populationUrl(): string {
  */
 export async function registerPopulationTable(db: duckdb.AsyncDuckDB, conn: duckdb.AsyncDuckDBConnection, materialize = false): Promise<boolean> {
   const url = populationUrl();
+  if (!publishedTables().includes('population')) return false;
   try {
     const head = await fetch(url, { method: 'HEAD', cache: 'no-store' });
     if (!head.ok) return false;

@@ -4,6 +4,7 @@
  * no such file: then the view is simply absent and the pages that need it say so.
  */
 import * as duckdb from '@duckdb/duckdb-wasm';
+import { publishedTables } from './publishedTables.ts';
 
 /** The documented name of the readings table. */
 export const READINGS_TABLE = 'readings';
@@ -21,6 +22,7 @@ export function readingsUrl(): string {
  * copies it into a table (needed before external access is switched off, as for `census`).
  */
 export async function registerReadingsTable(db: duckdb.AsyncDuckDB, conn: duckdb.AsyncDuckDBConnection, materialize = false): Promise<boolean> {
+  if (!publishedTables().includes('readings')) return false;
   try {
     const url = readingsUrl();
     const head = await fetch(url, { method: 'HEAD', cache: 'no-store' });

@@ -6,7 +6,7 @@
 import { formatFixed } from '../text/formatValue.ts';
 import { connection, CensusDbError } from '../db/duckdb.ts';
 import { mountChart } from '../charts/mountChart.ts';
-import { drawPopulation } from '../population/populationCharts.ts';
+import { drawPopulation, NARROW_ABOVE } from '../population/populationCharts.ts';
 import { objectHrefHere } from '../objectLink.ts';
 import { rowsUnderReading, shiftRows } from './readingRows.ts';
 import { readingShiftChart } from './shiftChart.ts';
@@ -46,6 +46,9 @@ export async function mountReadingsPage(root: HTMLElement): Promise<void> {
   const selB = root.querySelector<HTMLSelectElement>('[data-compare-b]')!;
   const shiftMount = root.querySelector<HTMLElement>('[data-shift-chart]')!;
   const status = root.querySelector<HTMLElement>('[data-reading-status]');
+  const objects = Number(charts.dataset.objects ?? 0);
+  // Large catalogs: density charts from their columns only, and a sample of the shifts (src/site/readings/readingRows.ts).
+  const large = objects > NARROW_ABOVE;
   const settings = charts.dataset.settings ? (JSON.parse(charts.dataset.settings) as Record<string, unknown>) : undefined;
   switcher.value = state.reading;
   selA.value = state.a;
@@ -66,7 +69,7 @@ export async function mountReadingsPage(root: HTMLElement): Promise<void> {
     charts.dataset.reading = '';
     markSummary();
     if (status) status.textContent = `Drawing the population under “${label(state.reading)}”…`;
-    const rows = state.reading === CUSTOM_READING_ID ? customChartRows() : await rowsUnderReading(state.reading, have);
+    const rows = state.reading === CUSTOM_READING_ID ? customChartRows() : await rowsUnderReading(state.reading, have, large);
     if (ticket !== drawing) return;
     await drawPopulation(charts, rows, { base, settings });
     if (ticket !== drawing) return;
@@ -75,9 +78,9 @@ export async function mountReadingsPage(root: HTMLElement): Promise<void> {
   };
   const drawShift = async () => {
     shiftMount.dataset.pair = '';
-    const rows = state.a === CUSTOM_READING_ID || state.b === CUSTOM_READING_ID ? await customShift(state.a, state.b) : await shiftRows(state.a, state.b);
+    const rows = state.a === CUSTOM_READING_ID || state.b === CUSTOM_READING_ID ? await customShift(state.a, state.b) : await shiftRows(state.a, state.b, large);
     const width = Math.max(320, Math.min(760, Math.floor(shiftMount.clientWidth || 640)));
-    const el = readingShiftChart(rows, { labelA: label(state.a), labelB: label(state.b), width, height: Math.round(width * 0.66) });
+    const el = readingShiftChart(rows, { labelA: label(state.a), labelB: label(state.b), width, height: Math.round(width * 0.66), ...(large && rows.length < objects ? { sampleOf: objects } : {}) });
     mountChart(shiftMount, el, { fileName: `census-shift-${state.a}-${state.b}`, label: `Shift from ${label(state.a)} to ${label(state.b)}`, base, onOpen: (id) => location.assign(objectHrefHere(id)) });
     shiftMount.dataset.pair = `${state.a}>${state.b}`;
   };
@@ -99,7 +102,7 @@ export async function mountReadingsPage(root: HTMLElement): Promise<void> {
   };
   const valuesOf = async (reading: string): Promise<Map<string, { mbh: number | null; edd: number | null }>> => {
     if (reading === CUSTOM_READING_ID) return new Map((custom ?? []).map((r) => [r.id, { mbh: r.log_mbh, edd: r.log_edd_ratio }]));
-    const rows = await shiftRows(reading, reading);
+    const rows = await shiftRows(reading, reading, large);
     return new Map(rows.map((r) => [r.id, { mbh: r.mbhA, edd: r.eddA }]));
   };
   const customShift = async (a: string, b: string): Promise<ShiftRow[]> => {

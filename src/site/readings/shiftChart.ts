@@ -1,4 +1,4 @@
-import { formatFixed } from '../text/formatValue.ts';
+import { formatCount, formatFixed } from '../text/formatValue.ts';
 import * as Plot from '@observablehq/plot';
 import { PALETTE } from '../charts/palette.ts';
 import { paddedExtent } from '../charts/extent.ts';
@@ -19,6 +19,8 @@ export interface ShiftChartOptions {
   width?: number;
   height?: number;
   document?: Document;
+  /** When `rows` are a sample: how many objects the readings hold (said in the caption). */
+  sampleOf?: number;
 }
 
 const finite = (x: number | null): x is number => x !== null && Number.isFinite(x);
@@ -41,7 +43,7 @@ export function readingShiftChart(rows: readonly ShiftRow[], o: ShiftChartOption
     marginLeft: 56,
     x: { domain: x, label: 'log M_BH / M☉' },
     y: { domain: y, label: 'log λ_Edd' },
-    caption: `${placed.length} objects: circles under “${o.labelA}”, arrow heads under “${o.labelB}”.${left > 0 ? ` ${left} without a mass or Eddington ratio under one of them are not drawn.` : ''} Single-epoch masses carry 0.3–0.5 dex systematic uncertainty under every reading.`,
+    caption: `${o.sampleOf !== undefined ? `A sample of ${formatCount(rows.length)} of ${formatCount(o.sampleOf)} objects (the same for every pair); ${formatCount(placed.length)} drawn` : `${placed.length} objects`}: circles under “${o.labelA}”, arrow heads under “${o.labelB}”.${left > 0 ? ` ${left} without a mass or Eddington ratio under one of them are not drawn.` : ''} Single-epoch masses carry 0.3–0.5 dex systematic uncertainty under every reading.`,
     marks: [
       Plot.ruleY([0], { stroke: PALETTE.guide, strokeDasharray: '5 4' }),
       Plot.arrow(placed, { x1: 'mbhA', y1: 'eddA', x2: 'mbhB', y2: 'eddB', stroke: PALETTE.population, strokeOpacity: 0.55, headLength: 5, insetEnd: 1 }),

@@ -1,9 +1,0 @@
-// The full derived catalog as votable, with units, UCDs and descriptions, written at build time.
-import type { APIRoute } from 'astro';
-import { loadCatalog } from '../../site/build/loadCatalog.ts';
-import { catalogIn } from '../../site/build/exportDownloads.ts';
-
-export const GET: APIRoute = async () => {
-  const { files } = await loadCatalog();
-  return new Response(await catalogIn(files, 'votable'), { headers: { 'content-type': 'application/x-votable+xml' } });
-};
