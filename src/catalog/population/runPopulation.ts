@@ -8,7 +8,7 @@ import { ConfigError } from '../config/ConfigError.ts';
 import { objectVolumes } from './objectVolumes.ts';
 import { populationPaths, type PopulationPaths } from './populationPaths.ts';
 import { readPopulationRows } from './readPopulationRows.ts';
-import { relationFitRun } from './relationFitRun.ts';
+import { relationFitRun, TAU_FACTOR, type SamplerRun } from './relationFitRun.ts';
 import { spaceDensities } from './spaceDensities.ts';
 import { writePopulationOutputs } from './writePopulationOutputs.ts';
 
@@ -19,6 +19,8 @@ export interface PopulationSummary {
   readonly withVmax: number;
   readonly belowLimit: number;
   readonly sentence: string | null;
+  /** How the selection-aware fit's sampler ran (null without a fit). */
+  readonly sampler: SamplerRun | null;
 }
 
 /**
@@ -27,10 +29,11 @@ export interface PopulationSummary {
  * @param config - the validated config (must have `survey`).
  * @param catalogPath - the derived catalog (Parquet written by `derive`).
  * @param label - the config as named in messages.
- * @param onStep - progress of the relation fit (sampler steps done, total).
+ * @param onStep - progress of the relation fit (sampler steps done, the step cap).
+ * @param threads - worker threads for the selection-aware likelihood (the results do not depend on it).
  */
 export async function runPopulation(
-  config: CensusConfig, catalogPath: string, label: string, onStep?: (done: number, total: number) => void,
+  config: CensusConfig, catalogPath: string, label: string, onStep?: (done: number, total: number) => void, threads = 1,
 ): Promise<PopulationSummary> {
   const survey = config.survey;
   if (!survey) throw new ConfigError(`${label}: no survey block: describe the survey's fields, limits and spectrograph range under survey: (see README)`);
@@ -43,7 +46,7 @@ export async function runPopulation(
   const rows = await readPopulationRows(catalogPath, survey.fieldColumn, survey.limitColumns, survey.fluxScale);
   const volumes = objectVolumes(rows, survey, cosmo, catalogPath);
   const densities = spaceDensities(rows, volumes, survey, cosmo, config.settings.seed);
-  const fit = relationFitRun(rows, volumes, survey, config.settings, cosmo, onStep);
+  const fit = await relationFitRun(rows, volumes, survey, config.settings, cosmo, onStep, threads);
   const paths = populationPaths(catalogPath);
   const withVmax = volumes.filter((v) => v.vmaxCmpc3 !== null).length;
   const belowLimit = volumes.filter((v) => v.belowLimit).length;
@@ -64,7 +67,7 @@ export async function runPopulation(
     assumptions: {
       eddingtonRatio: survey.fit.eddingtonRatio,
       mStarRange: survey.fit.mStarRange,
-      sampler: { walkers: survey.fit.walkers, steps: survey.fit.steps, burn: survey.fit.burn },
+      sampler: { walkers: survey.fit.walkers, stepCap: survey.fit.steps, burn: survey.fit.burn, stopWhenKeptChainExceedsTau: TAU_FACTOR },
     },
     references: {
       vmax: 'Schmidt 1968, ApJ 151, 393; fields combined as Avni & Bahcall 1980, ApJ 235, 694',
@@ -74,5 +77,5 @@ export async function runPopulation(
     },
   };
   await writePopulationOutputs(paths, volumes, survey.spec.fields.map((f) => f.name), densities, fit, summary);
-  return { paths, objects: rows.length, withVmax, belowLimit, sentence: fit?.sentence ?? null };
+  return { paths, objects: rows.length, withVmax, belowLimit, sentence: fit?.sentence ?? null, sampler: fit?.sampler.intrinsic ?? null };
 }
