@@ -21,6 +21,8 @@ export interface BivariateNodes {
   readonly sin: Float64Array;
   readonly invCos2: Float64Array;
   readonly w: Float64Array;
+  /** Nodes in use (the arrays may be longer). */
+  readonly n: number;
 }
 
 /**
@@ -31,23 +33,39 @@ export interface BivariateNodes {
  * @param rho - correlation, −1 < ρ < 1.
  */
 export function bivariateNodes(rho: number): BivariateNodes {
+  return bivariateNodesInto(rho, { scale: 0, sin: new Float64Array(20), invCos2: new Float64Array(20), w: new Float64Array(20), n: 0 });
+}
+
+/** Reusable storage of {@link bivariateNodesInto}: room for 20 nodes, `n` of them in use. */
+export interface BivariateNodesScratch {
+  scale: number;
+  readonly sin: Float64Array;
+  readonly invCos2: Float64Array;
+  readonly w: Float64Array;
+  n: number;
+}
+
+/**
+ * {@link bivariateNodes} written into reusable storage (no allocation: the likelihood makes nodes for every object at
+ * every evaluation). θ stays within [−π/2, π/2], so cos²θ = 1 − sin²θ and no cosine is needed.
+ * @param rho - correlation, −1 < ρ < 1.
+ * @param out - storage from an earlier call or a fresh one with 20-element arrays.
+ */
+export function bivariateNodesInto(rho: number, out: BivariateNodesScratch): BivariateNodesScratch {
   const r = Math.max(-0.999, Math.min(0.999, rho));
   const [xs, ws] = Math.abs(r) < 0.3 ? [GL6_X, GL6_W] : Math.abs(r) < 0.75 ? [GL12_X, GL12_W] : [GL20_X, GL20_W];
-  const n = 2 * xs.length;
   const half = 0.5 * Math.asin(r);
-  const sin = new Float64Array(n);
-  const invCos2 = new Float64Array(n);
-  const w = new Float64Array(n);
   for (let i = 0; i < xs.length; i++) {
     for (let s = 0; s < 2; s++) {
-      const th = half * (1 + (s === 0 ? -1 : 1) * (xs[i] as number));
-      const c = Math.cos(th);
-      sin[2 * i + s] = Math.sin(th);
-      invCos2[2 * i + s] = 1 / (c * c);
-      w[2 * i + s] = ws[i] as number;
+      const sn = Math.sin(half * (1 + (s === 0 ? -1 : 1) * (xs[i] as number)));
+      out.sin[2 * i + s] = sn;
+      out.invCos2[2 * i + s] = 1 / (1 - sn * sn);
+      out.w[2 * i + s] = ws[i] as number;
     }
   }
-  return { scale: half / (2 * Math.PI), sin, invCos2, w };
+  out.n = 2 * xs.length;
+  out.scale = half / (2 * Math.PI);
+  return out;
 }
 
 /**
@@ -62,7 +80,7 @@ export function bivariateNormalCdfWith(nodes: BivariateNodes, h: number, k: numb
   const hk = h * k;
   const hh = 0.5 * (h * h + k * k);
   let sum = 0;
-  const n = nodes.w.length;
+  const n = nodes.n;
   for (let i = 0; i < n; i++) sum += (nodes.w[i] as number) * Math.exp(-(hh - hk * (nodes.sin[i] as number)) * (nodes.invCos2[i] as number));
   return Math.min(1, Math.max(0, base + sum * nodes.scale));
 }
