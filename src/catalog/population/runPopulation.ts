@@ -67,7 +67,11 @@ export async function runPopulation(
     assumptions: {
       eddingtonRatio: survey.fit.eddingtonRatio,
       mStarRange: survey.fit.mStarRange,
-      sampler: { walkers: survey.fit.walkers, stepCap: survey.fit.steps, burn: survey.fit.burn, stopWhenKeptChainExceedsTau: TAU_FACTOR },
+      // steps: what the selection-aware fit ran (it stops once the kept chain is TAU_FACTOR autocorrelation times long).
+      sampler: {
+        walkers: survey.fit.walkers, steps: fit?.sampler.intrinsic.stepsRun ?? survey.fit.steps, stepCap: survey.fit.steps, burn: survey.fit.burn,
+        stopRule: `kept chain ≥ ${TAU_FACTOR} autocorrelation times`, converged: fit?.sampler.intrinsic.converged ?? null,
+      },
     },
     references: {
       vmax: 'Schmidt 1968, ApJ 151, 393; fields combined as Avni & Bahcall 1980, ApJ 235, 694',
