@@ -27,5 +27,6 @@ if (!process.argv.includes('--if-stale') || stale()) {
   const tsc = createRequire(import.meta.url).resolve('typescript/bin/tsc');
   execFileSync(process.execPath, [tsc, '-p', path.join(root, 'tsconfig.cli.json'), '--noCheck'], { stdio: 'inherit' });
   copyFileSync(path.join(root, 'src/catalog/derive/deriveWorkerBootstrap.mjs'), path.join(root, 'lib/catalog/derive/deriveWorkerBootstrap.mjs'));
+  copyFileSync(path.join(root, 'src/catalog/population/relationWorkerBootstrap.mjs'), path.join(root, 'lib/catalog/population/relationWorkerBootstrap.mjs'));
   writeFileSync(stamp, new Date().toISOString() + '\n');
 }

@@ -17,6 +17,7 @@ import { fileURLToPath, pathToFileURL } from 'node:url';
 import { DEMO_MODEL, DEMO_SURVEY, generateDemoCatalog, iterateDemoObjects } from './lib/demoPopulation.ts';
 import { csvLines, toCsv } from './lib/demoCsv.ts';
 import { newObjectRows } from './lib/demoNewObjects.ts';
+import { SONG16_SMF, VIRIAL_SCATTER_DEX } from './lib/demoRelations.ts';
 
 export { DEMO_MODEL, DEMO_COLUMNS, generateDemoCatalog, iterateDemoObjects, type Row, type DemoRow } from './lib/demoPopulation.ts';
 export { csvLines, toCsv } from './lib/demoCsv.ts';
@@ -34,6 +35,22 @@ export function headerComments(n: number, seed: number, noiseFree: boolean): str
     'Units: fwhm km/s; flux 1e-18 erg/s/cm2; lam_l_5100 erg/s (observed, before magnification correction); log_mstar log10 Msun.',
     'Regenerate: npx tsx scripts/generate-demo.ts',
   ];
+}
+
+/**
+ * The demo population's intrinsic relation and the assumptions behind it, as written to data-demo/truth.json: what
+ * `dawn-census population` should recover from the demo catalog (test/scripts/demoPopulationTruth.test.ts).
+ */
+export function demoTruthJson(): string {
+  const t = DEMO_MODEL.truth;
+  return JSON.stringify({
+    note: 'INVENTED DEMO DATA: the intrinsic black-hole–host relation the demo catalog was drawn from (scripts/lib/demoHosts.ts).',
+    relation: { form: 'log M_BH = alpha + beta (log M* - pivot) + N(0, sigma)', alpha: t.alpha, beta: t.beta, sigma: t.sigma, pivotLogMstar: t.pivotLogMstar },
+    eddingtonRatio: { meanLog: DEMO_MODEL.logEddRatio.meanLog, sigmaLog: DEMO_MODEL.logEddRatio.sigmaLog, cut: '±5 sigma' },
+    hosts: { logMstarRange: [DEMO_MODEL.host.logMstarMin, DEMO_MODEL.host.logMstarMax], stellarMassFunction: SONG16_SMF.reference },
+    virialScatterDex: { halpha: VIRIAL_SCATTER_DEX.halpha, hbeta: VIRIAL_SCATTER_DEX.hbeta, mgii: VIRIAL_SCATTER_DEX.mgii },
+    selection: { surveyLimitCgs: Number((DEMO_MODEL.detection.surveyLimit * DEMO_MODEL.fluxUnitCgs).toPrecision(6)), minFwhmKms: DEMO_MODEL.detection.fwhmMinKms },
+  }, null, 2) + '\n';
 }
 
 interface CliOptions {
@@ -90,7 +107,8 @@ async function main(argv: string[]): Promise<void> {
     `Units as in catalog.csv: flux ${DEMO_MODEL.fluxUnitCgs} erg/s/cm2.`,
   ];
   writeFileSync(resolve(dir, 'new-objects.csv'), toCsv(newRows, { comments: newComments }));
-  console.log(`wrote ${rows.length} invented rows to data-demo/catalog.csv and ${newRows.length} to data-demo/new-objects.csv`);
+  writeFileSync(resolve(dir, 'truth.json'), demoTruthJson());
+  console.log(`wrote ${rows.length} invented rows to data-demo/catalog.csv, ${newRows.length} to data-demo/new-objects.csv, and data-demo/truth.json`);
 }
 
 if (process.argv[1] !== undefined && import.meta.url === pathToFileURL(resolve(process.argv[1])).href) {

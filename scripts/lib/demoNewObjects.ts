@@ -11,7 +11,8 @@ import { RV15_AGN_LOCAL } from './demoRelations.ts';
 import { mulberry32 } from './demoRandom.ts';
 import { rowFromTruth } from './demoObserve.ts';
 
-type Spec = Omit<DemoTruth, 'deltaLogMbhLocal'>;
+// The new objects are given at their virial masses (what the compare form recovers): no calibration scatter.
+type Spec = Omit<DemoTruth, 'deltaLogMbhLocal' | 'logMbhVirial'>;
 
 const base = {
   lensed: false,
@@ -76,6 +77,7 @@ export function newObjectTruths(): DemoTruth[] {
   const r = RV15_AGN_LOCAL;
   return SPECS.map((s) => ({
     ...s,
+    logMbhVirial: s.logMbh,
     deltaLogMbhLocal: s.logMbh - (r.alpha + r.beta * (s.logMstar - Math.log10(r.mstarPivotMsun))),
   }));
 }

@@ -43,7 +43,7 @@ export function rowFromTruth(model: DemoModel, truth: DemoTruth, rng: Rng, noise
   };
 
   if (truth.branch === 'halpha') {
-    const w = fwhmForMass('halpha', truth.logMbh, lum);
+    const w = fwhmForMass('halpha', truth.logMbhVirial, lum);
     const f = obs.fluxHalphaCgs / unit;
     if (truth.isLimit) {
       row.flux_halpha = sig(model.detection.limitSigma * truth.noiseFloor, 4);
@@ -69,7 +69,7 @@ export function rowFromTruth(model: DemoModel, truth: DemoTruth, rng: Rng, noise
       }
     }
   } else if (truth.branch === 'hbeta') {
-    const w = fwhmForMass('hbeta', truth.logMbh, lum);
+    const w = fwhmForMass('hbeta', truth.logMbhVirial, lum);
     const fb = obs.fluxHbetaCgs / unit;
     const fbErr = fluxErr(fb);
     row.flux_hbeta = sig(measure(fb, fbErr, 2), 4);
@@ -80,7 +80,7 @@ export function rowFromTruth(model: DemoModel, truth: DemoTruth, rng: Rng, noise
     row.lam_l_5100_err = sig(lErr, 3);
   } else {
     // Mg II: no line flux in the model; the width error is a plain 10–25 %.
-    const w = fwhmForMass('mgii', truth.logMbh, lum);
+    const w = fwhmForMass('mgii', truth.logMbhVirial, lum);
     const wErr = w * uniform(() => uz[3] ?? 0, noise.mgiiFwhmRelMin, noise.mgiiFwhmRelMax);
     row.fwhm_mgii = Math.round(measure(w, wErr, 3));
     row.fwhm_mgii_err = Math.max(1, Math.round(wErr));

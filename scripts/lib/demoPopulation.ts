@@ -22,15 +22,24 @@
  *     end or the photometry) and no Hα. Above z = 9.8 both Balmer lines are gone and the few
  *     objects there (about 0.8 % of the catalog) are measured in Mg II 2799 Å: fwhm_mgii and
  *     lam_l_3000 (no line flux). A Balmer decrement needs both lines, so only at z ≤ 7.
- *  3. Black-hole mass: log M_BH normal (mean 7.1, sd 0.5) truncated to 6.0–8.6.
- *  4. Eddington ratio: log λ normal (mean −0.7, sd 0.4) with a super-Eddington component
- *     (8 %, mean +0.25, sd 0.25), truncated to −2.3 ≤ log λ ≤ 1.2.
+ *  3. The intrinsic population (the forward model the population step fits; demoHosts.ts):
+ *     host log M* from the stellar mass function at the object's redshift (Schechter shapes of
+ *     Song et al. 2016, ApJ 825, 5, nearest record in z) on 7 ≤ log M* ≤ 12; the black hole about
+ *     the demo's INTRINSIC RELATION log M_BH = 6.9 + 1.05 (log M* − 10) with 0.5 dex scatter
+ *     (DEMO_MODEL.truth, also written to data-demo/truth.json); log λ_Edd ~ N(−0.6, 0.4)
+ *     (cut at ±5σ), the distribution the demo config's survey block states; the virial mass the
+ *     line's calibration recovers = true mass + N(0, the calibration's scatter: 0.4 dex Hα,
+ *     0.43 Hβ, 0.4 Mg II). The RV15 local relation at log M* = 10 is 6.40, so the intrinsic
+ *     black holes sit 0.5 dex above it; the detected ones sit higher still (selection).
+ *  4. Super-Eddington objects arise from the upper tail of that distribution and the selection
+ *     (a detected object is brighter than typical at its mass).
  *  5. Luminosities: L_bol = λ · 1.26e38 · M_BH (Shen et al. 2011 convention);
  *     λL5100 = L_bol / 10.33 (BC5100, Richards et al. 2006);
  *     λL3000 = L_bol / 5.15 (BC3000, Richards et al. 2006 as used by Shen et al. 2011);
  *     L_Hα = 5.25e42 (λL5100/1e44)^1.157 (Greene & Ho 2005, ApJ 630, 122, eq. 1);
  *     L_Hβ = L_Hα / 2.86 (case B, Osterbrock & Ferland 2006).
- *  6. Line widths by inverting the virial calibrations named in census.config.yaml:
+ *  6. Line widths by inverting the virial calibrations named in census.config.yaml at the
+ *     VIRIAL mass (step 3), so a noise-free row derives back to the virial mass:
  *     Hα: log M = log 1.075 + 6.57 + 0.47 log(L_Hα/1e42) + 2.06 log(FWHM/1e3)
  *         (Reines & Volonteri 2015, ApJ 813, 82);
  *     Hβ (7 < z ≤ 9.8): log M = 6.91 + 0.5 log(λL5100/1e44) + 2 log(FWHM/1e3)
@@ -39,9 +48,6 @@
  *         (Shen et al. 2011, ApJS 194, 45);
  *     Hβ width next to a measured Hα (some of the Balmer-decrement objects):
  *         FWHM_Hβ = 1.07e3 (FWHM_Hα/1e3)^1.03 (Greene & Ho 2005 eq. 3).
- *  7. Host: an offset δ ~ N(+1.0, 0.45) dex ABOVE the local AGN relation of Reines &
- *     Volonteri 2015, log M_BH = 7.45 + 1.05 log(M_star/1e11), bounded so that 7.0 ≤ log M_star ≤ 11.5;
- *     log M_star = 11 + (log M_BH − δ − 7.45) / 1.05 (over-massive black holes).
  *  8. Lensing: 8 % of the objects sit behind the invented HEARTHSTONE-CL cluster with μ
  *     log-uniform in 1.5–10 and a 10–30 % error; observed fluxes and λL5100 are × μ.
  *  9. Dust: the objects with a measured broad Balmer decrement (15 % of the catalog, all at
@@ -52,11 +58,14 @@
  *     derivation that corrects dust only where a decrement is given recovers the model.
  * 10. Fluxes: F = μ · L · 10^(−0.4 A) / (4π D_L²) with the Planck18 luminosity distance
  *     (demoCosmology.ts, matches astropy's Planck18 to 1e-6). Written in 1e-18 erg s^-1 cm^-2.
- *     Each object has a line-flux noise floor σ₀ uniform in 0.15–0.45 (1e-18 cgs).
- *     Selection: (M_BH, λ) are redrawn until the line the mass comes from is broad,
- *     FWHM ≥ 1000 km/s, and detected, 5 σ₀ ≤ F ≤ 3e-16 cgs (brighter ones would be known
- *     quasars, not candidates); Balmer-decrement objects also need F_Hβ ≥ 5 σ₀; Mg II objects
- *     need an observed λL3000 ≥ 5e43 erg s^-1 instead of a line flux.
+ *     Each object has a line-flux noise floor σ₀ uniform in 0.06–0.14 (1e-18 cgs), so the
+ *     survey limit is at S/N ≥ 5.
+ *     Selection, the demo config's survey block: the intrinsic object (step 3) is redrawn at
+ *     the object's redshift until the line the mass comes from is broad, FWHM ≥ 1000 km/s,
+ *     and its observed flux reaches the survey limit, F ≥ 0.75e-18 cgs in every field;
+ *     Balmer-decrement objects also need F_Hβ ≥ 5 σ₀; Mg II objects need an observed
+ *     λL3000 ≥ 5e43 erg s^-1 instead of a line flux. (The fit models the flux and width cuts;
+ *     the dust, the magnification and the Hβ cut of the decrement objects it does not.)
  *     For the flux-limit objects (10 % of the catalog, all at z ≤ 7) the condition is
  *     F < 3 σ₀ instead, and the written flux is the 3σ limit 3 σ₀ with
  *     flux_halpha_is_limit = true and no error. The selection shapes the distributions of
@@ -85,14 +94,15 @@ export type Row = DemoRow;
 /** Parameters of the population model (see the block above). */
 export const DEMO_MODEL = {
   redshift: { min: 4, bulkMean: 5.3, bulkSd: 0.9, bulkMax: 7.0, tailFraction: 0.12, tailScale: 1.2, hbetaMax: 9.8, max: 11 },
-  logMbh: { mean: 7.1, sd: 0.5, min: 6.0, max: 8.6 },
-  logEddRatio: { mean: -0.7, sd: 0.4, superFraction: 0.08, superMean: 0.25, superSd: 0.25, min: -2.3, max: 1.2 },
-  hostOffset: { mean: 1.0, sd: 0.45, logMstarMin: 7.0, logMstarMax: 11.5 },
+  /** The intrinsic black-hole–host relation: log M_BH = alpha + beta (log M* − pivot) + N(0, sigma). */
+  truth: { alpha: 6.9, beta: 1.05, sigma: 0.5, pivotLogMstar: 10 },
+  logEddRatio: { meanLog: -0.6, sigmaLog: 0.4 },
+  host: { logMstarMin: 7, logMstarMax: 12 },
   /** Target fractions of the whole catalog. */
   fractions: { limit: 0.1, noHost: 0.2, lensed: 0.08, balmer: 0.15, hbetaFwhmAmongBalmer: 0.5 },
   lensing: { muMin: 1.5, muMax: 10, relErrMin: 0.1, relErrMax: 0.3 },
   dust: { ebvMin: 0.05, ebvScale: 0.35, ebvMax: 0.88 },
-  detection: { noiseFloorMin: 0.15, noiseFloorMax: 0.45, snrMin: 5, limitSigma: 3, fluxMax: 300, lamL3000Min: 5e43, fwhmMinKms: 1000, maxRedraws: 5000 },
+  detection: { noiseFloorMin: 0.06, noiseFloorMax: 0.14, snrMin: 5, limitSigma: 3, surveyLimit: 0.75, lamL3000Min: 5e43, fwhmMinKms: 1000, maxRedraws: 1_000_000 },
   noise: {
     fluxRel: 0.05,
     fwhmRelBase: 0.04,

@@ -121,3 +121,31 @@ export function calzettiK(lamUm: number): number {
       : c.red.c0 + c.red.c1 * x;
   return c.scale * poly + c.rv;
 }
+
+/**
+ * Scatter of true black-hole masses about the single-epoch (virial) masses of each calibration, dex: the demo's
+ * virial mass is the true mass plus this scatter. The same values the science core's calibration records carry
+ * (src/core/virial/calibrations.ts; there marked common practice / from memory).
+ */
+export const VIRIAL_SCATTER_DEX = {
+  halpha: 0.4,
+  hbeta: 0.43,
+  mgii: 0.4,
+  reference: 'common practice for single-epoch masses (RV15 discuss ~0.3–0.5 dex; VP06 quote ~0.43 dex about the RM masses, from memory)',
+} as const;
+
+/**
+ * Galaxy stellar mass functions the demo draws its hosts from: Schechter shapes (low-mass slope, log M*_char) of
+ * Song et al. 2016, ApJ 825, 5, Table 2 at z = 4–8 (slopes at z = 4 and 8 from the abstract; the other values
+ * from memory, as in the science core's records). The record nearest in redshift is used (z > 8 uses z = 8).
+ */
+export const SONG16_SMF = {
+  records: [
+    { z: 4, logMchar: 10.5, alpha: -1.55 },
+    { z: 5, logMchar: 10.97, alpha: -1.7 },
+    { z: 6, logMchar: 10.72, alpha: -1.91 },
+    { z: 7, logMchar: 10.78, alpha: -1.95 },
+    { z: 8, logMchar: 10.72, alpha: -2.25 },
+  ],
+  reference: 'Song et al. 2016, ApJ 825, 5, Table 2 (Schechter fits; α at z = 4 and 8 from the abstract, the rest from memory)',
+} as const;

@@ -15,7 +15,8 @@ import {
   truncatedNormal,
   uniform,
 } from './demoRandom.ts';
-import { fwhmForMass, intrinsicLuminosities, logMstarForOffset, observeLines } from './demoPhysics.ts';
+import { fwhmForMass, intrinsicLuminosities, observeLines } from './demoPhysics.ts';
+import { drawIntrinsic, type IntrinsicDraw } from './demoHosts.ts';
 import { RV15_AGN_LOCAL } from './demoRelations.ts';
 import { DEMO_FIELDS, DEMO_PROGRAMS, DEMO_SURVEY } from './demoNames.ts';
 import { pickNote } from './demoNotes.ts';
@@ -28,11 +29,14 @@ export interface DemoTruth {
   z: number;
   /** Line the mass is measured from: Hα at z ≤ 7, Hβ to z = 9.8, Mg II above. */
   branch: 'halpha' | 'hbeta' | 'mgii';
+  /** True black-hole mass (log M_sun), about the intrinsic relation. */
   logMbh: number;
+  /** The mass the line's virial calibration gives from the noise-free width and luminosity: logMbh plus the calibration's scatter. */
+  logMbhVirial: number;
   logEddRatio: number;
-  /** log10 M*, M_sun (rounded to 0.01, as written). */
+  /** True log10 M*, M_sun (rounded to 0.01; the catalog writes it with a measurement error). */
   logMstar: number;
-  /** log M_BH minus the RV15 local relation at logMstar, dex. */
+  /** True log M_BH minus the RV15 local relation at logMstar, dex. */
   deltaLogMbhLocal: number;
   lensed: boolean;
   /** Magnification (1 when not lensed), rounded to 1e-3 (as written). */
@@ -64,12 +68,6 @@ function drawRedshift(rng: Rng, m: DemoModel['redshift']): number {
   if (rng() >= m.tailFraction) return truncatedNormal(rng, m.bulkMean, m.bulkSd, m.min, m.bulkMax);
   // The tail starts just above the Hα edge: z = bulkMax exactly stays on the Hα branch.
   return m.bulkMax + 1e-4 + truncatedExponential(rng, m.tailScale, m.max - m.bulkMax - 1e-4);
-}
-
-function drawLogEddRatio(rng: Rng, m: DemoModel['logEddRatio']): number {
-  const superEdd = rng() < m.superFraction;
-  const [mean, sd] = superEdd ? [m.superMean, m.superSd] : [m.mean, m.sd];
-  return truncatedNormal(rng, mean, sd, m.min, m.max);
 }
 
 /**
@@ -105,37 +103,29 @@ export function drawTruth(model: DemoModel, rng: Rng, index: number): DemoTruth 
   const det = model.detection;
   const noiseFloor = uniform(rng, det.noiseFloorMin, det.noiseFloorMax);
 
-  // Selection: redraw (M_BH, λ) until the detection line is seen (or, for limits, is not).
-  let logMbh = 0;
-  let logEddRatio = 0;
-  for (let tries = 0; tries < det.maxRedraws; tries++) {
-    logMbh = truncatedNormal(rng, model.logMbh.mean, model.logMbh.sd, model.logMbh.min, model.logMbh.max);
-    logEddRatio = drawLogEddRatio(rng, model.logEddRatio);
-    const lum = intrinsicLuminosities(logMbh, logEddRatio);
+  // Selection: redraw the intrinsic object (host, black hole, Eddington ratio, virial mass) at this redshift until
+  // the survey would detect it (or, for limits, would not): a draw from the population conditioned on detection.
+  let draw: IntrinsicDraw | null = null;
+  for (let tries = 0; tries < det.maxRedraws && draw === null; tries++) {
+    const d = drawIntrinsic(rng, model, z, branch);
+    const lum = intrinsicLuminosities(d.logMbh, d.logEddRatio);
     const obs = observeLines(lum, z, mu, ebv);
     const flux = (branch === 'halpha' ? obs.fluxHalphaCgs : obs.fluxHbetaCgs) / model.fluxUnitCgs;
-    const fwhm = fwhmForMass(branch, logMbh, lum);
+    const fwhm = fwhmForMass(branch, d.logMbhVirial, lum);
     // Mg II objects have no modelled line flux: their continuum must be bright enough instead.
-    const seen =
-      branch === 'mgii'
-        ? obs.lamL3000ErgS >= det.lamL3000Min
-        : flux >= det.snrMin * noiseFloor && flux <= det.fluxMax;
+    const seen = branch === 'mgii' ? obs.lamL3000ErgS >= det.lamL3000Min : flux >= det.surveyLimit;
     const hbetaSeen = !hasBalmer || obs.fluxHbetaCgs / model.fluxUnitCgs >= det.snrMin * noiseFloor;
     const accepted = isLimit ? flux < det.limitSigma * noiseFloor : seen && hbetaSeen;
-    if (accepted && fwhm >= det.fwhmMinKms) break;
+    if (accepted && fwhm >= det.fwhmMinKms) draw = d;
   }
-
-  const h = model.hostOffset;
+  if (draw === null) throw new Error(`generate-demo: no detectable object at z = ${z} (${branch}) in ${det.maxRedraws} draws`);
+  const { logMbh, logEddRatio, logMbhVirial } = draw;
   const r = RV15_AGN_LOCAL;
-  // δ bounds that keep log M* inside [logMstarMin, logMstarMax].
-  const deltaLo = logMbh - r.alpha - r.beta * (h.logMstarMax - Math.log10(r.mstarPivotMsun));
-  const deltaHi = logMbh - r.alpha - r.beta * (h.logMstarMin - Math.log10(r.mstarPivotMsun));
-  const delta = truncatedNormal(rng, h.mean, h.sd, deltaLo, deltaHi);
-  const logMstar = round(logMstarForOffset(logMbh, delta), 2);
+  const logMstar = round(draw.logMstar, 2);
   const deltaLogMbhLocal = logMbh - (r.alpha + r.beta * (logMstar - Math.log10(r.mstarPivotMsun)));
 
   const truth: DemoTruth = {
-    id, z, branch, logMbh, logEddRatio, logMstar, deltaLogMbhLocal, lensed, mu, ebv,
+    id, z, branch, logMbh, logMbhVirial, logEddRatio, logMstar, deltaLogMbhLocal, lensed, mu, ebv,
     hasHost, isLimit, hasBalmer, hasHbetaFwhm, noiseFloor, field: field.name, raDeg, decDeg, program, notes: '',
   };
   truth.notes = pickNote(rng, truth);

@@ -43,8 +43,8 @@ let outDir: string | undefined;
 
 /**
  * The demo config with absolute paths, writing to `catalog`, and the smallest sampler the config allows (8 walkers ×
- * 100 steps instead of 16 × 800): the pages need the population results' shape, not a converged fit, and the full
- * run costs tens of seconds of CPU on a 2-core machine.
+ * 100 steps instead of 16 walkers until convergence, some 2000 steps): the pages need the population results'
+ * shape, not a converged fit, and the full run costs a minute or more of CPU on a 2-core machine.
  */
 function cheapSurveyConfig(catalog: string): string {
   const doc = parse(readFileSync(join(root, 'data-demo/census.config.yaml'), 'utf8')) as {

@@ -22,13 +22,13 @@ export const TRUTH: IntrinsicPopulation = { alpha: 6.4, beta: 1.05, sigma: 0.5, 
 export const GRID = { zSlice: 0.25, mStar: [8, 11.5, 0.125] as const };
 export const ERRORS = { ex: 0.25, eyMeas: 0.15 };
 
-export function simulateAndFit(survey: SurveySpec, n: number, rng: Rng, steps: number) {
+export async function simulateAndFit(survey: SurveySpec, n: number, rng: Rng, steps: number) {
   const sim = simulateSample(cosmo, survey, recipe, TRUTH, n, ERRORS, rng);
   const built = buildSelectionTables(cosmo, survey, { halpha: recipe }, sim.objects.map((o) => ({ field: 0, line: 'halpha' as const, z: o.z })), undefined, GRID);
   const data = sim.objects.map((o, i) => ({ x: o.x, ex: o.ex, y: o.y, ey: ERRORS.eyMeas, table: built.index[i] as number }));
   const opts = { walkers: 12, steps, burn: Math.round(steps / 2) };
-  const fit = fitRelation(data, built.tables, built.grids, erdf, rng, opts);
-  const naive = fitRelation(data.map((d) => ({ ...d, table: 0 })), [naiveTable(built.grids)], built.grids, erdf, rng, opts);
+  const fit = await fitRelation({ data, tables: built.tables, grids: built.grids, erdf }, rng, opts);
+  const naive = await fitRelation({ data: data.map((d) => ({ ...d, table: 0 })), tables: [naiveTable(built.grids)], grids: built.grids, erdf }, rng, opts);
   return { sim, built, fit, naive };
 }
 

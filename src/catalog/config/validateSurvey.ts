@@ -14,6 +14,13 @@ export const SURVEY_KEYS = ['fields', 'field_column', 'wavelength_range_angstrom
 /** Keys of one `survey.fields[i]` entry. */
 export const FIELD_KEYS = ['name', 'area_arcmin2', 'source_plane_area_arcmin2', 'limits'];
 /** Keys of `survey.relation_fit`. */
+/**
+ * Sampler defaults: the run stops once the kept chain is 50 autocorrelation times long (checked every 100 steps),
+ * at the latest after DEFAULT_STEP_CAP steps; the first DEFAULT_BURN steps are dropped (at most a quarter of the cap).
+ */
+export const DEFAULT_STEP_CAP = 4000;
+export const DEFAULT_BURN = 300;
+
 export const FIT_KEYS = ['eddington_ratio', 'mstar_range', 'walkers', 'steps', 'burn'];
 /** Keys of `survey.densities`. */
 export const DENSITY_KEYS = ['log_mbh_bins', 'log_lbol_bins', 'z_ranges'];
@@ -127,8 +134,8 @@ export function validateSurvey(doc: unknown, fail: (msg: string) => never): Surv
   const mStarRange = fitDoc.mstar_range === undefined ? ([7, 12] as [number, number]) : pair('survey.relation_fit.mstar_range', fitDoc.mstar_range);
   const walkers = fitDoc.walkers === undefined ? 16 : int('survey.relation_fit.walkers', fitDoc.walkers, 8, 200);
   if (walkers % 2 !== 0) fail(`survey.relation_fit.walkers must be even, got ${walkers}`);
-  const steps = fitDoc.steps === undefined ? 800 : int('survey.relation_fit.steps', fitDoc.steps, 100, 100000);
-  const burn = fitDoc.burn === undefined ? Math.floor((3 * steps) / 8) : int('survey.relation_fit.burn', fitDoc.burn, 0, steps - 1);
+  const steps = fitDoc.steps === undefined ? DEFAULT_STEP_CAP : int('survey.relation_fit.steps', fitDoc.steps, 100, 100000);
+  const burn = fitDoc.burn === undefined ? Math.min(DEFAULT_BURN, Math.floor(steps / 4)) : int('survey.relation_fit.burn', fitDoc.burn, 0, steps - 1);
 
   const dDoc = doc.densities === undefined ? {} : doc.densities;
   if (!isObj(dDoc)) return fail(`survey.densities must be a mapping, got ${show(dDoc)}`);

@@ -12,12 +12,25 @@ import { CALIBRATIONS } from '../../core/virial/calibrations.ts';
 import type { VirialCalibration } from '../../core/virial/virialCalibration.ts';
 import type { SurveyConfig } from '../config/SurveyConfig.ts';
 import type { ObjectVolume } from './objectVolumes.ts';
+import { createRelationLikelihoodPool } from './relationLikelihoodPool.ts';
 import type { PopulationRow } from './readPopulationRows.ts';
 
 /** M* error assumed where the catalog gives none: common practice for SED-fitted masses, no source. */
 export const DEFAULT_MSTAR_ERR_DEX = 0.3;
 /** Floor of the measurement-only error of log M_BH once the calibration's scatter is taken out, dex. */
 export const MIN_MBH_MEAS_ERR_DEX = 0.05;
+
+/** How one sampler run went. */
+export interface SamplerRun {
+  readonly stepsRun: number;
+  readonly stepCap: number;
+  readonly burn: number;
+  readonly tau: number[];
+  readonly converged: boolean;
+}
+
+/** The kept chain must be this many autocorrelation times long (Foreman-Mackey et al. 2013, section 3: ≥ 50). */
+export const TAU_FACTOR = 50;
 
 /** What the relation fit found, and how it compares with the naive fit and the local relation. */
 export interface RelationFitSummary {
@@ -35,6 +48,8 @@ export interface RelationFitSummary {
   readonly offsetSigmas: number;
   readonly sentence: string;
   readonly acceptance: number;
+  /** The sampler runs: steps (the cap unless converged), burn-in, autocorrelation times of (alpha, beta, sigma). */
+  readonly sampler: { intrinsic: SamplerRun; naive: SamplerRun };
   readonly samples: { intrinsic: Float64Array; naive: Float64Array };
 }
 
@@ -42,10 +57,10 @@ export interface RelationFitSummary {
  * The selection-aware fit of log M_BH against log M* for the objects with a V_max and a host mass, and the naive
  * fit to the same points. Returns null with fewer than 8 usable objects (said in the summary instead).
  */
-export function relationFitRun(
+export async function relationFitRun(
   rows: readonly PopulationRow[], volumes: readonly ObjectVolume[], survey: SurveyConfig, settings: DeriveSettings, cosmo: Cosmology,
-  onStep?: (done: number, total: number) => void,
-): RelationFitSummary | null {
+  onStep?: (done: number, total: number) => void, threads = 1,
+): Promise<RelationFitSummary | null> {
   const recipes: Partial<Record<LineId, ForwardRecipe>> = {};
   for (const line of ['halpha', 'hbeta'] as const) {
     const cal = (CALIBRATIONS as Record<string, VirialCalibration>)[settings.calibrations[line]];
@@ -75,11 +90,25 @@ export function relationFitRun(
     return { x: u.x, ex: u.ex, y: u.y, ey: Math.max(Math.sqrt(Math.max(u.hw * u.hw - sc * sc, 0)), MIN_MBH_MEAS_ERR_DEX), table: built.index[i] as number };
   });
   const erdf = survey.fit.eddingtonRatio;
-  const opts = { walkers: survey.fit.walkers, steps: survey.fit.steps, burn: survey.fit.burn };
-  const total = 2 * opts.steps;
+  const opts = { walkers: survey.fit.walkers, steps: survey.fit.steps, burn: survey.fit.burn, tauFactor: TAU_FACTOR };
   const rng = createRng(seedFor(settings.seed, 'population:relation'));
-  const fit: RelationFit = fitRelation(data, built.tables, built.grids, erdf, rng, { ...opts, onStep: (s) => onStep?.(s, total) });
-  const naive = fitRelation(data.map((d) => ({ ...d, table: 0 })), [naiveTable(built.grids)], built.grids, erdf, rng, { ...opts, onStep: (s) => onStep?.(opts.steps + s, total) });
+  const problem = { data, tables: built.tables, grids: built.grids, erdf };
+  // The naive fit (no selection integral) costs little: it runs in this thread, after the selection-aware one,
+  // which uses the worker threads. Progress counts the selection-aware fit's steps against its cap.
+  let fit: RelationFit;
+  if (threads > 1) {
+    const pool = createRelationLikelihoodPool(threads, problem);
+    try {
+      fit = await fitRelation(problem, rng, { ...opts, onStep: (s) => onStep?.(s, opts.steps) }, pool.evaluate);
+    } finally {
+      await pool.close();
+    }
+  } else {
+    fit = await fitRelation(problem, rng, { ...opts, onStep: (s) => onStep?.(s, opts.steps) });
+  }
+  onStep?.(opts.steps, opts.steps);
+  const naive = await fitRelation({ data: data.map((d) => ({ ...d, table: 0 })), tables: [naiveTable(built.grids)], grids: built.grids, erdf }, rng, opts);
+  const run = (f: RelationFit): SamplerRun => ({ stepsRun: f.stepsRun, stepCap: opts.steps, burn: f.burn, tau: f.tau, converged: f.converged });
   const xs = use.map((u) => u.x).sort((a, b) => a - b);
   const mMed = xs[Math.floor((xs.length - 1) / 2)] as number;
   const weights = built.tables.map((_, t) => built.index.filter((k) => k === t).length);
@@ -105,6 +134,6 @@ export function relationFitRun(
     selectionBiasDex: selectionBias(a, b, s, mMed, built.tables, weights, erdf),
     detectableFraction: detectableFraction(a, b, s, built.tables, weights, built.grids.mStar, erdf),
     localRelation: rel.id, offsetFromLocal: { p16: q(0.16), p50: q(0.5), p84: q(0.84) }, offsetSigmas: sig, sentence,
-    acceptance: fit.acceptance, samples: { intrinsic: fit.samples, naive: naive.samples },
+    acceptance: fit.acceptance, sampler: { intrinsic: run(fit), naive: run(naive) }, samples: { intrinsic: fit.samples, naive: naive.samples },
   };
 }

@@ -10,7 +10,7 @@ import { objectVolumes } from './objectVolumes.ts';
 import { POPULATION_SUMMARY_FORMAT } from './populationSignature.ts';
 import { populationPaths, type PopulationPaths } from './populationPaths.ts';
 import { readPopulationRows } from './readPopulationRows.ts';
-import { relationFitRun } from './relationFitRun.ts';
+import { relationFitRun, TAU_FACTOR, type SamplerRun } from './relationFitRun.ts';
 import { spaceDensities } from './spaceDensities.ts';
 import { writePopulationOutputs } from './writePopulationOutputs.ts';
 
@@ -21,6 +21,8 @@ export interface PopulationSummary {
   readonly withVmax: number;
   readonly belowLimit: number;
   readonly sentence: string | null;
+  /** How the selection-aware fit's sampler ran (null without a fit). */
+  readonly sampler: SamplerRun | null;
 }
 
 /**
@@ -29,12 +31,14 @@ export interface PopulationSummary {
  * @param config - the validated config (must have `survey`).
  * @param catalogPath - the derived catalog (Parquet written by `derive`).
  * @param label - the config as named in messages.
- * @param onStep - progress of the relation fit (sampler steps done, total).
- * @param force - replace output files `dawn-census population` did not write (never the catalog or a special file).
+ * @param onStep - progress of the relation fit (sampler steps done, the step cap).
+ * @param options - `force`: replace output files `dawn-census population` did not write (never the catalog or a special
+ *   file); `threads`: worker threads for the selection-aware likelihood (the results do not depend on it).
  * Throws OutputRefused, before reading the catalog, when an output may not be written (see checkPopulationTargets).
  */
 export async function runPopulation(
-  config: CensusConfig, catalogPath: string, label: string, onStep?: (done: number, total: number) => void, force = false,
+  config: CensusConfig, catalogPath: string, label: string, onStep?: (done: number, total: number) => void,
+  options: { force?: boolean; threads?: number } = {},
 ): Promise<PopulationSummary> {
   const survey = config.survey;
   if (!survey) throw new ConfigError(`${label}: no survey block: describe the survey's fields, limits and spectrograph range under survey: (see README)`);
@@ -43,12 +47,12 @@ export async function runPopulation(
     const [a, b] = survey.spec.lamObsRangeAngstrom;
     throw new ConfigError(`${label}: survey.wavelength_range_angstrom [${a}, ${b}] excludes every line the fields search (${[...searched].join(', ')}) at every redshift`);
   }
-  await checkPopulationTargets(catalogPath, populationPaths(catalogPath), force);
+  await checkPopulationTargets(catalogPath, populationPaths(catalogPath), options.force ?? false);
   const cosmo = getCosmology(config.settings.cosmology);
   const rows = await readPopulationRows(catalogPath, survey.fieldColumn, survey.limitColumns, survey.fluxScale);
   const volumes = objectVolumes(rows, survey, cosmo, catalogPath);
   const densities = spaceDensities(rows, volumes, survey, cosmo, config.settings.seed);
-  const fit = relationFitRun(rows, volumes, survey, config.settings, cosmo, onStep);
+  const fit = await relationFitRun(rows, volumes, survey, config.settings, cosmo, onStep, options.threads ?? 1);
   const paths = populationPaths(catalogPath);
   const withVmax = volumes.filter((v) => v.vmaxCmpc3 !== null).length;
   const belowLimit = volumes.filter((v) => v.belowLimit).length;
@@ -70,7 +74,11 @@ export async function runPopulation(
     assumptions: {
       eddingtonRatio: survey.fit.eddingtonRatio,
       mStarRange: survey.fit.mStarRange,
-      sampler: { walkers: survey.fit.walkers, steps: survey.fit.steps, burn: survey.fit.burn },
+      // steps: what the selection-aware fit ran (it stops once the kept chain is TAU_FACTOR autocorrelation times long).
+      sampler: {
+        walkers: survey.fit.walkers, steps: fit?.sampler.intrinsic.stepsRun ?? survey.fit.steps, stepCap: survey.fit.steps, burn: survey.fit.burn,
+        stopRule: `kept chain ≥ ${TAU_FACTOR} autocorrelation times`, converged: fit?.sampler.intrinsic.converged ?? null,
+      },
     },
     references: {
       vmax: 'Schmidt 1968, ApJ 151, 393; fields combined as Avni & Bahcall 1980, ApJ 235, 694',
@@ -79,6 +87,6 @@ export async function runPopulation(
       selection: 'selection inside the likelihood, as in Li et al. 2024 (arXiv:2403.00074); our own implementation',
     },
   };
-  await writePopulationOutputs(paths, volumes, survey.spec.fields.map((f) => f.name), densities, fit, summary, { catalogPath, force });
-  return { paths, objects: rows.length, withVmax, belowLimit, sentence: fit?.sentence ?? null };
+  await writePopulationOutputs(paths, volumes, survey.spec.fields.map((f) => f.name), densities, fit, summary, { catalogPath, force: options.force ?? false });
+  return { paths, objects: rows.length, withVmax, belowLimit, sentence: fit?.sentence ?? null, sampler: fit?.sampler.intrinsic ?? null };
 }

@@ -1,7 +1,7 @@
 import type { Percentiles } from '../derive/types.ts';
 import type { Rng } from '../random/rng.ts';
 import { percentiles16_50_84 } from '../random/percentiles.ts';
-import { ensembleSample } from './ensembleSampler.ts';
+import { ensembleSample, type BatchLogProb } from './ensembleSampler.ts';
 import type { EddingtonRatioDistribution } from './eddingtonRatioDistribution.ts';
 import { criteriaMoments } from './detectionModel.ts';
 import { bivariateNormalCdf } from './bivariateNormalCdf.ts';
@@ -11,11 +11,13 @@ import { RELATION_PIVOT, relationLogLikelihood, type RelationDatum, type Relatio
 /** Flat priors of the relation's parameters (bounds inclusive). */
 export const RELATION_PRIORS = { alpha: [2, 12], beta: [-2, 4], sigma: [0.02, 2] } as const;
 
-/** Sampler settings of a relation fit. */
+/** Sampler settings of a relation fit (see {@link EnsembleOptions}: `steps` is a cap when `tauFactor` is set). */
 export interface RelationFitOptions {
   readonly walkers: number;
   readonly steps: number;
   readonly burn: number;
+  readonly tauFactor?: number;
+  readonly checkEvery?: number;
   readonly onStep?: (step: number, steps: number) => void;
 }
 
@@ -29,32 +31,62 @@ export interface RelationFit {
   /** Flattened (alpha, beta, sigma) triplets after burn-in. */
   readonly samples: Float64Array;
   readonly acceptance: number;
+  /** Steps run, burn-in, autocorrelation times of (alpha, beta, sigma) in steps, and whether the run converged. */
+  readonly stepsRun: number;
+  readonly burn: number;
+  readonly tau: number[];
+  readonly converged: boolean;
+}
+
+/** What the relation's likelihood needs: plain data, so that worker threads can rebuild it. */
+export interface RelationProblem {
+  readonly data: readonly RelationDatum[];
+  readonly tables: readonly SelectionTable[];
+  readonly grids: RelationGrids;
+  readonly erdf: EddingtonRatioDistribution;
+}
+
+/**
+ * The log likelihood of a problem as a batch function evaluated in this thread (worker threads run the same).
+ * @param p - the problem.
+ */
+export function relationLikelihoodBatch(p: RelationProblem): BatchLogProb {
+  const logLike = relationLogLikelihood(p.data, p.tables, p.grids, p.erdf);
+  return (thetas, count) => Float64Array.from({ length: count }, (_, i) => logLike(thetas[3 * i] as number, thetas[3 * i + 1] as number, thetas[3 * i + 2] as number));
 }
 
 const column = (samples: Float64Array, d: number): Float64Array => Float64Array.from({ length: samples.length / 3 }, (_, i) => samples[3 * i + d] as number);
 
 /**
  * Samples the posterior of log M_BH = alpha + beta (log M* − 10) with intrinsic scatter sigma under flat priors
- * ({@link RELATION_PRIORS}), with the ensemble sampler. Deterministic for a given Rng.
- * @param data - objects with their table indices.
- * @param tables - selection tables (one flat table without selection for the naive fit).
- * @param grids - the tables' grid.
- * @param erdf - the Eddington-ratio distribution.
+ * ({@link RELATION_PRIORS}), with the ensemble sampler. Deterministic for a given Rng, whatever evaluates the
+ * likelihood.
+ * @param p - objects with their table indices, the selection tables (one flat table without selection for the
+ *   naive fit), their grid and the Eddington-ratio distribution.
  * @param rng - the random stream.
- * @param opts - walkers, steps, burn-in.
+ * @param opts - walkers, steps (a cap with tauFactor), burn-in.
+ * @param likelihood - the problem's log likelihood for batches of (alpha, beta, sigma), e.g. on worker threads;
+ *   by default {@link relationLikelihoodBatch} in this thread.
  */
-export function fitRelation(
-  data: readonly RelationDatum[], tables: readonly SelectionTable[], grids: RelationGrids, erdf: EddingtonRatioDistribution, rng: Rng, opts: RelationFitOptions = DEFAULT_FIT_OPTIONS,
-): RelationFit {
+export async function fitRelation(
+  p: RelationProblem, rng: Rng, opts: RelationFitOptions = DEFAULT_FIT_OPTIONS, likelihood: BatchLogProb = relationLikelihoodBatch(p),
+): Promise<RelationFit> {
   const P = RELATION_PRIORS;
-  const logLike = relationLogLikelihood(data, tables, grids, erdf);
-  const logProb = (t: Float64Array): number => {
-    const a = t[0] as number;
-    const b = t[1] as number;
-    const s = t[2] as number;
-    if (a < P.alpha[0] || a > P.alpha[1] || b < P.beta[0] || b > P.beta[1] || s < P.sigma[0] || s > P.sigma[1]) return -Infinity;
-    return logLike(a, b, s);
+  const inPrior = (a: number, b: number, s: number): boolean =>
+    a >= P.alpha[0] && a <= P.alpha[1] && b >= P.beta[0] && b <= P.beta[1] && s >= P.sigma[0] && s <= P.sigma[1];
+  // The prior is checked here; only positions inside it are sent to the likelihood.
+  const logProb: BatchLogProb = async (thetas, count) => {
+    const out = new Float64Array(count).fill(-Infinity);
+    const inside: number[] = [];
+    for (let i = 0; i < count; i++) if (inPrior(thetas[3 * i] as number, thetas[3 * i + 1] as number, thetas[3 * i + 2] as number)) inside.push(i);
+    if (inside.length === 0) return out;
+    const batch = new Float64Array(inside.length * 3);
+    inside.forEach((i, k) => batch.set(thetas.subarray(3 * i, 3 * i + 3), 3 * k));
+    const ll = await likelihood(batch, inside.length);
+    inside.forEach((i, k) => { out[i] = ll[k] as number; });
+    return out;
   };
+  const data = p.data;
   // Start from the observed points' least-squares line, a robust ball inside the priors.
   let sx = 0, sy = 0, sxx = 0, sxy = 0;
   for (const d of data) { sx += d.x; sy += d.y; sxx += d.x * d.x; sxy += d.x * d.y; }
@@ -64,18 +96,19 @@ export function fitRelation(
   const aLsq = sy / n + b0 * (RELATION_PIVOT - sx / n);
   // The observed points sit above the intrinsic relation when selection matters: scan the intercept below the
   // least-squares one (and a little above) for the best start, so burn-in does not have to travel a dex.
+  const offsets = Array.from({ length: 26 }, (_, k) => -2 + 0.1 * k);
+  const scan = await logProb(Float64Array.from(offsets.flatMap((d) => [aLsq + d, b0, 0.5])), offsets.length);
   let a0 = aLsq;
   let best = -Infinity;
-  for (let d = -2; d <= 0.5 + 1e-9; d += 0.1) {
-    const t = Float64Array.of(aLsq + d, b0, 0.5);
-    const lp = logProb(t);
-    if (lp > best) { best = lp; a0 = aLsq + d; }
-  }
-  const r = ensembleSample(logProb, [a0, b0, 0.5], [0.1, 0.1, 0.1], rng, opts);
+  offsets.forEach((d, k) => { if ((scan[k] as number) > best) { best = scan[k] as number; a0 = aLsq + d; } });
+  const r = await ensembleSample(logProb, [a0, b0, 0.5], [0.1, 0.1, 0.1], rng, opts);
   const a = column(r.samples, 0);
   const b = column(r.samples, 1);
   const s = column(r.samples, 2);
-  return { alpha: percentiles16_50_84(a), beta: percentiles16_50_84(b), sigma: percentiles16_50_84(s), samples: r.samples, acceptance: r.acceptance };
+  return {
+    alpha: percentiles16_50_84(a), beta: percentiles16_50_84(b), sigma: percentiles16_50_84(s), samples: r.samples, acceptance: r.acceptance,
+    stepsRun: r.stepsRun, burn: r.burn, tau: r.tau, converged: r.converged,
+  };
 }
 
 /**

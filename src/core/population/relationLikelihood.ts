@@ -1,4 +1,4 @@
-import { bivariateNodes, bivariateNormalCdfWith } from './bivariateNormalCdf.ts';
+import { bivariateNodesInto, bivariateNormalCdfWith, type BivariateNodesScratch } from './bivariateNormalCdf.ts';
 import { criteriaMoments, type DetectionLinear, type MassBelief } from './detectionModel.ts';
 import type { EddingtonRatioDistribution } from './eddingtonRatioDistribution.ts';
 import { fastNormalCdf as normalCdf } from './fastNormalCdf.ts';
@@ -41,7 +41,7 @@ interface DetectionAt {
   at(mM: number, mU: number): number;
 }
 
-function prepare(tab: SelectionTable, erdf: EddingtonRatioDistribution, vM: number, vU: number, cMU: number): DetectionAt {
+function prepare(tab: SelectionTable, erdf: EddingtonRatioDistribution, vM: number, vU: number, cMU: number, scratch: BivariateNodesScratch): DetectionAt {
   const lin = tab.linear;
   if (!lin) return { at: () => 1 };
   if (!lin.possible) return { at: () => 0 };
@@ -53,7 +53,8 @@ function prepare(tab: SelectionTable, erdf: EddingtonRatioDistribution, vM: numb
   const a0 = lin.a0 + lin.aL * erdf.meanLog;
   const b0 = lin.b0 + lin.bL * erdf.meanLog;
   if (lin.noWidthCut) return { at: (mM) => normalCdf((a0 + lin.aM * mM) / sA) };
-  const nodes = bivariateNodes(mo.rho);
+  // The nodes go into the caller's scratch: each DetectionAt is used before the next is prepared.
+  const nodes = bivariateNodesInto(mo.rho, scratch);
   return {
     at: (mM, mU) => {
       const h = (a0 + lin.aM * mM) / sA;
@@ -111,12 +112,13 @@ export function relationLogLikelihood(
   const wxa = Float64Array.from(wx);
   const priorSums = tables.map((t) => t.massPrior.reduce((a, b) => a + b, 0));
   const logDen = new Float64Array(tables.length);
+  const scratch: BivariateNodesScratch = { scale: 0, sin: new Float64Array(20), invCos2: new Float64Array(20), w: new Float64Array(20), n: 0 };
   return (alpha: number, beta: number, sigma: number): number => {
     const s2 = sigma * sigma;
     for (let t = 0; t < tables.length; t++) {
       const tab = tables[t] as SelectionTable;
       const sc2 = tab.calibrationScatter * tab.calibrationScatter;
-      const det = prepare(tab, erdf, s2, s2 + sc2, s2);
+      const det = prepare(tab, erdf, s2, s2 + sc2, s2, scratch);
       let den = 0;
       for (let j = 0; j < nm; j++) {
         const prior = tab.massPrior[j] as number;
@@ -138,7 +140,7 @@ export function relationLogLikelihood(
       const vM = s2 - (s2 * s2) / vy;
       const vU = vTot - (vTot * vTot) / vy;
       const cMU = s2 - (s2 * vTot) / vy;
-      const det = prepare(tab, erdf, vM, vU, cMU);
+      const det = prepare(tab, erdf, vM, vU, cMU, scratch);
       let num = 0;
       const j0 = first[i] as number;
       const o = offset[i] as number;

@@ -4,8 +4,8 @@ import { selectionBias } from '../../../src/core/population/fitRelation.ts';
 import { erdf, simulateAndFit, surveyWith, TRUTH } from '../../helpers/populationInjection.ts';
 
 describe('fitRelation with the selection in the likelihood', () => {
-  it('recovers the relation behind a survey that also requires a broad width', { timeout: 600_000 }, () => {
-    const { fit, naive, built, sim } = simulateAndFit(surveyWith(1000), 6000, createRng(7), 400);
+  it('recovers the relation behind a survey that also requires a broad width', { timeout: 600_000 }, async () => {
+    const { fit, naive, built, sim } = await simulateAndFit(surveyWith(1000), 6000, createRng(7), 400);
     for (const [p, truth] of [[fit.alpha, TRUTH.alpha], [fit.beta, TRUTH.beta], [fit.sigma, TRUTH.sigma]] as const) {
       const halfWidth = (p.p84 - p.p16) / 2;
       expect(Math.abs(p.p50 - truth)).toBeLessThan(2.5 * halfWidth);

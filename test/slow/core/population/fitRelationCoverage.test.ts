@@ -5,14 +5,14 @@ import { simulateAndFit, surveyWith, TRUTH } from '../../../helpers/populationIn
 
 // The coverage check runs 40 sampler fits (minutes on a busy 2-core machine): `npm run test:slow`, not part of `npm test`.
 describe('fitRelation coverage', () => {
-  it('covers the injected relation in about 68 % of 20 simulated flux-limited catalogs, where the naive fit is biased high at low M*', { timeout: 600_000 }, () => {
+  it('covers the injected relation in about 68 % of 20 simulated flux-limited catalogs, where the naive fit is biased high at low M*', { timeout: 600_000 }, async () => {
     const rng = createRng(2024);
     let inside = 0;
     let trials = 0;
     let naiveExcess = 0;
     const R = 20;
     for (let r = 0; r < R; r++) {
-      const { fit, naive } = simulateAndFit(surveyWith(0), 5000, rng, 400);
+      const { fit, naive } = await simulateAndFit(surveyWith(0), 5000, rng, 400);
       for (const [p, truth] of [[fit.alpha, TRUTH.alpha], [fit.beta, TRUTH.beta], [fit.sigma, TRUTH.sigma]] as const) {
         trials++;
         if (truth >= p.p16 && truth <= p.p84) inside++;
