@@ -11,6 +11,7 @@ import { logLbolFixedBC } from '../bolometric/fixedCorrections.ts';
 import { logSeedMassRequired } from '../growth/salpeterGrowth.ts';
 import { localLogMbh } from '../local/localRelation.ts';
 import { drawMeasuredInto, drawPositiveInto } from './drawPositive.ts';
+import { log10 } from '../math/index.ts';
 
 /** Slots of the chain's outputs. */
 export const OUT = { logMbh: 0, logLbol: 1, logEddRatio: 2, logMseed: 3, deltaLocal: 4 } as const;
@@ -69,7 +70,7 @@ export function sampleInputs(plan: ObjectPlan, settings: DeriveSettings, rng: Rn
   };
   if (plan.mu) {
     draw(plan.mu, b.logMu, true);
-    for (let k = 0; k < b.n; k++) b.logMu[k] = Math.log10(b.logMu[k] as number);
+    for (let k = 0; k < b.n; k++) b.logMu[k] = log10(b.logMu[k] as number);
   } else b.logMu.fill(0);
 
   const dust = plan.dust;
@@ -97,14 +98,14 @@ export function sampleInputs(plan: ObjectPlan, settings: DeriveSettings, rng: Rn
 
   if (plan.mass) {
     draw(plan.mass.fwhm, b.logFwhm, true);
-    for (let k = 0; k < b.n; k++) b.logFwhm[k] = Math.log10(b.logFwhm[k] as number);
+    for (let k = 0; k < b.n; k++) b.logFwhm[k] = log10(b.logFwhm[k] as number);
     if (rng) fillNormal(rng, b.scatter, 0, plan.mass.cal.scatterDex);
     else b.scatter.fill(0);
   }
 
   if (plan.local) {
     draw(plan.local.x, b.x, plan.local.xIsSigma);
-    if (plan.local.xIsSigma) for (let k = 0; k < b.n; k++) b.x[k] = Math.log10(b.x[k] as number);
+    if (plan.local.xIsSigma) for (let k = 0; k < b.n; k++) b.x[k] = log10(b.x[k] as number);
     if (rng) fillNormal(rng, b.localScatter, 0, plan.local.rel.scatterDex);
     else b.localScatter.fill(0);
   }
@@ -135,7 +136,7 @@ export function evaluateChain(plan: ObjectPlan, settings: DeriveSettings, b: Cha
     const L = b.logL[i] as Float64Array;
     const c = s.isFlux ? plan.logFourPiDl2 : 0;
     const dk = 0.4 * s.dustK;
-    for (let k = 0; k < n; k++) L[k] = Math.log10(L[k] as number) + c - (logMu[k] as number) + dk * (ebv[k] as number);
+    for (let k = 0; k < n; k++) L[k] = log10(L[k] as number) + c - (logMu[k] as number) + dk * (ebv[k] as number);
   }
 
   const [logM, logLbol, logEdd, logMseed, delta] = b.out as [Float64Array, Float64Array, Float64Array, Float64Array, Float64Array];
@@ -161,7 +162,7 @@ export function evaluateChain(plan: ObjectPlan, settings: DeriveSettings, b: Cha
     else for (let k = 0; k < n; k++) logLbol[k] = lbolRoute(plan, settings, L[k] as number);
   } else logLbol.fill(NaN);
 
-  const logEddPerMsun = Math.log10(settings.eddingtonPerMsun);
+  const logEddPerMsun = log10(settings.eddingtonPerMsun);
   for (let k = 0; k < n; k++) logEdd[k] = (logLbol[k] as number) - logEddPerMsun - (logM[k] as number);
 
   if (nominal && !Number.isNaN(plan.dtSeedGyr)) {
