@@ -43,8 +43,9 @@ function run(cmd: string[], env: Record<string, string> = {}): void {
   execFileSync(process.execPath, cmd, { cwd: root, stdio: ['ignore', 'ignore', 'inherit'], env: { ...process.env, ...env } });
 }
 
-function build(catalog: string, dist: string): void {
-  run([join(root, 'node_modules/astro/astro.js'), 'build', '--silent'], { CENSUS_CATALOG: catalog, CENSUS_OUT_DIR: dist, CENSUS_BASE: '/' });
+/** Builds the site; `viewer`: one in-browser object page instead of one page per object (faster; the Readings page is the same). */
+function build(catalog: string, dist: string, viewer = false): void {
+  run([join(root, 'node_modules/astro/astro.js'), 'build', '--silent'], { CENSUS_CATALOG: catalog, CENSUS_OUT_DIR: dist, CENSUS_BASE: '/', ...(viewer ? { CENSUS_OBJECT_PAGES: 'viewer' } : {}) });
 }
 
 /** The demo config with an absolute input path, `extra` merged in. */
@@ -84,7 +85,7 @@ async function site(name: 'demo' | 'big'): Promise<string> {
     const config = configWith({ readings: { use: ['standard'] } }, csv, parquet);
     run([join(root, 'bin/dawn-census.js'), 'derive', '-c', config, '--draws', DRAWS, '--quiet']);
   }
-  build(parquet, dist);
+  build(parquet, dist, name === 'big');
   return dist;
 }
 
