@@ -98,7 +98,11 @@ export async function mountReadingsPage(root: HTMLElement): Promise<void> {
   let custom: RederivedRow[] | null = null;
   const deriveSettings = () => placeSettings(JSON.parse(root.dataset.metaSettings ?? '{}') as Record<string, unknown>).settings;
   // Workers started and fed the inputs ahead of the reader's first submit (after the first drawing, or on the form's first focus).
-  const warmUp = () => startPopulation(`${base}${READINGS_INPUTS_PATH}`, { settings: deriveSettings(), reading: builtInReading('small_bolometric')! });
+  const warmUp = () =>
+    startPopulation(`${base}${READINGS_INPUTS_PATH}`, { settings: deriveSettings(), reading: builtInReading('small_bolometric')! }).then((p) => {
+      root.dataset.liveReady = 'true';
+      return p;
+    });
   const customChartRows = (): ChartRow[] => {
     if (!population || !custom) return [];
     const { z, logMstar } = population;

@@ -24,15 +24,17 @@ export interface LoadedPopulation {
 
 const scope = self as unknown as Worker;
 let inputs: ObjectInputs[] = [];
-const WARM_OBJECTS = 48;
+/** Object-draws of the warm-up (about 0.1 s on one core): enough for the first real derivation to run optimised code. */
+const WARM_OBJECT_DRAWS = 200_000;
 
 async function load(req: Extract<RederiveRequest, { type: 'load' }>): Promise<LoadedPopulation> {
   const res = await fetch(req.url);
   if (!res.ok) throw new Error(`the population's inputs (${req.url}) could not be fetched: HTTP ${res.status}`);
   const file = (await res.json()) as ReadingsInputsFile;
   inputs = file.inputs;
-  // A few dozen objects, so the first real derivation runs optimised code (one object leaves it interpreted).
-  if (inputs.length) rederiveBatch(inputs.slice(0, WARM_OBJECTS), req.warm.settings, req.warm.reading);
+  // One object leaves the code interpreted; a few hundred thousand object-draws let the engine optimise it.
+  const warm = Math.max(16, Math.ceil(WARM_OBJECT_DRAWS / Math.max(1, req.warm.settings.draws)));
+  if (inputs.length) rederiveBatch(inputs.slice(0, warm), req.warm.settings, req.warm.reading);
   if (!req.describe) return { n: inputs.length };
   return {
     n: inputs.length,
