@@ -73,7 +73,7 @@ describe('readings', () => {
     }
   });
 
-  it('answers SQL on the readings table with the same numbers as the file, and lists every reading on an object page', async () => {
+  it('lists every reading on an object page', async () => {
     const site = await openSite(browser, inject('siteUrl'));
     try {
       const { page } = site;
@@ -100,22 +100,57 @@ describe('readings', () => {
       );
       const byId = new Map(cli.map((r) => [r.id, r]));
       expect(rows.length).toBeGreaterThan(300);
+      // Every column the browser derives, to the last bit: the core's log, exp and pow are its own
+      // (src/core/math), not the engine's Math functions, which differ between Node 20 and Chromium.
+      const columns = Object.keys(rows[0]!).filter((k) => k !== 'id');
+      // Every column of the readings table but id and reading.
+      expect(columns.sort()).toEqual(Object.keys(cli[0]!).filter((k) => k !== 'id' && k !== 'reading').sort());
+      const differ: string[] = [];
       for (const r of rows) {
-        const c = byId.get(r.id)!;
-        // Flags and Monte Carlo fractions: identical. Nominal values: measured to differ by an ulp or two for a few
-        // objects (log M_BH 7.108400147756116 against 7.108400147756113), like the percentiles below.
-        for (const k of ['p_super_eddington', 'flags']) expect(r[k], `${String(r.id)} ${k}`).toBe(c[k]);
-        for (const k of ['log_mbh', 'log_lbol', 'log_edd_ratio', 'delta_log_mbh_local']) {
-          if (c[k] === null) expect(r[k]).toBeNull();
-          else expect(Math.abs((r[k] as number) - (c[k] as number)), `${String(r.id)} ${k}`).toBeLessThanOrEqual(1e-12);
+        const c = byId.get(r.id);
+        if (!c) {
+          differ.push(`${String(r.id)}: not in the CLI's readings table`);
+          continue;
         }
-        // Percentiles and λ required (exp/log of the growth time): measured to differ in the last bits for a few
-        // objects between Node's and Chromium's V8 math (see README); known gap, not yet traced.
-        for (const k of ['lambda_req_light', 'log_mbh_p16', 'log_mbh_p84', 'log_lbol_p16', 'log_edd_ratio_p84']) {
-          if (c[k] === null) expect(r[k]).toBeNull();
-          else expect(Math.abs((r[k] as number) - (c[k] as number)), `${String(r.id)} ${k}`).toBeLessThanOrEqual(1e-12);
-        }
+        for (const k of columns) if (!Object.is(r[k], c[k])) differ.push(`${String(r.id)} ${k}: browser ${String(r[k])}, CLI ${String(c[k])}`);
       }
+      expect(differ).toEqual([]);
+      expect(site.errors).toEqual([]);
+    } finally {
+      await site.close();
+    }
+  });
+
+  it('redraws the charts, the comparison and the summary when a custom reading is submitted, and its URL restores the form and the view', async () => {
+    const site = await openSite(browser, inject('siteUrl'));
+    try {
+      const { page } = site;
+      await page.goto(new URL('readings/?reading=dense_gas', inject('siteUrl')).href);
+      await waitForReading(page, 'dense_gas');
+      const before = await page.locator('#reading-charts [data-chart="mbh-z"] svg').innerHTML();
+      await page.fill('[data-custom-form] [name="deflation"]', '2.5');
+      await page.fill('[data-custom-form] [name="l5100"]', '');
+      await page.selectOption('[data-custom-form] [name="dust"]', 'none');
+      await page.fill('[data-custom-form] [name="eff"]', '0.2');
+      await page.click('[data-custom-form] button[type="submit"]');
+      await waitForReading(page, 'custom');
+      await page.waitForFunction(() => document.querySelector<HTMLElement>('[data-shift-chart]')?.dataset.pair === 'dense_gas>custom', undefined, { timeout: 60_000 });
+      expect(await page.locator('#reading-charts [data-chart="mbh-z"] svg').innerHTML()).not.toBe(before);
+      await expect(page.locator('[data-reading-row="custom"]').getAttribute('aria-current')).resolves.toBe('true');
+      await expect(page.locator('[data-reading-row="custom"] [data-summary="medianLogMbh"]').textContent()).resolves.toMatch(/^\d+\.\d\d$/);
+      await expect(page.locator('[data-reading-switch]').inputValue()).resolves.toBe('custom');
+      const url = new URL(page.url());
+      expect(Object.fromEntries(url.searchParams)).toEqual({ reading: 'custom', a: 'dense_gas', b: 'custom', deflation: '2.5', dust: 'none', eff: '0.2' });
+      const summary = await page.locator('[data-reading-row="custom"]').textContent();
+
+      const again = await site.page.context().newPage();
+      await again.goto(url.href);
+      await waitForReading(again, 'custom');
+      await again.waitForFunction(() => document.querySelector<HTMLElement>('[data-shift-chart]')?.dataset.pair === 'dense_gas>custom', undefined, { timeout: 60_000 });
+      const field = (name: string) => again.locator(`[data-custom-form] [name="${name}"]`).inputValue();
+      expect([await field('deflation'), await field('l5100'), await field('dust'), await field('eff')]).toEqual(['2.5', '', 'none', '0.2']);
+      await expect(again.locator('[data-reading-row="custom"]').textContent()).resolves.toBe(summary);
+      await expect(again.locator('[data-reading-switch]').inputValue()).resolves.toBe('custom');
       expect(site.errors).toEqual([]);
     } finally {
       await site.close();

@@ -1,4 +1,5 @@
 /** The continuum bands a bolometric correction applies to (λL_λ at 5100, 3000, 1350 Å). */
+import { log10 } from '../math/index.ts';
 export type ContinuumBand = 'l5100' | 'l3000' | 'l1350';
 
 /** A constant bolometric correction L_bol = BC · λL_λ as a cited record. */
@@ -38,5 +39,5 @@ export const BC5100_RICHARDS06: FixedBolometricCorrection = {
  */
 export function logLbolFixedBC(logLamL: number, bc: number): number {
   if (!(bc > 0)) throw new RangeError(`bolometric correction must be > 0, got ${bc}`);
-  return logLamL + Math.log10(bc);
+  return logLamL + log10(bc);
 }

@@ -1,4 +1,5 @@
 import type { ContinuumBand } from './fixedCorrections.ts';
+import { log10 } from '../math/index.ts';
 
 /** A Netzer 2019 luminosity-dependent correction k = c (λL_λ / 1e42)^d as a record. */
 export interface Netzer19Correction {
@@ -36,5 +37,5 @@ export const NETZER19_LOG_PIVOT = 42;
  */
 export function logLbolNetzer19(band: ContinuumBand, logLamL: number): number {
   const k = NETZER19[band];
-  return logLamL + Math.log10(k.c) + k.d * (logLamL - NETZER19_LOG_PIVOT);
+  return logLamL + log10(k.c) + k.d * (logLamL - NETZER19_LOG_PIVOT);
 }

@@ -2,6 +2,7 @@ import { cubicHermite, cubicHermiteSlope } from './cubicHermite.ts';
 import type { CosmologyTables } from './cosmologyTables.ts';
 import type { Expansion } from './expansion.ts';
 import { ageInHubbleTimes } from './hubbleIntegrals.ts';
+import { exp, expm1, log } from '../math/index.ts';
 
 /**
  * Safeguarded Newton for a decreasing g on [lo, hi] with g(lo) ≥ 0 ≥ g(hi): Newton steps,
@@ -54,8 +55,8 @@ export function uAtLnAge(t: CosmologyTables, expansion: Expansion, lnAge: number
   }
   // Beyond the table: ln(age) falls with slope between −1.5 (matter) and −2 (radiation) in u.
   const g = (u: number) => {
-    const age = ageInHubbleTimes(expansion, Math.exp(-u));
-    return { v: Math.log(age) - lnAge, dv: -1 / (expansion.efunc(Math.expm1(u)) * age) };
+    const age = ageInHubbleTimes(expansion, exp(-u));
+    return { v: log(age) - lnAge, dv: -1 / (expansion.efunc(expm1(u)) * age) };
   };
   const excess = (y[t.n] as number) - lnAge;
   let hi = t.uMax + excess / 1.4;

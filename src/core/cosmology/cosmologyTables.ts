@@ -2,6 +2,7 @@ import type { Expansion } from './expansion.ts';
 import { cubicHermite } from './cubicHermite.ts';
 import { kronrod15 } from './gaussKronrod.ts';
 import { ageInHubbleTimes } from './hubbleIntegrals.ts';
+import { exp, expm1, log, log1p } from '../math/index.ts';
 
 /**
  * Grid of the distance and age tables: uniform in u = ln(1+z) from z = 0 to about `TABLE_Z_MAX`,
@@ -37,7 +38,7 @@ export interface CosmologyTables {
  */
 export function buildCosmologyTables(expansion: Expansion, name: string): CosmologyTables {
   const du = TABLE_DU;
-  const n = Math.ceil(Math.log1p(TABLE_Z_MAX) / du);
+  const n = Math.ceil(log1p(TABLE_Z_MAX) / du);
   const uMax = n * du;
   const comoving = new Float64Array(n + 1);
   const comovingSlope = new Float64Array(n + 1);
@@ -46,27 +47,27 @@ export function buildCosmologyTables(expansion: Expansion, name: string): Cosmol
   const lnAge = new Float64Array(n + 1);
   const lnAgeSlope = new Float64Array(n + 1);
   const invE = (u: number): number => {
-    const e = expansion.efunc(Math.expm1(u));
-    if (!(e > 0)) throw new RangeError(`cosmology "${name}": E(z) is not positive at z = ${Math.expm1(u)} (no big bang)`);
+    const e = expansion.efunc(expm1(u));
+    if (!(e > 0)) throw new RangeError(`cosmology "${name}": E(z) is not positive at z = ${expm1(u)} (no big bang)`);
     return 1 / e;
   };
   const lookbackStep = new Float64Array(n);
   for (let i = 0; i < n; i++) {
     const u0 = i * du;
     const u1 = u0 + du;
-    comoving[i + 1] = (comoving[i] as number) + kronrod15((u) => Math.exp(u) * invE(u), u0, u1).value;
+    comoving[i + 1] = (comoving[i] as number) + kronrod15((u) => exp(u) * invE(u), u0, u1).value;
     const step = kronrod15(invE, u0, u1).value;
     lookbackStep[i] = step;
     lookback[i + 1] = (lookback[i] as number) + step;
   }
-  let age = ageInHubbleTimes(expansion, Math.exp(-uMax));
+  let age = ageInHubbleTimes(expansion, exp(-uMax));
   for (let i = n; i >= 0; i--) {
     if (i < n) age += lookbackStep[i] as number;
     const u = i * du;
     const ie = invE(u);
-    comovingSlope[i] = Math.exp(u) * ie;
+    comovingSlope[i] = exp(u) * ie;
     lookbackSlope[i] = ie;
-    lnAge[i] = Math.log(age);
+    lnAge[i] = log(age);
     lnAgeSlope[i] = -ie / age;
   }
   return { du, n, uMax, comoving, comovingSlope, lookback, lookbackSlope, lnAge, lnAgeSlope };

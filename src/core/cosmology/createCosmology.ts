@@ -11,6 +11,7 @@ import {
   comovingInHubbleDistances,
   lookbackInHubbleTimes,
 } from './hubbleIntegrals.ts';
+import { exp, expm1, log, log1p } from '../math/index.ts';
 
 function checkZ(name: string, z: number): void {
   if (!(z > -1)) throw new RangeError(`cosmology "${name}": redshift must be a number > -1, got ${z}`);
@@ -37,9 +38,9 @@ export function createCosmology(params: CosmologyParams): Cosmology {
     checkZ(name, z);
     const t = tab();
     if (z < 0) return comovingInHubbleDistances(expansion, z);
-    const u = Math.log1p(z);
+    const u = log1p(z);
     if (u <= t.uMax) return interpolateTable(t, t.comoving, t.comovingSlope, u);
-    return (t.comoving[t.n] as number) + comovingBetweenInHubbleDistances(expansion, 1 / (1 + z), Math.exp(-t.uMax));
+    return (t.comoving[t.n] as number) + comovingBetweenInHubbleDistances(expansion, 1 / (1 + z), exp(-t.uMax));
   };
   const transverseHubble = (z: number): number => {
     const dc = comovingHubble(z);
@@ -51,9 +52,9 @@ export function createCosmology(params: CosmologyParams): Cosmology {
     checkZ(name, z);
     const t = tab();
     if (z === Infinity) return 0;
-    if (z < 0) return Math.exp(t.lnAge[0] as number) - lookbackInHubbleTimes(expansion, z);
-    const u = Math.log1p(z);
-    if (u <= t.uMax) return Math.exp(interpolateTable(t, t.lnAge, t.lnAgeSlope, u));
+    if (z < 0) return exp(t.lnAge[0] as number) - lookbackInHubbleTimes(expansion, z);
+    const u = log1p(z);
+    if (u <= t.uMax) return exp(interpolateTable(t, t.lnAge, t.lnAgeSlope, u));
     return ageInHubbleTimes(expansion, 1 / (1 + z));
   };
 
@@ -73,22 +74,22 @@ export function createCosmology(params: CosmologyParams): Cosmology {
     lookbackTimeGyr: (z) => {
       checkZ(name, z);
       const t = tab();
-      const u = Math.log1p(z);
+      const u = log1p(z);
       // The lookback table avoids age(0) − age(z), which cancels at small z.
       if (z >= 0 && u <= t.uMax) return hubbleTimeGyr * interpolateTable(t, t.lookback, t.lookbackSlope, u);
       if (z < 0) return hubbleTimeGyr * lookbackInHubbleTimes(expansion, z);
-      return hubbleTimeGyr * (Math.exp(t.lnAge[0] as number) - ageHubble(z));
+      return hubbleTimeGyr * (exp(t.lnAge[0] as number) - ageHubble(z));
     },
     ageGyr: (z) => hubbleTimeGyr * ageHubble(z),
     redshiftAtAgeGyr: (tGyr) => {
       const t = tab();
-      const age0 = hubbleTimeGyr * Math.exp(t.lnAge[0] as number);
+      const age0 = hubbleTimeGyr * exp(t.lnAge[0] as number);
       if (!(tGyr > 0 && tGyr <= age0 * (1 + 1e-14))) {
         throw new RangeError(`cosmology "${name}": age ${tGyr} Gyr is outside (0, ${age0.toFixed(5)}] Gyr (big bang to today)`);
       }
       // Today exactly (or within rounding of it): z = 0 without a root search.
       if (tGyr >= age0) return 0;
-      return Math.expm1(uAtLnAge(t, expansion, Math.log(tGyr / hubbleTimeGyr)));
+      return expm1(uAtLnAge(t, expansion, log(tGyr / hubbleTimeGyr)));
     },
     differentialComovingVolumeMpc3Sr: (z) => {
       const dm = hubbleDistanceMpc * transverseHubble(z);

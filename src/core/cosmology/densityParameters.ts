@@ -40,7 +40,8 @@ export function densityParameters(params: CosmologyParams): DensityParameters {
 
   const h0PerS = H0 / MPC_KM;
   const rhoCrit = (3 * h0PerS * h0PerS) / (8 * Math.PI * G_CGS);
-  const Ogamma0 = ((4 * SIGMA_SB_CGS) / C_CM_S ** 3) * Tcmb0 ** 4 / rhoCrit;
+  // Integer powers by multiplication: Math.pow and ** differ in the last bit between engines (src/core/math/pow.ts).
+  const Ogamma0 = ((4 * SIGMA_SB_CGS) / (C_CM_S * C_CM_S * C_CM_S)) * (Tcmb0 * Tcmb0 * Tcmb0 * Tcmb0) / rhoCrit;
 
   let massiveNeutrinos: NeutrinoContent | null = null;
   const masses = params.mNuEv ?? [];

@@ -1,5 +1,6 @@
 import type { Expansion } from './expansion.ts';
 import { integrateAdaptive } from './gaussKronrod.ts';
+import { exp, expm1, log1p } from '../math/index.ts';
 
 // Direct integrals in units of the Hubble time t_H = 1/H0 and Hubble distance D_H = c/H0.
 // High-redshift ones use s = √a: with a⁴E² = P(a) finite at a = 0, dt = 2s³ ds/√P(s²) and
@@ -20,10 +21,10 @@ export function comovingBetweenInHubbleDistances(expansion: Expansion, aLo: numb
 
 /** Lookback time to redshift z (any z > −1; negative for z < 0), in Hubble times: ∫_0^ln(1+z) du/E. */
 export function lookbackInHubbleTimes(expansion: Expansion, z: number): number {
-  return integrateAdaptive((u) => 1 / expansion.efunc(Math.expm1(u)), 0, Math.log1p(z));
+  return integrateAdaptive((u) => 1 / expansion.efunc(expm1(u)), 0, log1p(z));
 }
 
 /** Line-of-sight comoving distance to z (any z > −1), in Hubble distances: ∫_0^ln(1+z) e^u du/E. */
 export function comovingInHubbleDistances(expansion: Expansion, z: number): number {
-  return integrateAdaptive((u) => Math.exp(u) / expansion.efunc(Math.expm1(u)), 0, Math.log1p(z));
+  return integrateAdaptive((u) => exp(u) / expansion.efunc(expm1(u)), 0, log1p(z));
 }

@@ -2,6 +2,7 @@
  * Fitting function for the energy density of massive neutrinos relative to massless ones,
  * f(y) = (1 + (k y)^p)^(1/p), with y = m_ν c² / (k_B T_ν) scaled by a = 1/(1+z).
  */
+import { pow } from '../math/index.ts';
 export const KOMATSU11_NEUTRINO_FIT = {
   p: 1.83,
   /** 1/p as written in astropy. */
@@ -32,6 +33,6 @@ export interface NeutrinoContent {
 export function neutrinoOverPhotonDensity(nu: NeutrinoContent, a: number): number {
   const { p, invP, k, perSpeciesOverPhotons } = KOMATSU11_NEUTRINO_FIT;
   let sum = nu.nMassless;
-  for (const y of nu.nuY) sum += Math.pow(1 + Math.pow(k * y * a, p), invP);
+  for (const y of nu.nuY) sum += pow(1 + pow(k * y * a, p), invP);
   return perSpeciesOverPhotons * nu.neffPerSpecies * sum;
 }

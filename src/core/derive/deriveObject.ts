@@ -9,6 +9,7 @@ import { inLocalRelationRange } from '../local/localRelation.ts';
 import { lambdaRequired, logSeedMassRequired } from '../growth/salpeterGrowth.ts';
 import { planObject, type LumSource } from './objectPlan.ts';
 import { createBuffers, evaluateChain, sampleInputs, OUT, type ChainBuffers } from './evaluateChain.ts';
+import { log10 } from '../math/index.ts';
 
 /** Working arrays, reused across objects: one sample for the nominal values, `draws` for the Monte Carlo. */
 const nominalBuffers = createBuffers(1);
@@ -158,7 +159,7 @@ export function deriveObject(inputs: ObjectInputs, settings: DeriveSettings, ran
 
   const seedOk = logMbh !== null && !Number.isNaN(plan.dtSeedGyr);
   const lamReq = (seedMsun: number): number | null =>
-    seedOk ? finiteOrNull(lambdaRequired(logMbh as number, Math.log10(seedMsun), plan.dtSeedGyr, settings.efficiency, settings.dutyCycle)) : null;
+    seedOk ? finiteOrNull(lambdaRequired(logMbh as number, log10(seedMsun), plan.dtSeedGyr, settings.efficiency, settings.dutyCycle)) : null;
   let localOffsetSigma: number | null = null;
   if (delta !== null && plan.local) {
     // Measurement half-width of the offset: from the draws, or for a bound (no interval) none.

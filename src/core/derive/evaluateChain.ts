@@ -11,6 +11,7 @@ import { logLbolFixedBC } from '../bolometric/fixedCorrections.ts';
 import { logSeedMassRequired } from '../growth/salpeterGrowth.ts';
 import { localLogMbh } from '../local/localRelation.ts';
 import { drawFromBank } from './drawPositive.ts';
+import { log10 } from '../math/index.ts';
 
 /** Slots of the chain's outputs. */
 export const OUT = { logMbh: 0, logLbol: 1, logEddRatio: 2, logMseed: 3, deltaLocal: 4 } as const;
@@ -70,8 +71,8 @@ export function sampleInputs(plan: ObjectPlan, settings: DeriveSettings, bank: D
   };
   if (plan.mu && !isExact(plan.mu)) {
     draw(DRAW_ROLES.mu, plan.mu, b.logMu, true);
-    for (let k = 0; k < b.n; k++) b.logMu[k] = Math.log10(b.logMu[k] as number);
-  } else b.logMu.fill(plan.mu ? Math.log10(plan.mu.value) : 0);
+    for (let k = 0; k < b.n; k++) b.logMu[k] = log10(b.logMu[k] as number);
+  } else b.logMu.fill(plan.mu ? log10(plan.mu.value) : 0);
 
   const dust = plan.dust;
   if (dust.mode === 'av') {
@@ -98,14 +99,14 @@ export function sampleInputs(plan: ObjectPlan, settings: DeriveSettings, bank: D
 
   if (plan.mass) {
     draw(DRAW_ROLES.width[plan.mass.line], plan.mass.fwhm, b.logFwhm, true);
-    for (let k = 0; k < b.n; k++) b.logFwhm[k] = Math.log10(b.logFwhm[k] as number);
+    for (let k = 0; k < b.n; k++) b.logFwhm[k] = log10(b.logFwhm[k] as number);
     if (bank) scaled(bank.normals(DRAW_ROLES.massScatter), plan.mass.cal.scatterDex, b.scatter);
     else b.scatter.fill(0);
   }
 
   if (plan.local) {
     draw(DRAW_ROLES.host, plan.local.x, b.x, plan.local.xIsSigma);
-    if (plan.local.xIsSigma) for (let k = 0; k < b.n; k++) b.x[k] = Math.log10(b.x[k] as number);
+    if (plan.local.xIsSigma) for (let k = 0; k < b.n; k++) b.x[k] = log10(b.x[k] as number);
     if (bank) scaled(bank.normals(DRAW_ROLES.localScatter), plan.local.rel.scatterDex, b.localScatter);
     else b.localScatter.fill(0);
   }
@@ -146,7 +147,7 @@ export function evaluateChain(plan: ObjectPlan, settings: DeriveSettings, b: Cha
     const L = b.logL[i] as Float64Array;
     const c = s.isFlux ? plan.logFourPiDl2 : 0;
     const dk = 0.4 * s.dustK;
-    for (let k = 0; k < n; k++) L[k] = Math.log10(L[k] as number) + c - (logMu[k] as number) + dk * (ebv[k] as number);
+    for (let k = 0; k < n; k++) L[k] = log10(L[k] as number) + c - (logMu[k] as number) + dk * (ebv[k] as number);
   }
 
   const [logM, logLbol, logEdd, logMseed, delta] = b.out as [Float64Array, Float64Array, Float64Array, Float64Array, Float64Array];
@@ -172,7 +173,7 @@ export function evaluateChain(plan: ObjectPlan, settings: DeriveSettings, b: Cha
     else for (let k = 0; k < n; k++) logLbol[k] = lbolRoute(plan, settings, L[k] as number);
   } else logLbol.fill(NaN);
 
-  const logEddPerMsun = Math.log10(settings.eddingtonPerMsun);
+  const logEddPerMsun = log10(settings.eddingtonPerMsun);
   for (let k = 0; k < n; k++) logEdd[k] = (logLbol[k] as number) - logEddPerMsun - (logM[k] as number);
 
   if (nominal && !Number.isNaN(plan.dtSeedGyr)) {

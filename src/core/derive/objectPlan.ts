@@ -11,6 +11,7 @@ import type { ContinuumBolometricMethod } from '../bolometric/logLbolFromContinu
 import { getLocalRelation } from '../local/localRelations.ts';
 import type { LocalRelation } from '../local/localRelation.ts';
 import { snr } from './drawPositive.ts';
+import { log10 } from '../math/index.ts';
 
 /**
  * A copy of a measurement with both errors filled in; an error given on one side only is
@@ -119,7 +120,7 @@ export function planObject(inputs: ObjectInputs, settings: DeriveSettings): Obje
   const dtSeedGyr = z < settings.zSeed ? ageGyr - cosmo.ageGyr(settings.zSeed) : NaN;
   if (!(z < settings.zSeed)) flags.add('z_above_seed_redshift');
   const dlCm = dlMpc * MPC_CM;
-  const logFourPiDl2 = Math.log10(4 * Math.PI) + 2 * Math.log10(dlCm);
+  const logFourPiDl2 = log10(4 * Math.PI) + 2 * log10(dlCm);
 
   const mu = inputs.mu ? spec(inputs.mu) : null;
   if (mu && mu.value !== 1) flags.add('lensed');

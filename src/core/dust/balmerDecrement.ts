@@ -1,6 +1,7 @@
 import type { DustCurveId } from '../derive/types.ts';
 import { getDustCurve, kLambda } from './kLambda.ts';
 import { LINE_WAVELENGTHS } from './lineWavelengths.ts';
+import { log10 } from '../math/index.ts';
 
 /** An intrinsic Hα/Hβ ratio as a cited record. */
 export interface IntrinsicBalmerRatio {
@@ -38,7 +39,7 @@ export function ebvFromBalmerDecrement(
   if (Number.isNaN(observedRatio)) return NaN;
   if (observedRatio <= intrinsic) return 0;
   const dk = kLambda(curve, LINE_WAVELENGTHS.hbeta.vacuumAngstrom) - kLambda(curve, LINE_WAVELENGTHS.halpha.vacuumAngstrom);
-  return (2.5 / dk) * Math.log10(observedRatio / intrinsic);
+  return (2.5 / dk) * log10(observedRatio / intrinsic);
 }
 
 /**

@@ -1,4 +1,5 @@
 import { assertInCurveRange, type DustCurveInfo } from './dustCurve.ts';
+import { pow } from '../math/index.ts';
 
 /**
  * The Cardelli, Clayton & Mathis 1989 Milky Way extinction law as data:
@@ -67,7 +68,7 @@ function poly(coefs: readonly number[], u: number): number {
 export function ccm89AB(x: number): { a: number; b: number } {
   const c = CCM89;
   if (x < c.ir.xRange[1]) {
-    const p = x ** c.ir.power;
+    const p = pow(x, c.ir.power);
     return { a: c.ir.aScale * p, b: c.ir.bScale * p };
   }
   if (x < c.optical.xRange[1]) {

@@ -75,6 +75,6 @@ export function evalSpline(s: CubicSpline, t: number): number {
   const u = (x[i + 1]! - t) / h;
   const v = (t - x[i]!) / h;
   return (
-    u * y[i]! + v * y[i + 1]! + ((u ** 3 - u) * m[i]! + (v ** 3 - v) * m[i + 1]!) * (h * h) / 6
+    u * y[i]! + v * y[i + 1]! + ((u * u * u - u) * m[i]! + (v * v * v - v) * m[i + 1]!) * (h * h) / 6
   );
 }

@@ -1,5 +1,6 @@
 import type { LocalRelationId } from '../derive/types.ts';
 import type { LocalRelation } from './localRelation.ts';
+import { log10 } from '../math/index.ts';
 
 const RV15 = 'Reines & Volonteri 2015, ApJ 813, 82';
 const KH13 = 'Kormendy & Ho 2013, ARA&A 51, 511';
@@ -30,7 +31,7 @@ export const LOCAL_RELATIONS: Readonly<Record<LocalRelationId, LocalRelation>> =
     id: 'kh13_mbulge', label: 'Kormendy & Ho 2013, M_BH–M_bulge', x: 'logMbulge',
     // Eq. 10 is printed as M/1e9 = 0.49 (M_bulge/1e11)^1.16; the zero point is its log.
     // Slope: 1.16 here; some transcriptions give 1.17 (published-checks.md): confirm against the paper.
-    a: 9 + Math.log10(0.49), b: 1.16, pivot: 11,
+    a: 9 + log10(0.49), b: 1.16, pivot: 11,
     scatterDex: 0.29, // KH13 quote 0.28–0.29 dex intrinsic scatter (published-checks.md)
     scatterProvenance: 'published',
     reference: `${KH13}, eq. 10`,
@@ -41,12 +42,12 @@ export const LOCAL_RELATIONS: Readonly<Record<LocalRelationId, LocalRelation>> =
   kh13_sigma: {
     id: 'kh13_sigma', label: 'Kormendy & Ho 2013, M_BH–σ*', x: 'logSigma',
     // Eq. 7 is printed as M/1e9 = 0.309 (σ/200 km/s)^4.38.
-    a: 9 + Math.log10(0.309), b: 4.38, pivot: Math.log10(200),
+    a: 9 + log10(0.309), b: 4.38, pivot: log10(200),
     scatterDex: 0.29,
     scatterProvenance: 'published',
     reference: `${KH13}, eq. 7`,
     massScale: 'dynamical',
-    validity: { x: [Math.log10(70), Math.log10(400)] },
+    validity: { x: [log10(70), log10(400)] },
   },
 };
 

@@ -2,6 +2,7 @@
 // "ZIGNOR" arrangement of Doornik 2005 (layer index and abscissa from disjoint random bits),
 // written from the published descriptions.
 import type { Rng } from './rng.ts';
+import { exp, log } from '../math/index.ts';
 
 /** Layers, right edge of the base layer's curve part, and the common area of every layer (Marsaglia & Tsang 2000). */
 export const ZIGGURAT_128 = { layers: 128, r: 3.442619855899, v: 9.91256303526217e-3 } as const;
@@ -13,12 +14,12 @@ const X = new Float64Array(N + 1);
 /** RATIO[i] = X[i+1]/X[i]: below it, a point of layer i is under the curve for sure. */
 const RATIO = new Float64Array(N);
 {
-  let f = Math.exp(-0.5 * R * R);
+  let f = exp(-0.5 * R * R);
   X[0] = ZIGGURAT_128.v / f;
   X[1] = R;
   for (let i = 2; i < N; i++) {
-    X[i] = Math.sqrt(-2 * Math.log(ZIGGURAT_128.v / (X[i - 1] as number) + f));
-    f = Math.exp(-0.5 * (X[i] as number) ** 2);
+    X[i] = Math.sqrt(-2 * log(ZIGGURAT_128.v / (X[i - 1] as number) + f));
+    f = exp(-0.5 * (X[i] as number) ** 2);
   }
   X[N] = 0;
   for (let i = 0; i < N; i++) RATIO[i] = (X[i + 1] as number) / (X[i] as number);
@@ -30,8 +31,8 @@ function tail(rng: Rng, negative: boolean): number {
   let y: number;
   do {
     // 1 − next() lies in (0, 1]: no log(0).
-    x = Math.log(1 - rng.next()) / R;
-    y = Math.log(1 - rng.next());
+    x = log(1 - rng.next()) / R;
+    y = log(1 - rng.next());
   } while (-2 * y < x * x);
   return negative ? x - R : R - x;
 }
@@ -53,8 +54,8 @@ export function standardNormal(rng: Rng): number {
     const x2 = x * x;
     const xi = X[i] as number;
     const xi1 = X[i + 1] as number;
-    const f0 = Math.exp(-0.5 * (xi * xi - x2));
-    const f1 = Math.exp(-0.5 * (xi1 * xi1 - x2));
+    const f0 = exp(-0.5 * (xi * xi - x2));
+    const f1 = exp(-0.5 * (xi1 * xi1 - x2));
     if (f1 + rng.next() * (f0 - f1) < 1) return x;
   }
 }

@@ -1,5 +1,6 @@
 import type { LineId } from '../derive/types.ts';
 import type { VirialCalibration } from './virialCalibration.ts';
+import { log10 } from '../math/index.ts';
 
 /** Ids of the virial calibrations this project ships. */
 export type VirialCalibrationId = 'gh05_halpha' | 'rv15_halpha' | 'vp06_hbeta' | 'vp06_hbeta_line' | 'vo09_mgii' | 's11_mgii' | 'vp06_civ';
@@ -14,7 +15,7 @@ export const CALIBRATIONS: Readonly<Record<VirialCalibrationId, VirialCalibratio
   gh05_halpha: {
     id: 'gh05_halpha', line: 'halpha', label: 'Greene & Ho 2005, Hα',
     // Eq. 6 is printed as M = 2.0e6 (L_Hα/1e42)^0.55 (FWHM/1e3)^2.06; the zero point is its log.
-    logEps: 0, a: Math.log10(2.0e6), b: 0.55, c: 2.06, luminosity: 'line', logLpivot: 42,
+    logEps: 0, a: log10(2.0e6), b: 0.55, c: 2.06, luminosity: 'line', logLpivot: 42,
     scatterDex: 0.4, // common practice for single-epoch masses; GH05 quote no intrinsic scatter for eq. 6
     scatterProvenance: 'common practice',
     reference: 'Greene & Ho 2005, ApJ 630, 122, eq. 6',
@@ -24,7 +25,7 @@ export const CALIBRATIONS: Readonly<Record<VirialCalibrationId, VirialCalibratio
   },
   rv15_halpha: {
     id: 'rv15_halpha', line: 'halpha', label: 'Reines & Volonteri 2015, Hα (ε = 1.075)',
-    logEps: Math.log10(1.075), a: 6.57, b: 0.47, c: 2.06, luminosity: 'line', logLpivot: 42,
+    logEps: log10(1.075), a: 6.57, b: 0.47, c: 2.06, luminosity: 'line', logLpivot: 42,
     scatterDex: 0.4, // common practice; RV15 discuss ~0.3–0.5 dex systematics (from memory)
     scatterProvenance: 'common practice',
     reference: 'Reines & Volonteri 2015, ApJ 813, 82, eq. 5 (ε = 1.075)',

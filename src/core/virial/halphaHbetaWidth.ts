@@ -1,4 +1,5 @@
 import { powerLawLogX, powerLawLogY, type PowerLawRelation } from './powerLawRelation.ts';
+import { log10, pow } from '../math/index.ts';
 
 /** Greene & Ho 2005 (ApJ 630, 122) eq. 3: FWHM_Hβ = 1.07e3 (FWHM_Hα/1e3)^1.03 km s⁻¹. */
 export const GH05_FWHM_HBETA_HALPHA: PowerLawRelation = {
@@ -17,7 +18,7 @@ export const GH05_FWHM_HBETA_HALPHA: PowerLawRelation = {
  * @param fwhmHalphaKms - broad Hα FWHM, km s⁻¹ (> 0).
  */
 export function fwhmHbetaFromHalphaKms(fwhmHalphaKms: number): number {
-  return 10 ** powerLawLogY(GH05_FWHM_HBETA_HALPHA, Math.log10(fwhmHalphaKms));
+  return pow(10, powerLawLogY(GH05_FWHM_HBETA_HALPHA, log10(fwhmHalphaKms)));
 }
 
 /**
@@ -25,5 +26,5 @@ export function fwhmHbetaFromHalphaKms(fwhmHalphaKms: number): number {
  * @param fwhmHbetaKms - broad Hβ FWHM, km s⁻¹ (> 0).
  */
 export function fwhmHalphaFromHbetaKms(fwhmHbetaKms: number): number {
-  return 10 ** powerLawLogX(GH05_FWHM_HBETA_HALPHA, Math.log10(fwhmHbetaKms));
+  return pow(10, powerLawLogX(GH05_FWHM_HBETA_HALPHA, log10(fwhmHbetaKms)));
 }

@@ -1,4 +1,5 @@
 import type { ValueProvenance } from './virialCalibration.ts';
+import { log10 } from '../math/index.ts';
 
 /**
  * An empirical power law y = norm · (x / pivot)^slope as data, evaluated in logs:
@@ -23,7 +24,7 @@ export interface PowerLawRelation {
  * @param logX - log10 of x in the relation's units.
  */
 export function powerLawLogY(rel: PowerLawRelation, logX: number): number {
-  return Math.log10(rel.norm) + rel.slope * (logX - Math.log10(rel.pivot));
+  return log10(rel.norm) + rel.slope * (logX - log10(rel.pivot));
 }
 
 /**
@@ -33,5 +34,5 @@ export function powerLawLogY(rel: PowerLawRelation, logX: number): number {
  * @param logY - log10 of y in the relation's units.
  */
 export function powerLawLogX(rel: PowerLawRelation, logY: number): number {
-  return Math.log10(rel.pivot) + (logY - Math.log10(rel.norm)) / rel.slope;
+  return log10(rel.pivot) + (logY - log10(rel.norm)) / rel.slope;
 }

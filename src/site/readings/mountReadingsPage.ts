@@ -6,20 +6,24 @@
 import { formatFixed } from '../text/formatValue.ts';
 import { connection, CensusDbError } from '../db/duckdb.ts';
 import { mountChart } from '../charts/mountChart.ts';
-import { drawPopulation, NARROW_ABOVE } from '../population/populationCharts.ts';
+import { drawChart, drawPopulation, nextPaint, NARROW_ABOVE } from '../population/populationCharts.ts';
 import { objectHrefHere } from '../objectLink.ts';
 import { rowsUnderReading, shiftRows } from './readingRows.ts';
 import { readingShiftChart } from './shiftChart.ts';
 import { parseReadingsState, readingsStateQuery, type CustomReadingParams, type ReadingsPageState } from './readingsUrl.ts';
 import { CUSTOM_READING_ID, customReading } from './customReading.ts';
-import { populationInputs, type PopulationObject } from './populationInputs.ts';
-import { rederivePopulation } from './rederivePopulation.ts';
+import { startPopulation, type Population } from './rederivePopulation.ts';
+import { READINGS_INPUTS_PATH } from './readingsInputsFile.ts';
+import { builtInReading } from '../../core/readings/builtInReadings.ts';
 import type { RederivedRow } from './rederiveBatch.ts';
 import { summarizeRows } from './summarizeRows.ts';
 import { placeSettings } from '../place/placeSettings.ts';
 import type { ChartRow } from '../population/populationCharts.ts';
 import type { ShiftRow } from './shiftChart.ts';
 import type { ReadingSummary } from '../../core/readings/readingSummary.ts';
+
+/** Up to this many objects the workers are started and fed when the page has drawn, not at the form's first focus (a few MB of inputs). */
+const WARM_ON_LOAD_MAX = 20_000;
 
 interface Option {
   id: string;
@@ -69,9 +73,12 @@ export async function mountReadingsPage(root: HTMLElement): Promise<void> {
     charts.dataset.reading = '';
     markSummary();
     if (status) status.textContent = `Drawing the population under “${label(state.reading)}”…`;
-    const rows = state.reading === CUSTOM_READING_ID ? customChartRows() : await rowsUnderReading(state.reading, have, large);
+    const isCustom = state.reading === CUSTOM_READING_ID;
+    const rows = isCustom ? customChartRows() : await rowsUnderReading(state.reading, have, large);
     if (ticket !== drawing) return;
-    await drawPopulation(charts, rows, { base, settings });
+    // The reader's reading is redrawn in one go (one layout and paint for all charts); a published one chart by chart.
+    if (isCustom) for (const mount of charts.querySelectorAll<HTMLElement>('[data-chart]')) drawChart(mount, rows, { base, settings });
+    else await drawPopulation(charts, rows, { base, settings });
     if (ticket !== drawing) return;
     charts.dataset.reading = state.reading;
     if (status) status.textContent = `${rows.length} objects under “${label(state.reading)}”.`;
@@ -90,20 +97,31 @@ export async function mountReadingsPage(root: HTMLElement): Promise<void> {
   // The reader's own reading: derived in web workers from the catalog's inputs.
   const form = root.querySelector<HTMLFormElement>('[data-custom-form]');
   const customStatus = root.querySelector<HTMLElement>('[data-custom-status]');
-  let population: PopulationObject[] | null = null;
+  let population: Population | null = null;
   let custom: RederivedRow[] | null = null;
-  const customById = () => new Map((custom ?? []).map((r) => [r.id, r]));
-  const customChartRows = (): ChartRow[] => {
-    const byId = customById();
-    return (population ?? []).flatMap((o) => {
-      const r = byId.get(o.inputs.id);
-      return r ? [{ ...r, z: o.z, log_mstar: o.logMstar } as ChartRow] : [];
+  const deriveSettings = () => placeSettings(JSON.parse(root.dataset.metaSettings ?? '{}') as Record<string, unknown>).settings;
+  // Workers started and fed the inputs ahead of the reader's first submit (after the first drawing, or on the form's first focus).
+  const warmUp = () =>
+    startPopulation(`${base}${READINGS_INPUTS_PATH}`, { settings: deriveSettings(), reading: builtInReading('small_bolometric')! }).then((p) => {
+      root.dataset.liveReady = 'true';
+      return p;
     });
+  const customChartRows = (): ChartRow[] => {
+    if (!population || !custom) return [];
+    const { z, logMstar } = population;
+    return custom.map((r, i) => ({ ...r, z: z[i], log_mstar: Number.isNaN(logMstar[i]) ? null : logMstar[i] }) as ChartRow);
   };
+  // A published reading's values, queried once per reading (a reader may submit many custom readings).
+  const published = new Map<string, Promise<Map<string, { mbh: number | null; edd: number | null }>>>();
   const valuesOf = async (reading: string): Promise<Map<string, { mbh: number | null; edd: number | null }>> => {
     if (reading === CUSTOM_READING_ID) return new Map((custom ?? []).map((r) => [r.id, { mbh: r.log_mbh, edd: r.log_edd_ratio }]));
-    const rows = await shiftRows(reading, reading, large);
-    return new Map(rows.map((r) => [r.id, { mbh: r.mbhA, edd: r.eddA }]));
+    let values = published.get(reading);
+    if (!values) {
+      values = shiftRows(reading, reading, large).then((rows) => new Map(rows.map((r) => [r.id, { mbh: r.mbhA, edd: r.eddA }])));
+      published.set(reading, values);
+      values.catch(() => published.delete(reading));
+    }
+    return values;
   };
   const customShift = async (a: string, b: string): Promise<ShiftRow[]> => {
     const [va, vb] = await Promise.all([valuesOf(a), valuesOf(b)]);
@@ -142,7 +160,9 @@ export async function mountReadingsPage(root: HTMLElement): Promise<void> {
     tr.append(cell(s.medianLogMbh === null ? '—' : formatFixed(s.medianLogMbh, 2), 'medianLogMbh'), cell(s.medianLogEddRatio === null ? '—' : formatFixed(s.medianLogEddRatio, 2), 'medianLogEddRatio'));
     table.append(tr);
   };
-  const deriveCustom = async (params: CustomReadingParams) => {
+  /** Derives the reader's reading; `follow`: the charts and the comparison switch to it (from the reading shown until now). */
+  const deriveCustom = async (params: CustomReadingParams, follow: boolean) => {
+    performance.mark('census:custom:start');
     let reading;
     try {
       reading = customReading(params);
@@ -150,10 +170,17 @@ export async function mountReadingsPage(root: HTMLElement): Promise<void> {
       if (customStatus) customStatus.textContent = err instanceof Error ? err.message : String(err);
       return;
     }
+    if (follow) {
+      if (state.reading !== CUSTOM_READING_ID) state.a = state.reading;
+      state.reading = CUSTOM_READING_ID;
+      state.b = CUSTOM_READING_ID;
+    }
     if (customStatus) customStatus.textContent = 'Deriving the population under your reading…';
-    population ??= await populationInputs(have);
-    const { settings: deriveSettings } = placeSettings(JSON.parse(root.dataset.metaSettings ?? '{}') as Record<string, unknown>);
-    const { rows, ms } = await rederivePopulation(population.map((o) => o.inputs), deriveSettings, reading);
+    population = await warmUp();
+    performance.mark('census:custom:inputs');
+    const settings = deriveSettings();
+    const { rows, ms } = await population.derive(settings, reading);
+    performance.mark('census:custom:derived');
     custom = rows;
     state.custom = params;
     // The rows themselves, for scripts and the end-to-end tests that compare them with the CLI's.
@@ -161,15 +188,16 @@ export async function mountReadingsPage(root: HTMLElement): Promise<void> {
     showCustomSummary(summarizeRows(CUSTOM_READING_ID, rows));
     addCustomOption();
     root.dataset.customDerived = String(rows.length);
-    if (customStatus) customStatus.textContent = `${rows.length} objects derived under your reading in ${Math.round(ms)} ms (${deriveSettings.draws} draws each).`;
+    if (customStatus) customStatus.textContent = `${rows.length} objects derived under your reading in ${Math.round(ms)} ms (${settings.draws} draws each).`;
     saveUrl();
     if (state.reading === CUSTOM_READING_ID || state.a === CUSTOM_READING_ID || state.b === CUSTOM_READING_ID) {
       switcher.value = state.reading;
       selA.value = state.a;
       selB.value = state.b;
     }
-    await guard(charts, drawCharts());
-    await guard(shiftMount, drawShift());
+    await Promise.all([guard(charts, drawCharts()), guard(shiftMount, drawShift())]);
+    await nextPaint();
+    performance.mark('census:custom:drawn');
   };
   const formParams = (): CustomReadingParams => {
     const data = new FormData(form!);
@@ -181,7 +209,7 @@ export async function mountReadingsPage(root: HTMLElement): Promise<void> {
   };
   form?.addEventListener('submit', (e) => {
     e.preventDefault();
-    void deriveCustom(formParams()).catch((err: unknown) => {
+    void deriveCustom(formParams(), true).catch((err: unknown) => {
       if (customStatus) customStatus.textContent = `Your reading could not be derived: ${err instanceof Error ? err.message : String(err)}`;
     });
   });
@@ -206,6 +234,11 @@ export async function mountReadingsPage(root: HTMLElement): Promise<void> {
     });
   }
 
+  // Small populations are loaded into the workers as soon as the page is drawn; large ones when the reader turns to the form.
+  const warmSoon = () => void warmUp().catch(() => undefined);
+  const objects = Number(root.dataset.liveObjects ?? 0);
+  form?.addEventListener('focusin', warmSoon, { once: true });
+  if (state.custom) warmSoon();
   try {
     await connection();
   } catch (err) {
@@ -215,7 +248,7 @@ export async function mountReadingsPage(root: HTMLElement): Promise<void> {
   }
   const wantsCustom = [state.reading, state.a, state.b].includes(CUSTOM_READING_ID);
   if (state.custom && wantsCustom) {
-    await deriveCustom(state.custom).catch((err: unknown) => {
+    await deriveCustom(state.custom, false).catch((err: unknown) => {
       if (customStatus) customStatus.textContent = `Your reading could not be derived: ${String(err)}`;
     });
     if (custom) return;
@@ -230,5 +263,6 @@ export async function mountReadingsPage(root: HTMLElement): Promise<void> {
   }
   await guard(charts, drawCharts());
   await guard(shiftMount, drawShift());
-  if (state.custom && !wantsCustom) void deriveCustom(state.custom).catch(() => undefined);
+  if (form && objects > 0 && objects <= WARM_ON_LOAD_MAX) warmSoon();
+  if (state.custom && !wantsCustom) void deriveCustom(state.custom, false).catch(() => undefined);
 }

@@ -9,21 +9,27 @@ import { createRng, seedFor } from '../../core/random/index.ts';
 import type { Reading } from '../../core/readings/reading.ts';
 import { deriveUnderReading } from '../../core/readings/deriveUnderReading.ts';
 
-/** One object's values under the reading (the readings table's columns). */
+/** One object's values under the reading (the readings table's columns, src/catalog/readings/readingsColumns.ts). */
 export interface RederivedRow {
   id: string;
   log_mbh: number | null;
   log_mbh_p16: number | null;
+  log_mbh_p50: number | null;
   log_mbh_p84: number | null;
+  mbh_method: string | null;
   log_lbol: number | null;
   log_lbol_p16: number | null;
   log_lbol_p84: number | null;
+  lbol_method: string | null;
   log_edd_ratio: number | null;
   log_edd_ratio_p16: number | null;
   log_edd_ratio_p84: number | null;
   p_super_eddington: number | null;
   delta_log_mbh_local: number | null;
+  p_above_local: number | null;
+  log_mseed: number | null;
   lambda_req_light: number | null;
+  lambda_req_heavy: number | null;
   flags: string;
 }
 
@@ -36,21 +42,28 @@ export function rederiveBatch(inputs: readonly ObjectInputs[], settings: DeriveS
         id: input.id,
         log_mbh: d.logMbh,
         log_mbh_p16: d.pct.logMbh?.p16 ?? null,
+        log_mbh_p50: d.pct.logMbh?.p50 ?? null,
         log_mbh_p84: d.pct.logMbh?.p84 ?? null,
+        mbh_method: d.mbhMethod,
         log_lbol: d.logLbol,
         log_lbol_p16: d.pct.logLbol?.p16 ?? null,
         log_lbol_p84: d.pct.logLbol?.p84 ?? null,
+        lbol_method: d.lbolMethod,
         log_edd_ratio: d.logEddRatio,
         log_edd_ratio_p16: d.pct.logEddRatio?.p16 ?? null,
         log_edd_ratio_p84: d.pct.logEddRatio?.p84 ?? null,
         p_super_eddington: d.pSuperEddington,
         delta_log_mbh_local: d.deltaLogMbhLocal,
+        p_above_local: d.pAboveLocal,
+        log_mseed: d.logMseed,
         lambda_req_light: d.lambdaReqLight,
+        lambda_req_heavy: d.lambdaReqHeavy,
         flags: d.flags.join(','),
       };
     } catch {
-      const nulls = { log_mbh: null, log_mbh_p16: null, log_mbh_p84: null, log_lbol: null, log_lbol_p16: null, log_lbol_p84: null };
-      return { id: input.id, ...nulls, log_edd_ratio: null, log_edd_ratio_p16: null, log_edd_ratio_p84: null, p_super_eddington: null, delta_log_mbh_local: null, lambda_req_light: null, flags: 'derive_failed' };
+      const nulls = { log_mbh: null, log_mbh_p16: null, log_mbh_p50: null, log_mbh_p84: null, mbh_method: null, log_lbol: null, log_lbol_p16: null, log_lbol_p84: null, lbol_method: null };
+      const more = { log_edd_ratio: null, log_edd_ratio_p16: null, log_edd_ratio_p84: null, p_super_eddington: null, delta_log_mbh_local: null, p_above_local: null, log_mseed: null };
+      return { id: input.id, ...nulls, ...more, lambda_req_light: null, lambda_req_heavy: null, flags: 'derive_failed' };
     }
   });
 }

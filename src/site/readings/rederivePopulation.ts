@@ -1,42 +1,77 @@
 /**
- * Re-derives the whole population under a reading in web workers (one per core, at most 4),
- * each taking a contiguous slice; the rows come back in input order. Workers are started once
- * and reused.
+ * Re-derives the whole population under a reading in web workers (one per core, at most 4).
+ * The workers are started, fed the population's inputs (fetched once by each, from the build's
+ * data/readings-inputs.json) and warmed up before the reader asks, by {@link startPopulation};
+ * a derivation then sends each worker only the reading and its slice's bounds, and the rows
+ * come back packed in transferred typed arrays, in input order.
  */
-import type { DeriveSettings, ObjectInputs } from '../../core/derive/types.ts';
+import type { DeriveSettings } from '../../core/derive/types.ts';
 import type { Reading } from '../../core/readings/reading.ts';
 import type { RederivedRow } from './rederiveBatch.ts';
+import { unpackRederived, type RederivedColumns } from './rederivedColumns.ts';
+import type { LoadedPopulation, RederiveRequest } from './rederiveWorker.ts';
 
-let workers: Worker[] | null = null;
-let seq = 0;
-
-function pool(): Worker[] {
-  if (!workers) {
-    const n = Math.max(1, Math.min(4, navigator.hardwareConcurrency || 2));
-    workers = Array.from({ length: n }, () => new Worker(new URL('./rederiveWorker.ts', import.meta.url), { type: 'module' }));
-  }
-  return workers;
+/** The population, loaded in the workers. */
+export interface Population {
+  ids: string[];
+  z: Float64Array;
+  /** NaN where the catalog has no host mass. */
+  logMstar: Float64Array;
+  /** The population's rows under `reading`, and the milliseconds the workers took. */
+  derive(settings: DeriveSettings, reading: Reading): Promise<{ rows: RederivedRow[]; ms: number }>;
 }
 
-function run(worker: Worker, inputs: ObjectInputs[], settings: DeriveSettings, reading: Reading): Promise<RederivedRow[]> {
-  const id = seq++;
+type Reply = { seq: number; error?: string; loaded?: LoadedPopulation; packed?: RederivedColumns };
+let seq = 0;
+
+function ask(worker: Worker, req: RederiveRequest): Promise<Reply> {
   return new Promise((resolve, reject) => {
-    const onMessage = (e: MessageEvent<{ seq: number; rows?: RederivedRow[]; error?: string }>) => {
-      if (e.data.seq !== id) return;
+    const onMessage = (e: MessageEvent<Reply>) => {
+      if (e.data.seq !== req.seq) return;
       worker.removeEventListener('message', onMessage);
-      if (e.data.rows) resolve(e.data.rows);
-      else reject(new Error(e.data.error ?? 'the worker failed'));
+      worker.removeEventListener('error', onError);
+      if (e.data.error !== undefined) reject(new Error(e.data.error));
+      else resolve(e.data);
+    };
+    const onError = (e: ErrorEvent) => {
+      worker.removeEventListener('message', onMessage);
+      reject(new Error(e.message || 'the worker could not start'));
     };
     worker.addEventListener('message', onMessage);
-    worker.postMessage({ seq: id, inputs, settings, reading });
+    worker.addEventListener('error', onError);
+    worker.postMessage(req);
   });
 }
 
-/** The population's rows under `reading`, and the milliseconds it took. */
-export async function rederivePopulation(inputs: readonly ObjectInputs[], settings: DeriveSettings, reading: Reading): Promise<{ rows: RederivedRow[]; ms: number }> {
-  const started = performance.now();
-  const ws = pool();
-  const size = Math.ceil(inputs.length / ws.length);
-  const parts = await Promise.all(ws.map((w, i) => run(w, inputs.slice(i * size, (i + 1) * size), settings, reading)));
-  return { rows: parts.flat(), ms: performance.now() - started };
+let started: Promise<Population> | null = null;
+
+/**
+ * Starts the workers and loads the population into each (once per page: later calls return the
+ * same promise). `url`: the inputs file; `warm`: a reading to derive one object with, so the
+ * first real derivation runs compiled code.
+ */
+export function startPopulation(url: string, warm: { settings: DeriveSettings; reading: Reading }): Promise<Population> {
+  started ??= (async () => {
+    const n = Math.max(1, Math.min(4, navigator.hardwareConcurrency || 2));
+    const workers = Array.from({ length: n }, () => new Worker(new URL('./rederiveWorker.ts', import.meta.url), { type: 'module' }));
+    const replies = await Promise.all(workers.map((w, i) => ask(w, { type: 'load', seq: seq++, url, warm, describe: i === 0 })));
+    const first = replies[0]!.loaded!;
+    const ids = first.ids!;
+    const size = Math.ceil(first.n / workers.length);
+    return {
+      ids,
+      z: first.z!,
+      logMstar: first.logMstar!,
+      async derive(settings, reading) {
+        const t0 = performance.now();
+        const parts = await Promise.all(workers.map((w, i) => ask(w, { type: 'derive', seq: seq++, from: i * size, to: Math.min(first.n, (i + 1) * size), settings, reading })));
+        const rows = parts.flatMap((p, i) => unpackRederived(p.packed!, ids.slice(i * size, Math.min(first.n, (i + 1) * size))));
+        return { rows, ms: performance.now() - t0 };
+      },
+    };
+  })();
+  started.catch(() => {
+    started = null;
+  });
+  return started;
 }

@@ -4,9 +4,10 @@ import type { RederivedRow } from '../../../src/site/readings/rederiveBatch.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 
 const row = (i: number, p: number | null, delta: number | null, lam: number | null, mbh: number | null): RederivedRow => ({
-  id: `o${i}`, log_mbh: mbh, log_mbh_p16: null, log_mbh_p84: null, log_lbol: null, log_lbol_p16: null, log_lbol_p84: null,
+  id: `o${i}`, log_mbh: mbh, log_mbh_p16: null, log_mbh_p50: null, log_mbh_p84: null, mbh_method: null,
+  log_lbol: null, log_lbol_p16: null, log_lbol_p84: null, lbol_method: null,
   log_edd_ratio: mbh === null ? null : -mbh, log_edd_ratio_p16: null, log_edd_ratio_p84: null,
-  p_super_eddington: p, delta_log_mbh_local: delta, lambda_req_light: lam, flags: '',
+  p_super_eddington: p, delta_log_mbh_local: delta, p_above_local: null, log_mseed: null, lambda_req_light: lam, lambda_req_heavy: null, flags: '',
 });
 
 describe('summarizeRows', () => {
