@@ -236,7 +236,7 @@ export async function mountReadingsPage(root: HTMLElement): Promise<void> {
 
   // Small populations are loaded into the workers as soon as the page is drawn; large ones when the reader turns to the form.
   const warmSoon = () => void warmUp().catch(() => undefined);
-  const objects = Number(root.dataset.liveObjects ?? 0);
+  const liveObjects = Number(root.dataset.liveObjects ?? 0);
   form?.addEventListener('focusin', warmSoon, { once: true });
   if (state.custom) warmSoon();
   try {
@@ -263,6 +263,6 @@ export async function mountReadingsPage(root: HTMLElement): Promise<void> {
   }
   await guard(charts, drawCharts());
   await guard(shiftMount, drawShift());
-  if (form && objects > 0 && objects <= WARM_ON_LOAD_MAX) warmSoon();
+  if (form && liveObjects > 0 && liveObjects <= WARM_ON_LOAD_MAX) warmSoon();
   if (state.custom && !wantsCustom) void deriveCustom(state.custom, false).catch(() => undefined);
 }

@@ -23,8 +23,8 @@ describe('placedCells', () => {
 describe('readingCells', () => {
   it('marks the bounds of a pasted object under a reading from its flags', () => {
     const row = {
-      id: 'NEW-1', log_mbh: 7.31, log_mbh_p16: null, log_mbh_p84: null, log_lbol: 45.2, log_lbol_p16: 45.1, log_lbol_p84: 45.3,
-      log_edd_ratio: -0.21, log_edd_ratio_p16: null, log_edd_ratio_p84: null, p_super_eddington: null, delta_log_mbh_local: 1.4, lambda_req_light: null,
+      id: 'NEW-1', log_mbh: 7.31, log_mbh_p16: null, log_mbh_p50: null, log_mbh_p84: null, mbh_method: 'vp06_hbeta_line', log_lbol: 45.2, log_lbol_p16: 45.1, log_lbol_p84: 45.3, lbol_method: 'bc5100',
+      log_edd_ratio: -0.21, log_edd_ratio_p16: null, log_edd_ratio_p84: null, p_super_eddington: null, delta_log_mbh_local: 1.4, p_above_local: null, log_mseed: 4.1, lambda_req_light: null, lambda_req_heavy: null,
       flags: 'mbh_upper_limit,edd_ratio_lower_limit',
     };
     expect(readingCells('NEW-1', { label: 'Standard' }, row)).toEqual(['NEW-1', 'Standard', '< 7.31', '45.20', '> −0.21', '—', '< 1.40', 'mbh_upper_limit, edd_ratio_lower_limit']);
