@@ -32,7 +32,7 @@ describe('population page', () => {
       await page.goto(inject('siteUrl'));
       await page.locator('nav a', { hasText: 'Population' }).click();
       await page.waitForURL('**/population/');
-      await expect(page.locator('[data-population-sentence]').textContent()).resolves.toMatch(/^After selection, .+ local relation .+σ/);
+      await expect(page.locator('[data-population-sentence]').textContent()).resolves.toMatch(/^After selection, (.+ local relation .+\d\.\dσ|.+ \d+\.\dσ (above|below) the local relation )/);
       await expect(page.locator('[data-fit-numbers] tbody tr').count()).resolves.toBe(10);
       await waitForSurveyCharts(page);
       for (const key of CHARTS) await expect(page.locator(`[data-survey-chart="${key}"] svg`).count(), key).resolves.toBeGreaterThan(0);
