@@ -54,16 +54,25 @@ export function drawFromBank(bank: DrawBank, role: string, m: Measured, out: Flo
     return;
   }
   const z = bank.normals(role);
-  if (lo === hi) for (let k = 0; k < n; k++) out[k] = v + lo * (z[k] as number);
-  else {
+  // The smallest draw, to skip the redraw pass when nothing is ≤ 0 (nearly always).
+  let min = Infinity;
+  if (lo === hi) {
+    for (let k = 0; k < n; k++) {
+      const x = v + lo * (z[k] as number);
+      out[k] = x;
+      if (x < min) min = x;
+    }
+  } else {
     const u = bank.uniforms(role);
     const width = lo + hi;
     for (let k = 0; k < n; k++) {
       const a = Math.abs(z[k] as number);
-      out[k] = (u[k] as number) * width < lo ? v - lo * a : v + hi * a;
+      const x = (u[k] as number) * width < lo ? v - lo * a : v + hi * a;
+      out[k] = x;
+      if (x < min) min = x;
     }
   }
-  if (!positive) return;
+  if (!positive || min > 0) return;
   let redraw: Rng | null = null;
   for (let k = 0; k < n; k++) {
     if ((out[k] as number) > 0) continue;
