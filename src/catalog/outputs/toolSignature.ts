@@ -1,4 +1,3 @@
-import { open } from 'node:fs/promises';
 import { METADATA_FORMAT, METADATA_KEY } from '../metadata/catalogMetadata.ts';
 import { REJECTION_HEADER } from '../derive/rejectionReport.ts';
 import { READINGS_METADATA_KEY } from '../readings/readingsMetadata.ts';
@@ -6,8 +5,7 @@ import { READINGS_METADATA_KEY } from '../readings/readingsMetadata.ts';
 /** The files of a derive run. */
 export type OutputRole = 'catalog' | 'meta' | 'rejections' | 'readings';
 
-/** Largest Parquet footer or `.meta.json` read to recognise one of ours (our own are far smaller). */
-const MAX_SIGNATURE_BYTES = 64 << 20;
+import { MAX_SIGNATURE_BYTES, parquetFooter, testFileSignature } from './signatureReader.ts';
 
 /** The first bytes of the format name, which every version of our metadata starts with. */
 const FORMAT_PREFIX = METADATA_FORMAT.slice(0, METADATA_FORMAT.indexOf('/') + 1);
@@ -22,15 +20,7 @@ const FORMAT_PREFIX = METADATA_FORMAT.slice(0, METADATA_FORMAT.indexOf('/') + 1)
  * Reads at most 64 MB; any read error or oversize file counts as "not ours".
  */
 export async function isToolOutput(path: string, role: OutputRole): Promise<boolean> {
-  const file = await open(path, 'r').catch(() => null);
-  if (!file) return false;
-  try {
-    const { size } = await file.stat();
-    const read = async (position: number, length: number): Promise<Buffer> => {
-      const buf = Buffer.alloc(length);
-      const { bytesRead } = await file.read(buf, 0, length, position);
-      return buf.subarray(0, bytesRead);
-    };
+  return testFileSignature(path, async (read, size) => {
     if (role === 'rejections') {
       const header = `${REJECTION_HEADER.join(',')}\n`;
       return (await read(0, header.length)).toString('utf8') === header;
@@ -40,17 +30,9 @@ export async function isToolOutput(path: string, role: OutputRole): Promise<bool
       const meta = JSON.parse((await read(0, size)).toString('utf8')) as { format?: unknown; tool?: { name?: unknown } };
       return typeof meta.format === 'string' && meta.format.startsWith(FORMAT_PREFIX) && meta.tool?.name === 'dawn-census';
     }
-    if (size < 12 || (await read(0, 4)).toString('latin1') !== 'PAR1') return false;
-    const tail = await read(size - 8, 8);
-    if (tail.subarray(4).toString('latin1') !== 'PAR1') return false;
-    const footerLength = tail.readUInt32LE(0);
-    if (footerLength > Math.min(size - 12, MAX_SIGNATURE_BYTES)) return false;
-    const footer = await read(size - 8 - footerLength, footerLength);
+    const footer = await parquetFooter(read, size);
+    if (!footer) return false;
     if (role === 'readings') return footer.includes(READINGS_METADATA_KEY, 0, 'latin1');
     return footer.includes(METADATA_KEY, 0, 'latin1') && footer.includes(FORMAT_PREFIX, 0, 'latin1');
-  } catch {
-    return false;
-  } finally {
-    await file.close().catch(() => undefined);
-  }
+  });
 }

@@ -1,13 +1,10 @@
-import { open } from 'node:fs/promises';
+import { MAX_SIGNATURE_BYTES, parquetFooter, testFileSignature } from '../outputs/signatureReader.ts';
 
 /** The key/value entry every Parquet file of `dawn-census population` carries in its footer. */
 export const POPULATION_METADATA_KEY = 'dawn_census_population';
 
 /** The `format` of the population summary JSON. */
 export const POPULATION_SUMMARY_FORMAT = 'dawn-census-population/1';
-
-/** Largest summary JSON or Parquet footer read to recognise one of ours. */
-const MAX_SIGNATURE_BYTES = 64 << 20;
 
 /** Keys every population summary has had, including those written before it carried `format`. */
 const SUMMARY_KEYS = ['catalog', 'cosmology', 'seed', 'survey', 'densities', 'assumptions', 'references'];
@@ -20,15 +17,7 @@ const SUMMARY_KEYS = ['catalog', 'cosmology', 'seed', 'survey', 'densities', 'as
  * Reads at most 64 MB; any read error or oversize file counts as "not ours".
  */
 export async function isPopulationOutput(path: string, role: 'summary' | 'table'): Promise<boolean> {
-  const file = await open(path, 'r').catch(() => null);
-  if (!file) return false;
-  try {
-    const { size } = await file.stat();
-    const read = async (position: number, length: number): Promise<Buffer> => {
-      const buf = Buffer.alloc(length);
-      const { bytesRead } = await file.read(buf, 0, length, position);
-      return buf.subarray(0, bytesRead);
-    };
+  return testFileSignature(path, async (read, size) => {
     if (role === 'summary') {
       if (size > MAX_SIGNATURE_BYTES) return false;
       const json = JSON.parse((await read(0, size)).toString('utf8')) as unknown;
@@ -37,15 +26,7 @@ export async function isPopulationOutput(path: string, role: 'summary' | 'table'
       if (typeof o.format === 'string') return o.format.startsWith('dawn-census-population/');
       return SUMMARY_KEYS.every((k) => k in o);
     }
-    if (size < 12 || (await read(0, 4)).toString('latin1') !== 'PAR1') return false;
-    const tail = await read(size - 8, 8);
-    if (tail.subarray(4).toString('latin1') !== 'PAR1') return false;
-    const footerLength = tail.readUInt32LE(0);
-    if (footerLength > Math.min(size - 12, MAX_SIGNATURE_BYTES)) return false;
-    return (await read(size - 8 - footerLength, footerLength)).includes(POPULATION_METADATA_KEY, 0, 'latin1');
-  } catch {
-    return false;
-  } finally {
-    await file.close().catch(() => undefined);
-  }
+    const footer = await parquetFooter(read, size);
+    return footer !== null && footer.includes(POPULATION_METADATA_KEY, 0, 'latin1');
+  });
 }
