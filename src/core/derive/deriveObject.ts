@@ -3,7 +3,7 @@ import { PLAUSIBLE } from './plausibleRanges.ts';
 import { drawCount } from './drawCount.ts';
 import type { Rng } from '../random/rng.ts';
 import { isDrawBank, ReusableDrawBank, type DrawBank } from '../random/drawBank.ts';
-import { percentiles16_50_84 } from '../random/percentiles.ts';
+import { PercentileMemo } from '../random/percentileMemo.ts';
 import { logL5100FromLogLHalpha, logL5100FromLogLHbeta, inCalibrationRange } from '../virial/index.ts';
 import { inLocalRelationRange } from '../local/localRelation.ts';
 import { lambdaRequired, logSeedMassRequired } from '../growth/salpeterGrowth.ts';
@@ -16,6 +16,10 @@ const nominalBuffers = createBuffers(1);
 let drawBuffers: ChainBuffers = createBuffers(0);
 /** The deviates of the object being derived, when the caller passes its random stream. */
 const ownBank = new ReusableDrawBank();
+/** Percentiles per output slot, shared by the readings of one object (the bank and its generation). */
+const memos = Array.from({ length: 5 }, () => new PercentileMemo());
+let memoBank: DrawBank | null = null;
+let memoGeneration = -1;
 
 /** Slack, dex, when testing that a nominal value lies in its interval (rounding of the linear L_bol form). */
 const INTERVAL_TOL = 1e-9;
@@ -84,6 +88,11 @@ export function deriveObject(inputs: ObjectInputs, settings: DeriveSettings, ran
   const draws = drawCount(settings);
   const bank = isDrawBank(random) ? random : ownBank.reset(random, draws);
   if (bank.n !== draws) throw new RangeError(`the bank holds ${bank.n} draws per role, the settings ask for ${draws}`);
+  if (bank !== memoBank || bank.generation !== memoGeneration) {
+    for (const m of memos) m.clear();
+    memoBank = bank;
+    memoGeneration = bank.generation;
+  }
   if (drawBuffers.n !== draws) drawBuffers = createBuffers(draws);
   const db = drawBuffers;
   sampleInputs(plan, settings, bank, db);
@@ -111,7 +120,7 @@ export function deriveObject(inputs: ObjectInputs, settings: DeriveSettings, ran
     deltaLogMbhLocal: flags.has('mbh_upper_limit'),
   };
   const pct = (slot: number, values: Float64Array, limit: boolean): Percentiles | null =>
-    !limit && Number.isFinite(nominal(slot)) ? percentiles16_50_84(values) : null;
+    !limit && Number.isFinite(nominal(slot)) ? (memos[slot] as PercentileMemo).percentiles(values) : null;
 
   let logMbh = finiteOrNull(nominal(OUT.logMbh));
   let pMbh = pct(OUT.logMbh, dMbh, isLimit.logMbh);

@@ -1,4 +1,4 @@
-import type { DeriveSettings } from './types.ts';
+import type { DeriveSettings, Measured } from './types.ts';
 import type { LumSource, ObjectPlan } from './objectPlan.ts';
 import type { DrawBank } from '../random/drawBank.ts';
 import { DRAW_ROLES } from './drawRoles.ts';
@@ -12,6 +12,9 @@ import { logSeedMassRequired } from '../growth/salpeterGrowth.ts';
 import { localLogMbh } from '../local/localRelation.ts';
 import { drawFromBank } from './drawPositive.ts';
 import { log10 } from '../math/index.ts';
+
+/** DrawBank.derived kind of the log10 of a positive measurement's draws. */
+const LOG10_OF_POSITIVE = 1;
 
 /** Slots of the chain's outputs. */
 export const OUT = { logMbh: 0, logLbol: 1, logEddRatio: 2, logMseed: 3, deltaLocal: 4 } as const;
@@ -27,7 +30,7 @@ export interface ChainBuffers {
   n: number;
   logMu: Float64Array;
   ebv: Float64Array;
-  /** Per source of the plan: sampled observed value, then (in place) the corrected log10 luminosity. */
+  /** Per source of the plan: log10 of the sampled observed value, then (in place) the corrected log10 luminosity. */
   logL: Float64Array[];
   logFwhm: Float64Array;
   /** Host quantity of the local relation (log M*, or σ* then log σ*). */
@@ -36,6 +39,8 @@ export interface ChainBuffers {
   scatter: Float64Array;
   /** Intrinsic scatter of the local relation, dex (zeros for the nominal values): a local black hole's place about the relation. */
   localScatter: Float64Array;
+  /** Working space (the Hβ flux draws of a decrement formed from the line fluxes). */
+  scratch: Float64Array;
   out: Float64Array[];
 }
 
@@ -50,6 +55,7 @@ export function createBuffers(n: number): ChainBuffers {
     x: a(),
     scatter: a(),
     localScatter: a(),
+    scratch: a(),
     out: Array.from({ length: OUT_SIZE }, a),
   };
 }
@@ -65,14 +71,27 @@ export function createBuffers(n: number): ChainBuffers {
  * reading of the object sees the same deviates.
  */
 export function sampleInputs(plan: ObjectPlan, settings: DeriveSettings, bank: DrawBank | null, b: ChainBuffers): void {
-  const draw = (role: string, m: { value: number }, out: Float64Array, positive: boolean) => {
+  const draw = (role: string, m: Measured, out: Float64Array, positive: boolean) => {
     if (!bank) out.fill(m.value);
     else drawFromBank(bank, role, m, out, positive);
   };
-  if (plan.mu && !isExact(plan.mu)) {
-    draw(DRAW_ROLES.mu, plan.mu, b.logMu, true);
-    for (let k = 0; k < b.n; k++) b.logMu[k] = log10(b.logMu[k] as number);
-  } else b.logMu.fill(plan.mu ? log10(plan.mu.value) : 0);
+  // log10 of a positive measurement's draws: made once per object and measurement, and shared
+  // by every reading of the object that uses the same measurement (see DrawBank.derived).
+  const drawLog = (role: string, m: Measured, out: Float64Array) => {
+    if (!bank) {
+      out.fill(log10(m.value));
+      return;
+    }
+    const key = { value: m.value, errLo: m.errLo ?? -1, errHi: m.errHi ?? -1, kind: LOG10_OF_POSITIVE };
+    out.set(
+      bank.derived(role, key, (o) => {
+        drawFromBank(bank, role, m, o, true);
+        for (let k = 0; k < o.length; k++) o[k] = log10(o[k] as number);
+      }),
+    );
+  };
+  if (plan.mu && !isExact(plan.mu)) drawLog(DRAW_ROLES.mu, plan.mu, b.logMu);
+  else b.logMu.fill(plan.mu ? log10(plan.mu.value) : 0);
 
   const dust = plan.dust;
   if (dust.mode === 'av') {
@@ -81,32 +100,33 @@ export function sampleInputs(plan: ObjectPlan, settings: DeriveSettings, bank: D
   } else if (dust.mode === 'decrement') {
     draw(DRAW_ROLES.decrement, dust.m, b.ebv, true);
     for (let k = 0; k < b.n; k++) b.ebv[k] = ebvFromBalmerDecrement(b.ebv[k] as number, settings.dustCurve, settings.intrinsicBalmer);
+  } else if (dust.mode === 'fluxes') {
+    // The decrement of each draw from that draw's own Hα and Hβ fluxes (the observed fluxes).
+    const ha = plan.sources[dust.ha] as LumSource;
+    const hb = plan.sources[dust.hb] as LumSource;
+    draw(DRAW_ROLES.luminosity[ha.key], ha.m, b.ebv, true);
+    draw(DRAW_ROLES.luminosity[hb.key], hb.m, b.scratch, true);
+    for (let k = 0; k < b.n; k++)
+      b.ebv[k] = ebvFromBalmerDecrement((b.ebv[k] as number) / (b.scratch[k] as number), settings.dustCurve, settings.intrinsicBalmer);
   } else b.ebv.fill(0);
 
+  // Every source's observed value, as log10 (the corrections are added by evaluateChain).
   const indices = bank ? plan.used : plan.sources.map((_, i) => i);
   for (const i of indices) {
     const s = plan.sources[i] as LumSource;
-    if (s.isLimit) (b.logL[i] as Float64Array).fill(s.m.value);
-    else draw(DRAW_ROLES.luminosity[s.key], s.m, b.logL[i] as Float64Array, true);
-  }
-  if (dust.mode === 'fluxes') {
-    // The decrement of each draw from that draw's own Hα and Hβ fluxes (still observed fluxes here).
-    const ha = b.logL[dust.ha] as Float64Array;
-    const hb = b.logL[dust.hb] as Float64Array;
-    for (let k = 0; k < b.n; k++)
-      b.ebv[k] = ebvFromBalmerDecrement((ha[k] as number) / (hb[k] as number), settings.dustCurve, settings.intrinsicBalmer);
+    if (s.isLimit) (b.logL[i] as Float64Array).fill(log10(s.m.value));
+    else drawLog(DRAW_ROLES.luminosity[s.key], s.m, b.logL[i] as Float64Array);
   }
 
   if (plan.mass) {
-    draw(DRAW_ROLES.width[plan.mass.line], plan.mass.fwhm, b.logFwhm, true);
-    for (let k = 0; k < b.n; k++) b.logFwhm[k] = log10(b.logFwhm[k] as number);
+    drawLog(DRAW_ROLES.width[plan.mass.line], plan.mass.fwhm, b.logFwhm);
     if (bank) scaled(bank.normals(DRAW_ROLES.massScatter), plan.mass.cal.scatterDex, b.scatter);
     else b.scatter.fill(0);
   }
 
   if (plan.local) {
-    draw(DRAW_ROLES.host, plan.local.x, b.x, plan.local.xIsSigma);
-    if (plan.local.xIsSigma) for (let k = 0; k < b.n; k++) b.x[k] = log10(b.x[k] as number);
+    if (plan.local.xIsSigma) drawLog(DRAW_ROLES.host, plan.local.x, b.x);
+    else draw(DRAW_ROLES.host, plan.local.x, b.x, false);
     if (bank) scaled(bank.normals(DRAW_ROLES.localScatter), plan.local.rel.scatterDex, b.localScatter);
     else b.localScatter.fill(0);
   }
@@ -147,7 +167,7 @@ export function evaluateChain(plan: ObjectPlan, settings: DeriveSettings, b: Cha
     const L = b.logL[i] as Float64Array;
     const c = s.isFlux ? plan.logFourPiDl2 : 0;
     const dk = 0.4 * s.dustK;
-    for (let k = 0; k < n; k++) L[k] = log10(L[k] as number) + c - (logMu[k] as number) + dk * (ebv[k] as number);
+    for (let k = 0; k < n; k++) L[k] = (L[k] as number) + c - (logMu[k] as number) + dk * (ebv[k] as number);
   }
 
   const [logM, logLbol, logEdd, logMseed, delta] = b.out as [Float64Array, Float64Array, Float64Array, Float64Array, Float64Array];

@@ -9,7 +9,14 @@ const PROBS = [0.16, 0.5, 0.84] as const;
 
 const counts = new Int32Array(NBINS);
 const slotOfBin = new Int8Array(NBINS);
-let gathered = new Float64Array(6 * MAX_IN_BIN);
+const gathered = new Float64Array(6 * MAX_IN_BIN);
+/** Per needed rank: the rank, its bin, the count before the bin; per slot: start and fill point in `gathered`. */
+const ranks = new Int32Array(6);
+const binOf = new Int32Array(6);
+const before = new Int32Array(6);
+const start = new Int32Array(6);
+const fill = new Int32Array(6);
+const slotOfRank = new Int32Array(6);
 
 /**
  * The 16th, 50th and 84th percentiles of `values` (numpy's default 'linear' interpolation
@@ -48,14 +55,12 @@ export function binnedPercentiles(values: Float64Array): Percentiles | null {
   }
 
   // Ranks needed: floor and floor+1 of (n − 1)p for each p.
-  const ranks: number[] = [];
-  for (const p of PROBS) {
-    const k = Math.floor((n - 1) * p);
-    ranks.push(k, Math.min(k + 1, n - 1));
+  for (let i = 0; i < 3; i++) {
+    const k = Math.floor((n - 1) * (PROBS[i] as number));
+    ranks[2 * i] = k;
+    ranks[2 * i + 1] = Math.min(k + 1, n - 1);
   }
   // Bin of each rank, and how many values lie in bins before it.
-  const binOf = new Int32Array(6);
-  const before = new Int32Array(6);
   let cum = 0;
   let r = 0;
   for (let b = 0; b < NBINS && r < 6; b++) {
@@ -68,21 +73,22 @@ export function binnedPercentiles(values: Float64Array): Percentiles | null {
     cum += c;
   }
 
-  slotOfBin.fill(0);
-  const start: number[] = [];
+  // Each needed bin gets a slot (1-based; 0 = not needed; all 0 between calls) and a stretch of `gathered`.
   let slots = 0;
   let offset = 0;
   for (let j = 0; j < 6; j++) {
     const b = binOf[j] as number;
     if (slotOfBin[b] !== 0) continue;
     const c = counts[b] as number;
-    if (c > MAX_IN_BIN) return null;
+    if (c > MAX_IN_BIN) {
+      for (let i = 0; i < 6; i++) slotOfBin[binOf[i] as number] = 0;
+      return null;
+    }
+    start[slots] = offset;
+    fill[slots] = offset;
     slotOfBin[b] = ++slots;
-    start.push(offset);
     offset += c;
   }
-  if (gathered.length < offset) gathered = new Float64Array(offset);
-  const fill = start.slice();
   for (let i = 0; i < n; i++) {
     const x = values[i] as number;
     const b = (x - min) * scale;
@@ -94,12 +100,12 @@ export function binnedPercentiles(values: Float64Array): Percentiles | null {
       gathered[k] = x;
     }
   }
-  for (let s = 0; s < slots; s++) gathered.subarray(start[s], fill[s]).sort();
+  for (let s = 0; s < slots; s++) sortRange(gathered, start[s] as number, fill[s] as number);
+  for (let j = 0; j < 6; j++) slotOfRank[j] = slotOfBin[binOf[j] as number] as number;
+  // Leave slotOfBin all zero for the next call.
+  for (let j = 0; j < 6; j++) slotOfBin[binOf[j] as number] = 0;
 
-  const order = (j: number): number => {
-    const b = binOf[j] as number;
-    return gathered[(start[(slotOfBin[b] as number) - 1] as number) + (ranks[j] as number) - (before[j] as number)] as number;
-  };
+  const order = (j: number): number => gathered[(start[(slotOfRank[j] as number) - 1] as number) + (ranks[j] as number) - (before[j] as number)] as number;
   const at = (i: number, p: number): number => {
     const h = (n - 1) * p;
     const t = h - Math.floor(h);
@@ -107,4 +113,22 @@ export function binnedPercentiles(values: Float64Array): Percentiles | null {
     return t === 0 ? lo : lerp(lo, order(2 * i + 1), t);
   };
   return { p16: at(0, 0.16), p50: at(1, 0.5), p84: at(2, 0.84) };
+}
+
+/** Sorts a[from..to) ascending as TypedArray sort does (no NaN here): insertion sort for the usual few values, else the built-in sort. */
+function sortRange(a: Float64Array, from: number, to: number): void {
+  if (to - from > 48) {
+    a.subarray(from, to).sort();
+    return;
+  }
+  for (let i = from + 1; i < to; i++) {
+    const x = a[i] as number;
+    let j = i - 1;
+    // As the built-in sort orders them: −0 before +0.
+    while (j >= from && ((a[j] as number) > x || (x === 0 && (a[j] as number) === 0 && 1 / (a[j] as number) > 1 / x))) {
+      a[j + 1] = a[j] as number;
+      j--;
+    }
+    a[j + 1] = x;
+  }
 }

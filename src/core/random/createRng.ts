@@ -22,6 +22,29 @@ class Xoshiro128ss implements Rng {
     return this.nextUint32() * INV_2_32;
   }
 
+  fillUint32(out: Uint32Array): void {
+    // The same steps as nextUint32, with the state in locals for the whole run.
+    let s0 = this.s0;
+    let s1 = this.s1;
+    let s2 = this.s2;
+    let s3 = this.s3;
+    for (let k = 0; k < out.length; k++) {
+      const m = Math.imul(s1, 5);
+      out[k] = Math.imul((m << 7) | (m >>> 25), 9);
+      const t = s1 << 9;
+      s2 ^= s0;
+      s3 ^= s1;
+      s1 ^= s2;
+      s0 ^= s3;
+      s2 ^= t;
+      s3 = (s3 << 11) | (s3 >>> 21);
+    }
+    this.s0 = s0;
+    this.s1 = s1;
+    this.s2 = s2;
+    this.s3 = s3;
+  }
+
   nextUint32(): number {
     const s1 = this.s1;
     const m = Math.imul(s1, 5);

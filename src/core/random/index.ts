@@ -8,3 +8,4 @@ export { splitNormal } from './splitNormal.ts';
 export { selectInPlace } from './selectInPlace.ts';
 export { quantile, lerp } from './quantile.ts';
 export { percentiles16_50_84 } from './percentiles.ts';
+export { PercentileMemo } from './percentileMemo.ts';

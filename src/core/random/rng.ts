@@ -10,4 +10,9 @@ export interface Rng {
    * `next()`; the normal sampler takes its bits from here without a round trip through a float.
    */
   nextUint32(): number;
+  /**
+   * Optional: fills `out` with the next `out.length` words of the stream, exactly as that many
+   * `nextUint32()` calls would (a bulk path for generators that have one).
+   */
+  fillUint32?(out: Uint32Array): void;
 }

@@ -59,3 +59,65 @@ export function standardNormal(rng: Rng): number {
     if (f1 + rng.next() * (f0 - f1) < 1) return x;
   }
 }
+
+/** Words taken from the generator at a time by {@link fillStandardNormals}. */
+const CHUNK = 512;
+
+/** Serves a generator's words from a buffer filled in bulk: the same sequence as the generator's own. */
+class BufferedWords implements Rng {
+  readonly buf = new Uint32Array(CHUNK);
+  pos = CHUNK;
+  source: Rng = { next: () => 0, nextUint32: () => 0 };
+
+  refill(): void {
+    const src = this.source;
+    if (src.fillUint32) src.fillUint32(this.buf);
+    else for (let k = 0; k < CHUNK; k++) this.buf[k] = src.nextUint32();
+    this.pos = 0;
+  }
+
+  nextUint32(): number {
+    if (this.pos === CHUNK) this.refill();
+    return this.buf[this.pos++] as number;
+  }
+
+  next(): number {
+    return this.nextUint32() * (1 / 4294967296);
+  }
+}
+
+const words = new BufferedWords();
+
+/**
+ * Fills `out` with standard normal deviates: exactly `out[k] = standardNormal(rng)` for k = 0, 1, …,
+ * but with the generator's words taken in bulk. It takes up to 511 words more than it uses, so
+ * `rng` must not be used afterwards (the draw bank gives each role a generator of its own).
+ */
+export function fillStandardNormals(rng: Rng, out: Float64Array): void {
+  const w = words;
+  w.source = rng;
+  w.pos = CHUNK;
+  const buf = w.buf;
+  for (let k = 0; k < out.length; k++) {
+    if (w.pos === CHUNK) w.refill();
+    const j = buf[w.pos++] as number;
+    const i = j & (N - 1);
+    const u = ((j >>> 7) + 0.5) * (2 / 33554432) - 1;
+    // The common case, as in standardNormal; the rest goes there with the word already taken.
+    out[k] = Math.abs(u) < (RATIO[i] as number) ? u * (X[i] as number) : edge(w, i, u);
+  }
+  w.source = { next: () => 0, nextUint32: () => 0 };
+}
+
+/** standardNormal's wedge and tail for a first word of layer `i` and abscissa `u` already drawn. */
+function edge(rng: Rng, i: number, u: number): number {
+  if (i === 0) return tail(rng, u < 0);
+  const x = u * (X[i] as number);
+  const x2 = x * x;
+  const xi = X[i] as number;
+  const xi1 = X[i + 1] as number;
+  const f0 = exp(-0.5 * (xi * xi - x2));
+  const f1 = exp(-0.5 * (xi1 * xi1 - x2));
+  if (f1 + rng.next() * (f0 - f1) < 1) return x;
+  return standardNormal(rng);
+}

@@ -59,7 +59,7 @@ describe('drawPositive', () => {
 describe('drawFromBank', () => {
   it('fills the value itself for an exact measurement, without touching the bank', () => {
     const out = new Float64Array(4);
-    const bank = { n: 4, normals: () => { throw new Error('drew'); }, uniforms: () => { throw new Error('drew'); }, redraws: () => { throw new Error('drew'); } };
+    const bank = { n: 4, generation: 0, normals: () => { throw new Error('drew'); }, uniforms: () => { throw new Error('drew'); }, redraws: () => { throw new Error('drew'); }, derived: () => { throw new Error('drew'); } };
     drawFromBank(bank, 'x', { value: 3, errLo: 0, errHi: 0 }, out, true);
     expect([...out]).toEqual([3, 3, 3, 3]);
   });

@@ -48,4 +48,23 @@ describe('binnedPercentiles', () => {
     expect(binnedPercentiles(withInf)).toBeNull();
     expect(binnedPercentiles(new Float64Array(10))).toBeNull();
   });
+
+  it('orders −0 before +0 as a full sort does, so an order statistic among zeros keeps its sign', () => {
+    // 30 × −1, then 20 × +0 and 20 × −0 (in that order), then 31 × +1: sorted, index 50 is the first +0.
+    const v = Float64Array.from([...Array(30).fill(-1), ...Array(20).fill(0), ...Array(20).fill(-0), ...Array(31).fill(1)]);
+    const got = binnedPercentiles(v)!;
+    expect(Object.is(got.p50, bySort(v).p50)).toBe(true);
+    expect(Object.is(got.p50, 0)).toBe(true);
+  });
+
+  it('stays exact on the next sample after declining part-way through its needed bins', () => {
+    // 400 values spread over [0, 1000) and 1600 packed into [999.6, 999.9]: the 16th percentile's
+    // bin is sparse, the median's crowded, so the call declines after setting up the first bin.
+    const spread = Float64Array.from({ length: 2000 }, (_, i) => (i < 400 ? i * 2.5 : 999.6 + rng.next() * 0.3));
+    expect(binnedPercentiles(spread)).toBeNull();
+    for (let t = 0; t < 20; t++) {
+      const v = Float64Array.from({ length: 2000 }, () => standardNormal(rng));
+      expect(binnedPercentiles(v)).toEqual(bySort(v));
+    }
+  });
 });

@@ -76,4 +76,73 @@ describe('the draw bank', () => {
     expect(isDrawBank(bank(18, 10))).toBe(true);
     expect(isDrawBank(createRng(18))).toBe(false);
   });
+
+  describe('derived arrays (a transform of a measurement\'s draws, shared by the readings of one object)', () => {
+    const key = (value: number, kind = 1) => ({ value, errLo: 0.1, errHi: 0.1, kind });
+    const fillFrom = (b: ReusableDrawBank, calls: number[], tag: number) => (out: Float64Array) => {
+      calls.push(tag);
+      const z = b.normals('width_halpha');
+      for (let k = 0; k < out.length; k++) out[k] = tag + (z[k] as number);
+    };
+
+    it('fills once per object and key, and gives the same array to every later request with an equal key', () => {
+      const b = new ReusableDrawBank().reset(createRng(31), 8);
+      const calls: number[] = [];
+      const first = b.derived('width_halpha', key(2000), fillFrom(b, calls, 1));
+      const again = b.derived('width_halpha', key(2000), fillFrom(b, calls, 2));
+      expect(again).toBe(first);
+      expect(calls).toEqual([1]);
+      expect(first[0]).toBe(1 + (b.normals('width_halpha')[0] as number));
+    });
+
+    it('makes a separate array for another value, error or kind, and for another role', () => {
+      const b = new ReusableDrawBank().reset(createRng(32), 8);
+      const calls: number[] = [];
+      b.derived('width_halpha', key(2000), fillFrom(b, calls, 1));
+      b.derived('width_halpha', key(1500), fillFrom(b, calls, 2));
+      b.derived('width_halpha', { value: 2000, errLo: 0.2, errHi: 0.1, kind: 1 }, fillFrom(b, calls, 3));
+      b.derived('width_halpha', { value: 2000, errLo: 0.1, errHi: 0.2, kind: 1 }, fillFrom(b, calls, 4));
+      b.derived('width_halpha', key(2000, 2), fillFrom(b, calls, 5));
+      b.derived('lum_halpha', key(2000), fillFrom(b, calls, 6));
+      expect(calls).toEqual([1, 2, 3, 4, 5, 6]);
+    });
+
+    it('fills again for the next object, with that object\'s deviates', () => {
+      const b = new ReusableDrawBank().reset(createRng(33), 8);
+      const calls: number[] = [];
+      const first = Float64Array.from(b.derived('width_halpha', key(2000), fillFrom(b, calls, 1)));
+      b.reset(createRng(34), 8);
+      const next = b.derived('width_halpha', key(2000), fillFrom(b, calls, 1));
+      expect(calls).toEqual([1, 1]);
+      expect(same(next, first)).toBe(false);
+      expect(next[3]).toBe(1 + (b.normals('width_halpha')[3] as number));
+    });
+
+    it('keeps the four latest keys of a role when more are asked for, and stays exact', () => {
+      const b = new ReusableDrawBank().reset(createRng(35), 8);
+      const calls: number[] = [];
+      for (const v of [1, 2, 3, 4, 5]) b.derived('width_halpha', key(v), fillFrom(b, calls, v));
+      // 1 was replaced by 5; 2–5 are kept.
+      for (const v of [2, 3, 4, 5]) b.derived('width_halpha', key(v), fillFrom(b, calls, v));
+      expect(calls).toEqual([1, 2, 3, 4, 5]);
+      const one = b.derived('width_halpha', key(1), fillFrom(b, calls, 1));
+      expect(calls).toEqual([1, 2, 3, 4, 5, 1]);
+      expect(one[0]).toBe(1 + (b.normals('width_halpha')[0] as number));
+    });
+
+    it('keeps nothing from a fill that throws: the next request fills again', () => {
+      const b = new ReusableDrawBank().reset(createRng(36), 8);
+      const calls: number[] = [];
+      expect(() => b.derived('width_halpha', key(2000), () => { throw new Error('bad'); })).toThrow('bad');
+      b.derived('width_halpha', key(2000), fillFrom(b, calls, 1));
+      expect(calls).toEqual([1]);
+    });
+
+    it('moves to a new generation with every object', () => {
+      const b = new ReusableDrawBank().reset(createRng(37), 8);
+      const g = b.generation;
+      b.reset(createRng(37), 8);
+      expect(b.generation).not.toBe(g);
+    });
+  });
 });

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { createRng, fillNormal, standardNormal } from '../../../src/core/random/index.ts';
+import { fillStandardNormals } from '../../../src/core/random/standardNormal.ts';
 import { normalCdf } from './normalCdf.ts';
 
 describe('standardNormal', () => {
@@ -86,5 +87,37 @@ describe('fillNormal', () => {
     const sd = Math.sqrt(s2 / n - mean * mean);
     expect(Math.abs(mean - 10)).toBeLessThan((5 * 2.5) / Math.sqrt(n));
     expect(Math.abs(sd - 2.5)).toBeLessThan((5 * 2.5) / Math.sqrt(2 * n)); // σ(s) ≈ σ/√(2N)
+  });
+});
+
+describe('fillStandardNormals', () => {
+  it('fills exactly what standardNormal gives call by call, across many bulk refills and through the wedge and tail', () => {
+    for (const seed of [1, 2, 99]) {
+      const n = 100_000; // ~1 % of draws take the wedge or tail path, and 512-word refills happen ~200 times
+      const bulk = new Float64Array(n);
+      fillStandardNormals(createRng(seed), bulk);
+      const one = createRng(seed);
+      for (let k = 0; k < n; k++) expect(bulk[k]).toBe(standardNormal(one));
+    }
+  });
+
+  it('gives the same sequence from a generator without a bulk path', () => {
+    const inner = createRng(5);
+    const plain = { next: () => inner.next(), nextUint32: () => inner.nextUint32() };
+    const got = new Float64Array(3000);
+    fillStandardNormals(plain, got);
+    const ref = createRng(5);
+    expect(Array.from(got)).toEqual(Array.from({ length: 3000 }, () => standardNormal(ref)));
+  });
+});
+
+describe('the generator\'s bulk words', () => {
+  it('are the words nextUint32 gives one by one, and leave the stream where those calls would', () => {
+    const a = createRng(8);
+    const b = createRng(8);
+    const bulk = new Uint32Array(1000);
+    a.fillUint32!(bulk);
+    for (let k = 0; k < 1000; k++) expect(bulk[k]).toBe(b.nextUint32());
+    expect(a.nextUint32()).toBe(b.nextUint32());
   });
 });

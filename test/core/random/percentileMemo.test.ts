@@ -1,0 +1,77 @@
+import { describe, expect, it } from 'vitest';
+import { PercentileMemo } from '../../../src/core/random/percentileMemo.ts';
+import { percentiles16_50_84 } from '../../../src/core/random/percentiles.ts';
+import { createRng, standardNormal } from '../../../src/core/random/index.ts';
+
+const rng = createRng(404);
+const sample = (n = 1000, mean = 8) => Float64Array.from({ length: n }, () => mean + 0.4 * standardNormal(rng));
+/** What the memo must reproduce exactly: the plain percentiles of a copy. */
+const plain = (v: Float64Array) => percentiles16_50_84(Float64Array.from(v));
+
+describe('PercentileMemo', () => {
+  it('gives exactly the plain percentiles of each new sample', () => {
+    const memo = new PercentileMemo();
+    for (let t = 0; t < 6; t++) {
+      const v = sample();
+      expect(memo.percentiles(v)).toEqual(plain(v));
+    }
+  });
+
+  it('gives a sample equal to one seen before the same percentiles', () => {
+    const memo = new PercentileMemo();
+    const a = sample();
+    const want = plain(a);
+    memo.percentiles(a);
+    memo.percentiles(sample());
+    expect(memo.percentiles(Float64Array.from(a))).toEqual(want);
+  });
+
+  it('tells apart samples that differ only in their last value', () => {
+    const memo = new PercentileMemo();
+    const a = Float64Array.from({ length: 101 }, (_, i) => i);
+    memo.percentiles(a);
+    // Moving the top value to the bottom moves every order statistic down by one.
+    const b = Float64Array.from(a);
+    b[100] = -1;
+    expect(memo.percentiles(b)).toEqual(plain(b));
+    expect(memo.percentiles(b).p50).toBe(49);
+  });
+
+  it('tells apart samples that differ only in the sign of a zero', () => {
+    const memo = new PercentileMemo();
+    // 50 × −1, a zero, 50 × +1: the median is the zero itself, with its sign.
+    const plus = Float64Array.from([...Array(50).fill(-1), 0, ...Array(50).fill(1)]);
+    const minus = Float64Array.from(plus);
+    minus[50] = -0;
+    expect(Object.is(memo.percentiles(plus).p50, 0)).toBe(true);
+    expect(Object.is(memo.percentiles(minus).p50, -0)).toBe(true);
+  });
+
+  it('treats NaN as equal to NaN, and leaves the caller\'s sample in its order', () => {
+    const memo = new PercentileMemo();
+    const a = sample(200);
+    a[7] = NaN;
+    const before = Float64Array.from(a);
+    const first = memo.percentiles(a);
+    expect(first).toEqual(plain(before));
+    expect(Array.from(a)).toEqual(Array.from(before));
+    expect(memo.percentiles(Float64Array.from(before))).toEqual(first);
+  });
+
+  it('stays exact when more samples come than it keeps, and after clear', () => {
+    const memo = new PercentileMemo();
+    const samples = Array.from({ length: 7 }, () => sample(300));
+    for (let round = 0; round < 2; round++) for (const v of samples) expect(memo.percentiles(v)).toEqual(plain(v));
+    memo.clear();
+    expect(memo.percentiles(samples[0]!)).toEqual(plain(samples[0]!));
+  });
+
+  it('hands out copies: changing a result does not change what it gives next', () => {
+    const memo = new PercentileMemo();
+    const a = sample();
+    const r = memo.percentiles(a);
+    const p50 = r.p50;
+    r.p50 = 0;
+    expect(memo.percentiles(a).p50).toBe(p50);
+  });
+});
