@@ -11,7 +11,7 @@ import { logLbolFixedBC } from '../bolometric/fixedCorrections.ts';
 import { logSeedMassRequired } from '../growth/salpeterGrowth.ts';
 import { localLogMbh } from '../local/localRelation.ts';
 import { drawFromBank } from './drawPositive.ts';
-import { log10 } from '../math/index.ts';
+import { log10, log10InPlace } from '../math/index.ts';
 
 /** DrawBank.derived kind of the log10 of a positive measurement's draws. */
 const LOG10_OF_POSITIVE = 1;
@@ -86,7 +86,7 @@ export function sampleInputs(plan: ObjectPlan, settings: DeriveSettings, bank: D
     out.set(
       bank.derived(role, key, (o) => {
         drawFromBank(bank, role, m, o, true);
-        for (let k = 0; k < o.length; k++) o[k] = log10(o[k] as number);
+        log10InPlace(o);
       }),
     );
   };

@@ -104,7 +104,9 @@ export function fillStandardNormals(rng: Rng, out: Float64Array): void {
     const i = j & (N - 1);
     const u = ((j >>> 7) + 0.5) * (2 / 33554432) - 1;
     // The common case, as in standardNormal; the rest goes there with the word already taken.
-    out[k] = Math.abs(u) < (RATIO[i] as number) ? u * (X[i] as number) : edge(w, i, u);
+    // Two stores, not one of a `?:`: merging the product with a call's result would box it.
+    if (Math.abs(u) < (RATIO[i] as number)) out[k] = u * (X[i] as number);
+    else out[k] = edge(w, i, u);
   }
   w.source = { next: () => 0, nextUint32: () => 0 };
 }
