@@ -17,6 +17,8 @@ const before = new Int32Array(6);
 const start = new Int32Array(6);
 const fill = new Int32Array(6);
 const slotOfRank = new Int32Array(6);
+/** The bin of each value, from the counting pass (grown to the largest sample seen). */
+let binOfValue = new Uint16Array(2048);
 
 /**
  * The 16th, 50th and 84th percentiles of `values` (numpy's default 'linear' interpolation
@@ -47,10 +49,13 @@ export function binnedPercentiles(values: Float64Array): Percentiles | null {
 
   const scale = NBINS / (max - min);
   counts.fill(0);
+  if (binOfValue.length < n) binOfValue = new Uint16Array(n);
+  const bins = binOfValue;
   for (let i = 0; i < n; i++) {
     const b = ((values[i] as number) - min) * scale;
     // b = NBINS only for x = max (or by rounding just below it): it belongs to the last bin.
     const bin = b < NBINS ? b | 0 : NBINS - 1;
+    bins[i] = bin;
     counts[bin] = (counts[bin] as number) + 1;
   }
 
@@ -90,10 +95,9 @@ export function binnedPercentiles(values: Float64Array): Percentiles | null {
     offset += c;
   }
   for (let i = 0; i < n; i++) {
-    const x = values[i] as number;
-    const b = (x - min) * scale;
-    const s = slotOfBin[b < NBINS ? b | 0 : NBINS - 1] as number;
+    const s = slotOfBin[bins[i] as number] as number;
     if (s !== 0) {
+      const x = values[i] as number;
       // Not `gathered[(fill[s - 1] as number)++]`: StrykerJS 9.6 prints that without its parentheses, which does not parse.
       const k = fill[s - 1] as number;
       fill[s - 1] = k + 1;
