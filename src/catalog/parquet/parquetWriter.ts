@@ -1,8 +1,10 @@
 import { mkdir } from 'node:fs/promises';
 import path from 'node:path';
-import { BIGINT, BOOLEAN, DOUBLE, DuckDBDataChunk, DuckDBInstance, VARCHAR } from '@duckdb/node-api';
+import { duckdb } from '../duckdb/nodeApi.ts';
 import type { DuckDBAppender, DuckDBConnection, DuckDBType } from '@duckdb/node-api';
 import { sqlIdentifier, sqlString } from './sqlLiteral.ts';
+
+const { BIGINT, BOOLEAN, DOUBLE, DuckDBDataChunk, DuckDBInstance, VARCHAR } = duckdb;
 
 /** Storage kind of an output column (the readers' `ColumnInfo.kind`). */
 export type ValueKind = 'float' | 'int' | 'bool' | 'string';

@@ -1,7 +1,9 @@
-import { DuckDBInstance } from '@duckdb/node-api';
+import { duckdb } from '../duckdb/nodeApi.ts';
 import { LINES, type LineId } from '../../core/derive/types.ts';
 import { sqlIdentifier, sqlString } from '../parquet/sqlLiteral.ts';
 import { CatalogError } from '../readers/CatalogError.ts';
+
+const { DuckDBInstance } = duckdb;
 
 /** What the population step reads of one derived object. */
 export interface PopulationRow {

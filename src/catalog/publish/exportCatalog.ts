@@ -1,10 +1,12 @@
 import { open } from 'node:fs/promises';
-import { DuckDBInstance } from '@duckdb/node-api';
+import { duckdb } from '../duckdb/nodeApi.ts';
 import type { ExportFormat } from '../config/publicationConfig.ts';
 import type { CellValue } from '../parquet/parquetWriter.ts';
 import { sqlIdentifier, sqlString } from '../parquet/sqlLiteral.ts';
 import { ecsvWriter, fitsWriter, votableWriter, type FormatWriter } from './exportWriters.ts';
 import type { TableDoc } from './tableDoc.ts';
+
+const { DuckDBInstance } = duckdb;
 
 /** File name ending of each extra format. */
 export const EXPORT_EXTENSION: Record<ExportFormat, string> = { ecsv: '.ecsv', votable: '.vot', fits: '.fits' };

@@ -1,11 +1,14 @@
 import { open } from 'node:fs/promises';
-import { DuckDBInstance, DuckDBTypeId, type DuckDBConnection } from '@duckdb/node-api';
+import type { DuckDBConnection, DuckDBInstance as DuckDBInstanceType, DuckDBTypeId as DuckDBTypeIdType } from '@duckdb/node-api';
+import { duckdb } from '../duckdb/nodeApi.ts';
 import { parseDocument } from 'yaml';
 import type { Cell, ColumnInfo, ColumnKind, TableChunk, TableSource } from './types.ts';
 import { CatalogError } from './CatalogError.ts';
 import { ChunkBuilder, checkChunkRows } from './ChunkBuilder.ts';
 import { settleColumnNames } from './columnNames.ts';
 import { toPlain } from './ecsvHeader.ts';
+
+const { DuckDBInstance, DuckDBTypeId } = duckdb;
 
 /** DuckDB settings for reading one file: bounded memory on a shared 2-core machine. */
 const DUCKDB_OPTIONS = { memory_limit: '1GB', threads: '2' };
@@ -80,7 +83,7 @@ export async function openParquet(path: string): Promise<TableSource> {
   }
 }
 
-function parquetSource(path: string, inst: DuckDBInstance, columns: ColumnInfo[], nRows: number, meta: Record<string, unknown>, sql: () => string): TableSource {
+function parquetSource(path: string, inst: DuckDBInstanceType, columns: ColumnInfo[], nRows: number, meta: Record<string, unknown>, sql: () => string): TableSource {
   let closed = false;
   return {
     path, format: 'parquet', columns, nRows, meta,
@@ -117,7 +120,7 @@ function parquetSource(path: string, inst: DuckDBInstance, columns: ColumnInfo[]
 }
 
 /** Casts in SQL so DuckDB hands back plain JS numbers, booleans and strings. */
-function selectExpr(name: string, kind: ColumnKind, id: DuckDBTypeId): string {
+function selectExpr(name: string, kind: ColumnKind, id: DuckDBTypeIdType): string {
   const c = ident(name);
   if (kind === 'string' && id !== DuckDBTypeId.VARCHAR) return `CAST(${c} AS VARCHAR)`;
   if (kind === 'int' || id === DuckDBTypeId.DECIMAL) return `CAST(${c} AS DOUBLE)`;

@@ -1,6 +1,8 @@
-import { DuckDBInstance } from '@duckdb/node-api';
+import { duckdb } from '../duckdb/nodeApi.ts';
 import { readingSummarySql, summaryFromRow, type ReadingSummary } from '../../core/readings/readingSummary.ts';
 import { sqlString } from '../parquet/sqlLiteral.ts';
+
+const { DuckDBInstance } = duckdb;
 
 /**
  * The per-reading summary of a readings Parquet file, computed by the shared SQL
