@@ -43,21 +43,12 @@ function tail(rng: Rng, negative: boolean): number {
  * for Monte Carlo errors); the tail beyond 3.44σ is exact. Works with any {@link Rng}.
  */
 export function standardNormal(rng: Rng): number {
-  for (;;) {
-    // One 32-bit draw: low 7 bits pick the layer, the upper 25 give a signed abscissa in (−1, 1).
-    const j = rng.nextUint32();
-    const i = j & (N - 1);
-    const u = ((j >>> 7) + 0.5) * (2 / 33554432) - 1;
-    if (Math.abs(u) < (RATIO[i] as number)) return u * (X[i] as number);
-    if (i === 0) return tail(rng, u < 0);
-    const x = u * (X[i] as number);
-    const x2 = x * x;
-    const xi = X[i] as number;
-    const xi1 = X[i + 1] as number;
-    const f0 = exp(-0.5 * (xi * xi - x2));
-    const f1 = exp(-0.5 * (xi1 * xi1 - x2));
-    if (f1 + rng.next() * (f0 - f1) < 1) return x;
-  }
+  // One 32-bit draw: low 7 bits pick the layer, the upper 25 give a signed abscissa in (−1, 1).
+  const j = rng.nextUint32();
+  const i = j & (N - 1);
+  const u = ((j >>> 7) + 0.5) * (2 / 33554432) - 1;
+  if (Math.abs(u) < (RATIO[i] as number)) return u * (X[i] as number);
+  return edge(rng, i, u);
 }
 
 /** Words taken from the generator at a time by {@link fillStandardNormals}. */
@@ -111,7 +102,7 @@ export function fillStandardNormals(rng: Rng, out: Float64Array): void {
   w.source = { next: () => 0, nextUint32: () => 0 };
 }
 
-/** standardNormal's wedge and tail for a first word of layer `i` and abscissa `u` already drawn. */
+/** The wedge and tail tests for a first word of layer `i` and abscissa `u` already drawn; a rejected point starts afresh. */
 function edge(rng: Rng, i: number, u: number): number {
   if (i === 0) return tail(rng, u < 0);
   const x = u * (X[i] as number);
