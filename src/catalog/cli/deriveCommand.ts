@@ -13,6 +13,7 @@ import type { TextOut } from './cliIo.ts';
 import { formatCount, formatDuration } from './formatting.ts';
 import type { DeriveArgs } from './parseDeriveArgs.ts';
 import { createProgressReporter } from './progressReporter.ts';
+import { readingsTable } from './readingsTable.ts';
 import { UsageError } from './UsageError.ts';
 import { terminalText } from '../../shared/text/terminalText.ts';
 
@@ -123,6 +124,11 @@ export function summaryText(s: DeriveSummary, plan: DerivePlan, label: string): 
       ? `Flagged ${rows(s.flagged)} with input problems (${formatCount(s.problems)} ${s.problems === 1 ? 'problem' : 'problems'}): listed in ${displayPath(s.paths.rejections)}`
       : `Flagged 0 rows: no input problems (${displayPath(s.paths.rejections)} has only its header)`,
     `Wrote ${displayPath(s.paths.catalog)} (${rows(s.rows)}, ${s.columns} columns) and ${displayPath(s.paths.meta)}`,
+    ...(s.readings.length > 0
+      ? [`Wrote ${displayPath(s.paths.readings)} (every object under ${s.readings.length} ${s.readings.length === 1 ? 'reading' : 'readings'}: ${s.readings.map((r) => r.reading).join(', ')})`]
+      : []),
+    ...(s.exports.length > 0 ? [`Wrote copies as ${s.exports.map(displayPath).join(', ')}`] : []),
+    ...readingsTable(s.readings, plan.config.settings.lightSeedMsun),
     `Done in ${formatDuration(s.elapsedMs)} (${formatCount(rate)} objects/s)`,
   ];
   return `${lines.map(terminalText).join('\n')}\n`;

@@ -40,6 +40,7 @@ import { READINGS_COLUMNS } from '../readings/readingsColumns.ts';
 import type { ReadingRowContext } from '../readings/readingsColumns.ts';
 import { buildReadingsMetadata, READINGS_METADATA_KEY } from '../readings/readingsMetadata.ts';
 import { summarizeReadings } from '../readings/summarizeReadings.ts';
+import type { ReadingSummary } from '../../core/readings/readingSummary.ts';
 
 /**
  * Rows per chunk read, normalized and sent to a worker. Small on purpose: the rows of the
@@ -104,6 +105,10 @@ export interface DeriveSummary {
   columns: number;
   threads: number;
   elapsedMs: number;
+  /** The headline numbers of each reading, in the config's order (also in the metadata). */
+  readings: ReadingSummary[];
+  /** ECSV, VOTable and FITS copies written beside the Parquet file. */
+  exports: string[];
 }
 
 interface PendingChunk {
@@ -306,6 +311,8 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
       columns: columns.length,
       threads: opts.threads,
       elapsedMs: performance.now() - started,
+      readings: readingsMeta.summary ?? [],
+      exports: exportTargets.map((t) => t.path),
     };
   } catch (error) {
     await deriver?.close().catch(() => undefined);

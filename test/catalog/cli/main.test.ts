@@ -81,6 +81,10 @@ describe('dawn-census', () => {
     expect(r.err).toContain('Derived 2 (40 draws each, seed 1, 1 thread)\n');
     expect(r.err).toContain('Flagged 1 row with input problems (1 problem): listed in cat.census.rejections.csv\n');
     expect(r.err).toMatch(/Wrote cat\.census\.parquet \(3 rows, \d+ columns\) and cat\.census\.meta\.json\n/);
+    expect(r.err).toContain('Wrote cat.census.readings.parquet (every object under 4 readings: standard, scattering_core, dense_gas, small_bolometric)\n');
+    // The headline numbers of each reading, as stored in the metadata (2 of the 3 rows derive).
+    expect(r.err).toMatch(/\n {2}standard +\d+ of 2 \(\d+ %\)/);
+    expect(r.err).toMatch(/\n {2}small_bolometric +/);
     expect((await readdir('.')).sort()).toEqual(['cat.census.meta.json', 'cat.census.parquet', 'cat.census.readings.parquet', 'cat.census.rejections.csv', 'cat.csv', 'census.config.yaml']);
     const meta = JSON.parse(await readFile('cat.census.meta.json', 'utf8'));
     expect(meta.title).toBeUndefined();
