@@ -9,6 +9,7 @@
  *   npm run bench:derive                       # 100,000 rows, 1000 draws, every core
  *   npm run bench:derive -- --rows 1000000     # the million-row memory case
  *   npm run bench:derive -- --draws 200 --threads 1
+ *   npm run bench:derive -- --readings standard   # the same work as before readings existed
  */
 import { spawn } from 'node:child_process';
 import { createWriteStream, existsSync, mkdirSync, readFileSync, renameSync, rmSync, writeFileSync } from 'node:fs';
@@ -29,10 +30,19 @@ interface BenchOptions {
   threads: number;
 }
 
+/** Readings to derive (the config's `readings.use`), or null for the default (every built-in reading). */
+let readingsUse: string[] | null = null;
+
 function parseOptions(argv: string[]): BenchOptions {
   const o: BenchOptions = { rows: 100_000, draws: 1000, threads: availableParallelism() };
   for (let i = 0; i < argv.length; i++) {
     const key = argv[i]!.replace(/^--/, '');
+    if (key === 'readings') {
+      const ids = (argv[++i] ?? '').split(',').filter((x) => /^[a-z_][a-z0-9_]*$/.test(x));
+      if (ids.length === 0) throw new Error('usage: bench-derive --readings id[,id…] (e.g. standard)');
+      readingsUse = ids;
+      continue;
+    }
     const value = Number(argv[++i]);
     if (!(key in o) || !Number.isInteger(value) || value < 1) throw new Error(`usage: bench-derive [--rows N] [--draws N] [--threads N] (bad ${argv[i - 1]} ${argv[i]})`);
     o[key as keyof BenchOptions] = value;
@@ -64,7 +74,8 @@ function writeConfig(): string {
   const unit = `${DEMO_MODEL.fluxUnitCgs} erg s-1 cm-2`;
   const mapped = ['flux_halpha', 'flux_halpha_err', 'flux_hbeta', 'flux_hbeta_err'].map((c) => `  ${c}: { unit: "${unit}" }`);
   const file = join(BENCH, 'bench.config.yaml');
-  writeFileSync(file, `title: benchmark (invented data)\ncolumns:\n${mapped.join('\n')}\n`);
+  const readings = readingsUse ? `readings: { use: [${readingsUse.join(', ')}] }\n` : '';
+  writeFileSync(file, `title: benchmark (invented data)\ncolumns:\n${mapped.join('\n')}\n${readings}`);
   return file;
 }
 
@@ -119,6 +130,7 @@ async function main(): Promise<void> {
   console.log(`rows          ${o.rows.toLocaleString('en-US')}`);
   console.log(`draws         ${o.draws}`);
   console.log(`threads       ${o.threads}`);
+  console.log(`readings      ${readingsUse ? readingsUse.join(', ') : 'every built-in reading (the default)'}`);
   console.log(`wall time     ${seconds.toFixed(2)} s (process start to exit)`);
   console.log(`objects/s     ${Math.round(o.rows / seconds).toLocaleString('en-US')}`);
   if (cpuSeconds !== null) {
