@@ -17,6 +17,7 @@ import { READINGS_INPUTS_PATH } from './readingsInputsFile.ts';
 import { builtInReading } from '../../core/readings/builtInReadings.ts';
 import type { RederivedRow } from './rederiveBatch.ts';
 import { summarizeRows } from './summarizeRows.ts';
+import { chartsToRedraw, sameColumns, SHIFT_COLUMNS } from './changedCharts.ts';
 import { placeSettings } from '../place/placeSettings.ts';
 import type { ChartRow } from '../population/populationCharts.ts';
 import type { ShiftRow } from './shiftChart.ts';
@@ -42,7 +43,7 @@ export async function mountReadingsPage(root: HTMLElement): Promise<void> {
   const options = JSON.parse(root.dataset.readings ?? '[]') as Option[];
   const have = JSON.parse(root.dataset.columns ?? '[]') as string[];
   const known = options.map((o) => o.id);
-  const label = (id: string) => options.find((o) => o.id === id)?.label ?? id;
+  const label = (id: string) => options.find((o) => o.id === id)?.label ?? (id === CUSTOM_READING_ID ? 'Your reading' : id);
   const state: ReadingsPageState = parseReadingsState(location.search, known);
   const charts = root.querySelector<HTMLElement>('#reading-charts')!;
   const switcher = root.querySelector<HTMLSelectElement>('[data-reading-switch]')!;
@@ -67,29 +68,64 @@ export async function mountReadingsPage(root: HTMLElement): Promise<void> {
     }
   };
 
+  // The reader's rows the charts, and the comparison, show now (null: a published reading): a new
+  // reading of the reader's keeps every drawing whose values it leaves unchanged (changedCharts.ts).
+  let chartsShow: RederivedRow[] | null = null;
+  let shiftShows: { pair: string; rows: RederivedRow[] } | null = null;
   let drawing = 0;
   const drawCharts = async () => {
     const ticket = ++drawing;
     charts.dataset.reading = '';
     markSummary();
     if (status) status.textContent = `Drawing the population under “${label(state.reading)}”…`;
-    const isCustom = state.reading === CUSTOM_READING_ID;
-    const rows = isCustom ? customChartRows() : await rowsUnderReading(state.reading, have, large);
-    if (ticket !== drawing) return;
-    // The reader's reading is redrawn in one go (one layout and paint for all charts); a published one chart by chart.
-    if (isCustom) for (const mount of charts.querySelectorAll<HTMLElement>('[data-chart]')) drawChart(mount, rows, { base, settings });
-    else await drawPopulation(charts, rows, { base, settings });
+    let count: number;
+    if (state.reading === CUSTOM_READING_ID) {
+      // The reader's reading is redrawn in one go (one layout and paint for all charts).
+      const next = custom ?? [];
+      const mounts = [...charts.querySelectorAll<HTMLElement>('[data-chart]')];
+      const redraw = new Set(chartsToRedraw(mounts.map((m) => m.dataset.chart ?? ''), chartsShow, next));
+      const rows = redraw.size ? customChartRows() : [];
+      for (const mount of mounts) if (redraw.has(mount.dataset.chart ?? '')) drawChart(mount, rows, { base, settings });
+      chartsShow = next;
+      charts.dataset.kept = String(mounts.length - redraw.size);
+      count = next.length;
+    } else {
+      // A published reading chart by chart.
+      chartsShow = null;
+      const rows = await rowsUnderReading(state.reading, have, large);
+      if (ticket !== drawing) return;
+      await drawPopulation(charts, rows, { base, settings });
+      count = rows.length;
+    }
     if (ticket !== drawing) return;
     charts.dataset.reading = state.reading;
-    if (status) status.textContent = `${rows.length} objects under “${label(state.reading)}”.`;
+    if (status) status.textContent = `${count} objects under “${label(state.reading)}”.`;
   };
   const drawShift = async () => {
-    shiftMount.dataset.pair = '';
-    const rows = state.a === CUSTOM_READING_ID || state.b === CUSTOM_READING_ID ? await customShift(state.a, state.b) : await shiftRows(state.a, state.b, large);
+    // Read before anything is drawn: read after the charts, it would lay the page out once more.
     const width = Math.max(320, Math.min(760, Math.floor(shiftMount.clientWidth || 640)));
+    shiftMount.dataset.pair = '';
+    const pair = `${state.a}>${state.b}`;
+    const withCustom = state.a === CUSTOM_READING_ID || state.b === CUSTOM_READING_ID;
+    if (withCustom && custom && shiftShows?.pair === pair && sameColumns(shiftShows.rows, custom, SHIFT_COLUMNS)) {
+      shiftShows.rows = custom;
+      shiftMount.dataset.pair = pair;
+      return;
+    }
+    shiftShows = null;
+    let rows: ShiftRow[];
+    if (withCustom) rows = await customShift(state.a, state.b);
+    else {
+      rows = await shiftRows(state.a, state.b, large);
+      // Both readings' values, kept for a later comparison with the reader's reading.
+      const values = rows;
+      if (!published.has(state.a)) published.set(state.a, Promise.resolve(new Map(values.map((r) => [r.id, { mbh: r.mbhA, edd: r.eddA }]))));
+      if (!published.has(state.b)) published.set(state.b, Promise.resolve(new Map(values.map((r) => [r.id, { mbh: r.mbhB, edd: r.eddB }]))));
+    }
     const el = readingShiftChart(rows, { labelA: label(state.a), labelB: label(state.b), width, height: Math.round(width * 0.66), ...(large && rows.length < objects ? { sampleOf: objects } : {}) });
     mountChart(shiftMount, el, { fileName: `census-shift-${state.a}-${state.b}`, label: `Shift from ${label(state.a)} to ${label(state.b)}`, base, onOpen: (id) => location.assign(objectHrefHere(id)) });
-    shiftMount.dataset.pair = `${state.a}>${state.b}`;
+    shiftMount.dataset.pair = pair;
+    if (withCustom && custom) shiftShows = { pair, rows: custom };
   };
   const guard = (mount: HTMLElement, p: Promise<void>) =>
     p.catch((err: unknown) => note(mount, err instanceof CensusDbError ? err.message : `This chart could not be drawn: ${String(err)}`));
@@ -195,7 +231,10 @@ export async function mountReadingsPage(root: HTMLElement): Promise<void> {
       selA.value = state.a;
       selB.value = state.b;
     }
-    await Promise.all([guard(charts, drawCharts()), guard(shiftMount, drawShift())]);
+    // The headline numbers are painted first; the charts and the comparison follow.
+    await nextPaint();
+    performance.mark('census:custom:summary');
+    await Promise.all([guard(shiftMount, drawShift()), guard(charts, drawCharts())]);
     await nextPaint();
     performance.mark('census:custom:drawn');
   };
