@@ -3,7 +3,6 @@
  * reading's row in the summary; the comparison draws each object's shift between two readings;
  * the URL carries the choices so a link reopens the same view.
  */
-import { formatFixed } from '../text/formatValue.ts';
 import { connection, CensusDbError } from '../db/duckdb.ts';
 import { mountChart } from '../charts/mountChart.ts';
 import { drawChart, drawPopulation, nextPaint, NARROW_ABOVE } from '../population/populationCharts.ts';
@@ -18,10 +17,14 @@ import { builtInReading } from '../../core/readings/builtInReadings.ts';
 import type { RederivedRow } from './rederiveBatch.ts';
 import { summarizeRows } from './summarizeRows.ts';
 import { chartsToRedraw, sameColumns, SHIFT_COLUMNS } from './changedCharts.ts';
+import { SUMMARY_FRACTIONS, SUMMARY_MEDIANS, summaryRowCells } from './summaryCells.ts';
 import { placeSettings } from '../place/placeSettings.ts';
 import type { ChartRow } from '../population/populationCharts.ts';
 import type { ShiftRow } from './shiftChart.ts';
 import type { ReadingSummary } from '../../core/readings/readingSummary.ts';
+
+/** A reading of the reader's kind that exercises every setting of the form, derived for a few objects at the workers' warm-up. */
+const WARM_CUSTOM = customReading({ deflation: 1.5, l5100Ratio: 4, dust: 'none', efficiency: 0.2 });
 
 /** Up to this many objects the workers are started and fed when the page has drawn, not at the form's first focus (a few MB of inputs). */
 const WARM_ON_LOAD_MAX = 20_000;
@@ -138,7 +141,8 @@ export async function mountReadingsPage(root: HTMLElement): Promise<void> {
   const deriveSettings = () => placeSettings(JSON.parse(root.dataset.metaSettings ?? '{}') as Record<string, unknown>).settings;
   // Workers started and fed the inputs ahead of the reader's first submit (after the first drawing, or on the form's first focus).
   const warmUp = () =>
-    startPopulation(`${base}${READINGS_INPUTS_PATH}`, { settings: deriveSettings(), reading: builtInReading('small_bolometric')! }).then((p) => {
+    startPopulation(`${base}${READINGS_INPUTS_PATH}`, { settings: deriveSettings(), readings: [builtInReading('small_bolometric')!, WARM_CUSTOM] }).then((p) => {
+      if (root.dataset.liveReady !== 'true') performance.mark('census:live:ready');
       root.dataset.liveReady = 'true';
       return p;
     });
@@ -172,29 +176,42 @@ export async function mountReadingsPage(root: HTMLElement): Promise<void> {
     }
   };
   const showCustomSummary = (s: ReadingSummary) => {
-    const table = root.querySelector<HTMLTableElement>('[data-readings-summary] tbody');
-    if (!table) return;
-    table.querySelector(`[data-reading-row="${CUSTOM_READING_ID}"]`)?.remove();
+    const table = root.querySelector<HTMLTableElement>('[data-readings-summary]');
+    const body = table?.querySelector('tbody');
+    if (!table || !body) return;
+    body.querySelector(`[data-reading-row="${CUSTOM_READING_ID}"]`)?.remove();
+    const standard = table.dataset.standard ? (JSON.parse(table.dataset.standard) as ReadingSummary) : undefined;
+    const cells = summaryRowCells(s, standard);
+    // The same cells as the build's rows (src/components/ReadingsSummary.astro).
+    const el = (tag: string, text: string, className?: string) => {
+      const e = document.createElement(tag);
+      if (className) e.className = className;
+      e.textContent = text;
+      return e;
+    };
+    const td = (key: string, ...parts: Node[]) => {
+      const cell = document.createElement('td');
+      cell.className = 'num';
+      cell.dataset.summary = key;
+      cell.append(...parts);
+      return cell;
+    };
     const tr = document.createElement('tr');
     tr.dataset.readingRow = CUSTOM_READING_ID;
-    const pct = (x: number | null) => (x === null ? '—' : `${(100 * x).toFixed(1)} %`);
-    const cell = (text: string, key?: string) => {
-      const td = document.createElement('td');
-      td.className = 'num';
-      if (key) td.dataset.summary = key;
-      td.textContent = text;
-      return td;
-    };
     const th = document.createElement('th');
     th.scope = 'row';
-    th.textContent = 'Your reading';
-    tr.append(th, cell(String(s.objects)));
-    for (const k of ['superEddington', 'overMassive', 'needsSuperEddingtonLight'] as const) {
-      const f = s[k];
-      tr.append(cell(`${pct(f.fraction)} (${f.k} of ${f.n}) ${f.lo === null ? '' : `${pct(f.lo)} – ${pct(f.hi)}`}`, k));
+    th.append('Your reading ', el('code', CUSTOM_READING_ID, 'small'));
+    const objectsCell = el('td', String(s.objects), 'num');
+    tr.append(th, objectsCell);
+    for (const k of SUMMARY_FRACTIONS) {
+      const f = cells.fractions[k];
+      const parts: Node[] = [el('strong', f.value), document.createTextNode(' '), el('span', f.count, 'small muted'), document.createElement('br'), el('span', f.interval, 'small muted')];
+      if (f.shift) parts.push(document.createElement('br'));
+      parts.push(el('span', f.shift, 'small'));
+      tr.append(td(k, ...parts));
     }
-    tr.append(cell(s.medianLogMbh === null ? '—' : formatFixed(s.medianLogMbh, 2), 'medianLogMbh'), cell(s.medianLogEddRatio === null ? '—' : formatFixed(s.medianLogEddRatio, 2), 'medianLogEddRatio'));
-    table.append(tr);
+    for (const k of SUMMARY_MEDIANS) tr.append(td(k, document.createTextNode(cells.medians[k].value), document.createElement('br'), el('span', cells.medians[k].shift, 'small')));
+    body.append(tr);
   };
   /** Derives the reader's reading; `follow`: the charts and the comparison switch to it (from the reading shown until now). */
   const deriveCustom = async (params: CustomReadingParams, follow: boolean) => {

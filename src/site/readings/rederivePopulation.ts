@@ -10,7 +10,7 @@ import type { DeriveSettings } from '../../core/derive/types.ts';
 import type { Reading } from '../../core/readings/reading.ts';
 import type { RederivedRow } from './rederiveBatch.ts';
 import { unpackRederived, type RederivedColumns } from './rederivedColumns.ts';
-import type { LoadedPopulation, RederiveRequest } from './rederiveWorker.ts';
+import type { LoadedPopulation, RederiveRequest, WarmUp } from './rederiveWorker.ts';
 import { workerSlice } from './workerSlice.ts';
 
 /** The population, loaded in the workers. */
@@ -49,11 +49,11 @@ let started: Promise<Population> | null = null;
 
 /**
  * Starts the workers and loads the population into each (once per page: later calls return the
- * same promise). `url`: the inputs file; `warm`: a reading each worker derives its slice under
- * (or part of it, for large slices), so the first real derivation runs compiled code and finds
- * the objects' deviates drawn.
+ * same promise). `url`: the inputs file; `warm`: the readings each worker warms up with (its
+ * slice under the first, or part of it for large slices; a few objects under the others), so
+ * the first real derivation runs compiled code and finds the objects' deviates drawn.
  */
-export function startPopulation(url: string, warm: { settings: DeriveSettings; reading: Reading }): Promise<Population> {
+export function startPopulation(url: string, warm: WarmUp): Promise<Population> {
   started ??= (async () => {
     const n = Math.max(1, Math.min(4, navigator.hardwareConcurrency || 2));
     const workers = Array.from({ length: n }, () => new Worker(new URL('./rederiveWorker.ts', import.meta.url), { type: 'module' }));
