@@ -60,6 +60,29 @@ describe('readings', () => {
     }
   });
 
+  it('fits its summary table, with the reader\'s own row, into a 1280 px wide screen without scrolling it sideways, and keeps the navigation on one line', async () => {
+    const site = await openSite(browser, inject('siteUrl'));
+    const { page } = site;
+    try {
+      await page.setViewportSize({ width: 1280, height: 900 });
+      await page.goto(new URL('readings/?reading=custom&a=standard&b=custom&deflation=2&l5100=5&dust=none', inject('siteUrl')).href);
+      await waitForReading(page, 'custom');
+      await expect(page.locator('[data-reading-row="custom"]').count()).resolves.toBe(1);
+      const [scroll, client] = await page.evaluate(() => {
+        const wrap = document.querySelector('[data-readings-summary]')!.closest('.table-wrap')!;
+        return [wrap.scrollWidth, wrap.clientWidth];
+      });
+      expect(scroll, `the summary table is ${scroll} px wide in a ${client} px frame`).toBeLessThanOrEqual(client);
+      // Every entry of the navigation on the first line (Download wrapped to a second line once).
+      const tops = await page.locator('header nav a').evaluateAll((as) => as.map((a) => Math.round(a.getBoundingClientRect().top)));
+      expect(tops.length).toBeGreaterThan(5);
+      expect(new Set(tops).size, `navigation rows at ${tops.join(', ')} px`).toBe(1);
+      expect(site.errors).toEqual([]);
+    } finally {
+      await site.close();
+    }
+  });
+
   it('restores the reading and the compared pair from its URL', async () => {
     const site = await openSite(browser, inject('siteUrl'));
     try {
@@ -137,7 +160,8 @@ describe('readings', () => {
       await page.waitForFunction(() => document.querySelector<HTMLElement>('[data-shift-chart]')?.dataset.pair === 'dense_gas>custom', undefined, { timeout: 60_000 });
       expect(await page.locator('#reading-charts [data-chart="mbh-z"] svg').innerHTML()).not.toBe(before);
       await expect(page.locator('[data-reading-row="custom"]').getAttribute('aria-current')).resolves.toBe('true');
-      await expect(page.locator('[data-reading-row="custom"] [data-summary="medianLogMbh"]').textContent()).resolves.toMatch(/^\d+\.\d\d$/);
+      // The median, then its shift from the standard reading, as in the build's rows.
+      await expect(page.locator('[data-reading-row="custom"] [data-summary="medianLogMbh"]').textContent()).resolves.toMatch(/^\d+\.\d\d[+−]\d+\.\d\d dex$/);
       await expect(page.locator('[data-reading-switch]').inputValue()).resolves.toBe('custom');
       const url = new URL(page.url());
       expect(Object.fromEntries(url.searchParams)).toEqual({ reading: 'custom', a: 'dense_gas', b: 'custom', deflation: '2.5', dust: 'none', eff: '0.2' });

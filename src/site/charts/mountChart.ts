@@ -129,12 +129,16 @@ export function mountChart(container: HTMLElement, chart: PlotElement, options: 
   };
   chart.addEventListener('click', onClick);
 
-  // keyboard: the svg takes focus; arrows walk the points in x order, Enter opens
-  const order: ChartPoint[] = index ? [...index.points].sort((a, b) => a.x - b.x || a.y - b.y) : [];
+  // keyboard: the svg takes focus; arrows walk the points in x order, Enter opens. The order is
+  // sorted at the first key press, not at every drawing (10,000 points on the Readings page).
+  let sorted: ChartPoint[] | null = null;
+  const ordered = (): ChartPoint[] => (sorted ??= index ? [...index.points].sort((a, b) => a.x - b.x || a.y - b.y) : []);
+  const count = index?.points.length ?? 0;
   let at = -1;
   let ring: SVGCircleElement | null = null;
   const describe = (p: ChartPoint) => (index ? hoverText(p, index) : p.id).replace(/\n/g, '; ');
   const show = () => {
+    const order = ordered();
     const p = order[at];
     if (!p || !svg) return;
     const x = chart.scale?.('x');
@@ -153,6 +157,7 @@ export function mountChart(container: HTMLElement, chart: PlotElement, options: 
     status.textContent = `${describe(p)}${p.role === 'extra' ? '' : ' — press Enter to open its page'} (${at + 1} of ${order.length})`;
   };
   const onKey = (e: KeyboardEvent) => {
+    const order = ordered();
     if (!order.length) return;
     const step: Record<string, number> = { ArrowRight: 1, ArrowDown: 1, ArrowLeft: -1, ArrowUp: -1, PageDown: 10, PageUp: -10 };
     if (e.key in step) at = Math.min(order.length - 1, Math.max(0, (at < 0 ? 0 : at + step[e.key]!) ));
@@ -174,7 +179,7 @@ export function mountChart(container: HTMLElement, chart: PlotElement, options: 
   if (svg) {
     svg.setAttribute('tabindex', '0');
     svg.setAttribute('role', 'group');
-    svg.setAttribute('aria-label', `${options.label}. ${order.length ? 'Use the arrow keys to move between objects and Enter to open one.' : ''}`);
+    svg.setAttribute('aria-label', `${options.label}. ${count ? 'Use the arrow keys to move between objects and Enter to open one.' : ''}`);
     svg.addEventListener('keydown', onKey);
   }
   return () => {

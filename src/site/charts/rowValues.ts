@@ -10,7 +10,8 @@ export function num(cell: CatalogCell): number | null {
 /** True when the row's comma-separated `flags` contain `flag`. */
 export function hasFlag(row: CatalogRow, flag: string): boolean {
   const f = row.flags;
-  if (typeof f !== 'string' || f === '') return false;
+  // most rows lack the flag: a substring test first spares splitting their flags (4 charts × 10,000 rows per redraw)
+  if (typeof f !== 'string' || !f.includes(flag)) return false;
   return f.split(',').some((s) => s.trim() === flag);
 }
 

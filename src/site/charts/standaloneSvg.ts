@@ -1,3 +1,5 @@
+import { rasterAsImages } from './rasterArrows.ts';
+
 const SVG_NS = 'http://www.w3.org/2000/svg';
 
 /** Splits `text` into lines of at most `maxChars` characters at spaces. */
@@ -17,7 +19,8 @@ export function wrapText(text: string, maxChars: number): string[] {
 /**
  * A copy of a chart's SVG that stands on its own as a file: white background, the figure's
  * title above and its caption below as SVG text (so a downloaded figure keeps its caveats),
- * the SVG namespace declared, and the hover tip and keyboard focus ring removed.
+ * the SVG namespace declared, the hover tip and keyboard focus ring removed, and canvas layers
+ * (rasterArrows.ts) turned into images.
  */
 export function standaloneSvg(chart: Element): SVGSVGElement {
   const doc = chart.ownerDocument;
@@ -25,6 +28,7 @@ export function standaloneSvg(chart: Element): SVGSVGElement {
   if (!svg) throw new Error('the chart has no <svg> to export');
   const copy = svg.cloneNode(true) as SVGSVGElement;
   for (const g of [...copy.querySelectorAll('g[aria-label="tip"], .census-focus')]) g.remove();
+  rasterAsImages(svg, copy);
   const width = Number(svg.getAttribute('width') ?? 640);
   const height = Number(svg.getAttribute('height') ?? 400);
   const figure = chart.tagName.toLowerCase() === 'figure' ? chart : null;

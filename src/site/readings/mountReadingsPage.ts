@@ -3,7 +3,6 @@
  * reading's row in the summary; the comparison draws each object's shift between two readings;
  * the URL carries the choices so a link reopens the same view.
  */
-import { formatFixed } from '../text/formatValue.ts';
 import { connection, CensusDbError } from '../db/duckdb.ts';
 import { mountChart } from '../charts/mountChart.ts';
 import { drawChart, drawPopulation, nextPaint, NARROW_ABOVE } from '../population/populationCharts.ts';
@@ -17,10 +16,15 @@ import { READINGS_INPUTS_PATH } from './readingsInputsFile.ts';
 import { builtInReading } from '../../core/readings/builtInReadings.ts';
 import type { RederivedRow } from './rederiveBatch.ts';
 import { summarizeRows } from './summarizeRows.ts';
+import { chartsToRedraw, sameColumns, SHIFT_COLUMNS } from './changedCharts.ts';
+import { SUMMARY_FRACTIONS, SUMMARY_MEDIANS, summaryRowCells } from './summaryCells.ts';
 import { placeSettings } from '../place/placeSettings.ts';
 import type { ChartRow } from '../population/populationCharts.ts';
 import type { ShiftRow } from './shiftChart.ts';
 import type { ReadingSummary } from '../../core/readings/readingSummary.ts';
+
+/** A reading of the reader's kind that exercises every setting of the form, derived for a few objects at the workers' warm-up. */
+const WARM_CUSTOM = customReading({ deflation: 1.5, l5100Ratio: 4, dust: 'none', efficiency: 0.2 });
 
 /** Up to this many objects the workers are started and fed when the page has drawn, not at the form's first focus (a few MB of inputs). */
 const WARM_ON_LOAD_MAX = 20_000;
@@ -42,7 +46,7 @@ export async function mountReadingsPage(root: HTMLElement): Promise<void> {
   const options = JSON.parse(root.dataset.readings ?? '[]') as Option[];
   const have = JSON.parse(root.dataset.columns ?? '[]') as string[];
   const known = options.map((o) => o.id);
-  const label = (id: string) => options.find((o) => o.id === id)?.label ?? id;
+  const label = (id: string) => options.find((o) => o.id === id)?.label ?? (id === CUSTOM_READING_ID ? 'Your reading' : id);
   const state: ReadingsPageState = parseReadingsState(location.search, known);
   const charts = root.querySelector<HTMLElement>('#reading-charts')!;
   const switcher = root.querySelector<HTMLSelectElement>('[data-reading-switch]')!;
@@ -67,29 +71,64 @@ export async function mountReadingsPage(root: HTMLElement): Promise<void> {
     }
   };
 
+  // The reader's rows the charts, and the comparison, show now (null: a published reading): a new
+  // reading of the reader's keeps every drawing whose values it leaves unchanged (changedCharts.ts).
+  let chartsShow: RederivedRow[] | null = null;
+  let shiftShows: { pair: string; rows: RederivedRow[] } | null = null;
   let drawing = 0;
   const drawCharts = async () => {
     const ticket = ++drawing;
     charts.dataset.reading = '';
     markSummary();
     if (status) status.textContent = `Drawing the population under “${label(state.reading)}”…`;
-    const isCustom = state.reading === CUSTOM_READING_ID;
-    const rows = isCustom ? customChartRows() : await rowsUnderReading(state.reading, have, large);
-    if (ticket !== drawing) return;
-    // The reader's reading is redrawn in one go (one layout and paint for all charts); a published one chart by chart.
-    if (isCustom) for (const mount of charts.querySelectorAll<HTMLElement>('[data-chart]')) drawChart(mount, rows, { base, settings });
-    else await drawPopulation(charts, rows, { base, settings });
+    let count: number;
+    if (state.reading === CUSTOM_READING_ID) {
+      // The reader's reading is redrawn in one go (one layout and paint for all charts).
+      const next = custom ?? [];
+      const mounts = [...charts.querySelectorAll<HTMLElement>('[data-chart]')];
+      const redraw = new Set(chartsToRedraw(mounts.map((m) => m.dataset.chart ?? ''), chartsShow, next));
+      const rows = redraw.size ? customChartRows() : [];
+      for (const mount of mounts) if (redraw.has(mount.dataset.chart ?? '')) drawChart(mount, rows, { base, settings });
+      chartsShow = next;
+      charts.dataset.kept = String(mounts.length - redraw.size);
+      count = next.length;
+    } else {
+      // A published reading chart by chart.
+      chartsShow = null;
+      const rows = await rowsUnderReading(state.reading, have, large);
+      if (ticket !== drawing) return;
+      await drawPopulation(charts, rows, { base, settings });
+      count = rows.length;
+    }
     if (ticket !== drawing) return;
     charts.dataset.reading = state.reading;
-    if (status) status.textContent = `${rows.length} objects under “${label(state.reading)}”.`;
+    if (status) status.textContent = `${count} objects under “${label(state.reading)}”.`;
   };
   const drawShift = async () => {
-    shiftMount.dataset.pair = '';
-    const rows = state.a === CUSTOM_READING_ID || state.b === CUSTOM_READING_ID ? await customShift(state.a, state.b) : await shiftRows(state.a, state.b, large);
+    // Read before anything is drawn: read after the charts, it would lay the page out once more.
     const width = Math.max(320, Math.min(760, Math.floor(shiftMount.clientWidth || 640)));
+    shiftMount.dataset.pair = '';
+    const pair = `${state.a}>${state.b}`;
+    const withCustom = state.a === CUSTOM_READING_ID || state.b === CUSTOM_READING_ID;
+    if (withCustom && custom && shiftShows?.pair === pair && sameColumns(shiftShows.rows, custom, SHIFT_COLUMNS)) {
+      shiftShows.rows = custom;
+      shiftMount.dataset.pair = pair;
+      return;
+    }
+    shiftShows = null;
+    let rows: ShiftRow[];
+    if (withCustom) rows = await customShift(state.a, state.b);
+    else {
+      rows = await shiftRows(state.a, state.b, large);
+      // Both readings' values, kept for a later comparison with the reader's reading.
+      const values = rows;
+      if (!published.has(state.a)) published.set(state.a, Promise.resolve(new Map(values.map((r) => [r.id, { mbh: r.mbhA, edd: r.eddA }]))));
+      if (!published.has(state.b)) published.set(state.b, Promise.resolve(new Map(values.map((r) => [r.id, { mbh: r.mbhB, edd: r.eddB }]))));
+    }
     const el = readingShiftChart(rows, { labelA: label(state.a), labelB: label(state.b), width, height: Math.round(width * 0.66), ...(large && rows.length < objects ? { sampleOf: objects } : {}) });
     mountChart(shiftMount, el, { fileName: `census-shift-${state.a}-${state.b}`, label: `Shift from ${label(state.a)} to ${label(state.b)}`, base, onOpen: (id) => location.assign(objectHrefHere(id)) });
-    shiftMount.dataset.pair = `${state.a}>${state.b}`;
+    shiftMount.dataset.pair = pair;
+    if (withCustom && custom) shiftShows = { pair, rows: custom };
   };
   const guard = (mount: HTMLElement, p: Promise<void>) =>
     p.catch((err: unknown) => note(mount, err instanceof CensusDbError ? err.message : `This chart could not be drawn: ${String(err)}`));
@@ -102,7 +141,8 @@ export async function mountReadingsPage(root: HTMLElement): Promise<void> {
   const deriveSettings = () => placeSettings(JSON.parse(root.dataset.metaSettings ?? '{}') as Record<string, unknown>).settings;
   // Workers started and fed the inputs ahead of the reader's first submit (after the first drawing, or on the form's first focus).
   const warmUp = () =>
-    startPopulation(`${base}${READINGS_INPUTS_PATH}`, { settings: deriveSettings(), reading: builtInReading('small_bolometric')! }).then((p) => {
+    startPopulation(`${base}${READINGS_INPUTS_PATH}`, { settings: deriveSettings(), readings: [builtInReading('small_bolometric')!, WARM_CUSTOM] }).then((p) => {
+      if (root.dataset.liveReady !== 'true') performance.mark('census:live:ready');
       root.dataset.liveReady = 'true';
       return p;
     });
@@ -136,29 +176,42 @@ export async function mountReadingsPage(root: HTMLElement): Promise<void> {
     }
   };
   const showCustomSummary = (s: ReadingSummary) => {
-    const table = root.querySelector<HTMLTableElement>('[data-readings-summary] tbody');
-    if (!table) return;
-    table.querySelector(`[data-reading-row="${CUSTOM_READING_ID}"]`)?.remove();
+    const table = root.querySelector<HTMLTableElement>('[data-readings-summary]');
+    const body = table?.querySelector('tbody');
+    if (!table || !body) return;
+    body.querySelector(`[data-reading-row="${CUSTOM_READING_ID}"]`)?.remove();
+    const standard = table.dataset.standard ? (JSON.parse(table.dataset.standard) as ReadingSummary) : undefined;
+    const cells = summaryRowCells(s, standard);
+    // The same cells as the build's rows (src/components/ReadingsSummary.astro).
+    const el = (tag: string, text: string, className?: string) => {
+      const e = document.createElement(tag);
+      if (className) e.className = className;
+      e.textContent = text;
+      return e;
+    };
+    const td = (key: string, ...parts: Node[]) => {
+      const cell = document.createElement('td');
+      cell.className = 'num';
+      cell.dataset.summary = key;
+      cell.append(...parts);
+      return cell;
+    };
     const tr = document.createElement('tr');
     tr.dataset.readingRow = CUSTOM_READING_ID;
-    const pct = (x: number | null) => (x === null ? '—' : `${(100 * x).toFixed(1)} %`);
-    const cell = (text: string, key?: string) => {
-      const td = document.createElement('td');
-      td.className = 'num';
-      if (key) td.dataset.summary = key;
-      td.textContent = text;
-      return td;
-    };
     const th = document.createElement('th');
     th.scope = 'row';
-    th.textContent = 'Your reading';
-    tr.append(th, cell(String(s.objects)));
-    for (const k of ['superEddington', 'overMassive', 'needsSuperEddingtonLight'] as const) {
-      const f = s[k];
-      tr.append(cell(`${pct(f.fraction)} (${f.k} of ${f.n}) ${f.lo === null ? '' : `${pct(f.lo)} – ${pct(f.hi)}`}`, k));
+    th.append('Your reading ', el('code', CUSTOM_READING_ID, 'small'));
+    const objectsCell = el('td', String(s.objects), 'num');
+    tr.append(th, objectsCell);
+    for (const k of SUMMARY_FRACTIONS) {
+      const f = cells.fractions[k];
+      const parts: Node[] = [el('strong', f.value), document.createTextNode(' '), el('span', f.count, 'small muted'), document.createElement('br'), el('span', f.interval, 'small muted')];
+      if (f.shift) parts.push(document.createElement('br'));
+      parts.push(el('span', f.shift, 'small'));
+      tr.append(td(k, ...parts));
     }
-    tr.append(cell(s.medianLogMbh === null ? '—' : formatFixed(s.medianLogMbh, 2), 'medianLogMbh'), cell(s.medianLogEddRatio === null ? '—' : formatFixed(s.medianLogEddRatio, 2), 'medianLogEddRatio'));
-    table.append(tr);
+    for (const k of SUMMARY_MEDIANS) tr.append(td(k, document.createTextNode(cells.medians[k].value), document.createElement('br'), el('span', cells.medians[k].shift, 'small')));
+    body.append(tr);
   };
   /** Derives the reader's reading; `follow`: the charts and the comparison switch to it (from the reading shown until now). */
   const deriveCustom = async (params: CustomReadingParams, follow: boolean) => {
@@ -195,7 +248,10 @@ export async function mountReadingsPage(root: HTMLElement): Promise<void> {
       selA.value = state.a;
       selB.value = state.b;
     }
-    await Promise.all([guard(charts, drawCharts()), guard(shiftMount, drawShift())]);
+    // The headline numbers are painted first; the charts and the comparison follow.
+    await nextPaint();
+    performance.mark('census:custom:summary');
+    await Promise.all([guard(shiftMount, drawShift()), guard(charts, drawCharts())]);
     await nextPaint();
     performance.mark('census:custom:drawn');
   };

@@ -4,10 +4,12 @@ import type { ExampleQuery } from '../query/exampleQueries.ts';
 export const READINGS_EXAMPLE_QUERIES: readonly ExampleQuery[] = [
   {
     title: 'Super-Eddington under every reading',
+    // Every reading's P above 0.84; bool_and would skip a reading without P (an object whose
+    // Eddington ratio is a bound there) and list the object anyway.
     sql: `SELECT id, min(p_super_eddington) AS lowest_p_super_eddington, count(*) AS readings
 FROM readings
 GROUP BY id
-HAVING bool_and(p_super_eddington > 0.84)
+HAVING count(*) FILTER (WHERE p_super_eddington > 0.84) = count(*)
 ORDER BY lowest_p_super_eddington DESC`,
   },
   {

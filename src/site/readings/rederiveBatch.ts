@@ -6,6 +6,8 @@
 import type { DeriveSettings, ObjectInputs } from '../../core/derive/types.ts';
 import { deriveObject } from '../../core/derive/deriveObject.ts';
 import { createRng, seedFor } from '../../core/random/index.ts';
+import type { DrawBank } from '../../core/random/drawBank.ts';
+import type { Rng } from '../../core/random/rng.ts';
 import type { Reading } from '../../core/readings/reading.ts';
 import { deriveUnderReading } from '../../core/readings/deriveUnderReading.ts';
 
@@ -33,11 +35,21 @@ export interface RederivedRow {
   flags: string;
 }
 
-/** Derives `inputs` under `reading`; an object whose derivation throws gets nulls and the flag derive_failed. */
-export function rederiveBatch(inputs: readonly ObjectInputs[], settings: DeriveSettings, reading: Reading): RederivedRow[] {
+/**
+ * Derives `inputs` under `reading`; an object whose derivation throws gets nulls and the flag
+ * derive_failed. `randomFor` gives an object's random stream, freshly seeded from
+ * (settings.seed, id), or its bank of deviates made from that stream (keptDrawBanks.ts); by
+ * default the stream.
+ */
+export function rederiveBatch(
+  inputs: readonly ObjectInputs[],
+  settings: DeriveSettings,
+  reading: Reading,
+  randomFor: (input: ObjectInputs) => Rng | DrawBank = (input) => createRng(seedFor(settings.seed, input.id)),
+): RederivedRow[] {
   return inputs.map((input) => {
     try {
-      const d = deriveUnderReading(input, settings, reading, deriveObject, createRng(seedFor(settings.seed, input.id)));
+      const d = deriveUnderReading(input, settings, reading, deriveObject, randomFor(input));
       return {
         id: input.id,
         log_mbh: d.logMbh,

@@ -2,6 +2,7 @@
  * Re-derives the whole population under a reading in web workers (one per core, at most 4).
  * The workers are started, fed the population's inputs (fetched once by each, from the build's
  * data/readings-inputs.json) and warmed up before the reader asks, by {@link startPopulation};
+ * each keeps its objects' deviates between derivations (keptDrawBanks.ts);
  * a derivation then sends each worker only the reading and its slice's bounds, and the rows
  * come back packed in transferred typed arrays, in input order.
  */
@@ -9,7 +10,8 @@ import type { DeriveSettings } from '../../core/derive/types.ts';
 import type { Reading } from '../../core/readings/reading.ts';
 import type { RederivedRow } from './rederiveBatch.ts';
 import { unpackRederived, type RederivedColumns } from './rederivedColumns.ts';
-import type { LoadedPopulation, RederiveRequest } from './rederiveWorker.ts';
+import type { LoadedPopulation, RederiveRequest, WarmUp } from './rederiveWorker.ts';
+import { workerSlice } from './workerSlice.ts';
 
 /** The population, loaded in the workers. */
 export interface Population {
@@ -47,25 +49,26 @@ let started: Promise<Population> | null = null;
 
 /**
  * Starts the workers and loads the population into each (once per page: later calls return the
- * same promise). `url`: the inputs file; `warm`: a reading to derive one object with, so the
- * first real derivation runs compiled code.
+ * same promise). `url`: the inputs file; `warm`: the readings each worker warms up with (its
+ * slice under the first, or part of it for large slices; a few objects under the others), so
+ * the first real derivation runs compiled code and finds the objects' deviates drawn.
  */
-export function startPopulation(url: string, warm: { settings: DeriveSettings; reading: Reading }): Promise<Population> {
+export function startPopulation(url: string, warm: WarmUp): Promise<Population> {
   started ??= (async () => {
     const n = Math.max(1, Math.min(4, navigator.hardwareConcurrency || 2));
     const workers = Array.from({ length: n }, () => new Worker(new URL('./rederiveWorker.ts', import.meta.url), { type: 'module' }));
-    const replies = await Promise.all(workers.map((w, i) => ask(w, { type: 'load', seq: seq++, url, warm, describe: i === 0 })));
+    const replies = await Promise.all(workers.map((w, i) => ask(w, { type: 'load', seq: seq++, url, warm, worker: i, workers: workers.length, describe: i === 0 })));
     const first = replies[0]!.loaded!;
     const ids = first.ids!;
-    const size = Math.ceil(first.n / workers.length);
+    const slices = workers.map((_, i) => workerSlice(first.n, i, workers.length));
     return {
       ids,
       z: first.z!,
       logMstar: first.logMstar!,
       async derive(settings, reading) {
         const t0 = performance.now();
-        const parts = await Promise.all(workers.map((w, i) => ask(w, { type: 'derive', seq: seq++, from: i * size, to: Math.min(first.n, (i + 1) * size), settings, reading })));
-        const rows = parts.flatMap((p, i) => unpackRederived(p.packed!, ids.slice(i * size, Math.min(first.n, (i + 1) * size))));
+        const parts = await Promise.all(workers.map((w, i) => ask(w, { type: 'derive', seq: seq++, from: slices[i]![0], to: slices[i]![1], settings, reading })));
+        const rows = parts.flatMap((p, i) => unpackRederived(p.packed!, ids.slice(slices[i]![0], slices[i]![1])));
         return { rows, ms: performance.now() - t0 };
       },
     };
