@@ -43,7 +43,7 @@ export interface DerivedKey {
 }
 
 /** Arrays kept per role and object: readings use at most a few variants of one measurement (as measured, a deflated or core width). */
-const DERIVED_PER_ROLE = 4;
+export const DERIVED_PER_ROLE = 4;
 
 interface DerivedEntry {
   value: number;

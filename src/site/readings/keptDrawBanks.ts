@@ -10,7 +10,7 @@
  */
 import { drawCount } from '../../core/derive/drawCount.ts';
 import type { DeriveSettings } from '../../core/derive/types.ts';
-import { ReusableDrawBank, type DrawBank } from '../../core/random/drawBank.ts';
+import { DERIVED_PER_ROLE, ReusableDrawBank, type DerivedKey, type DrawBank } from '../../core/random/drawBank.ts';
 import { createRng, seedFor } from '../../core/random/index.ts';
 import type { Rng } from '../../core/random/rng.ts';
 
@@ -20,6 +20,7 @@ export const KEPT_DEVIATES_BYTES = 64 * 1024 * 1024;
 /** A bank that never resets, counting the bytes of each role it fills. */
 class KeptBank implements DrawBank {
   private readonly filled = new Set<string>();
+  private readonly derivedKeys = new Map<string, number>();
   constructor(
     private readonly bank: ReusableDrawBank,
     private readonly onFill: (bytes: number) => void,
@@ -47,6 +48,24 @@ class KeptBank implements DrawBank {
 
   redraws(role: string): Rng {
     return this.bank.redraws(role);
+  }
+
+  get generation(): number {
+    return this.bank.generation;
+  }
+
+  derived(role: string, key: DerivedKey, fill: (out: Float64Array) => void): Float64Array {
+    // The bank keeps at most DERIVED_PER_ROLE such arrays per role (the log10 of a width as
+    // measured, deflated, …), reusing them for new keys: count each of those once.
+    const seen = this.derivedKeys.get(role) ?? 0;
+    if (seen < DERIVED_PER_ROLE) {
+      const k = `${key.kind}:${key.value}:${key.errLo}:${key.errHi}`;
+      if (!this.filled.has(`d:${role}:${k}`)) {
+        this.derivedKeys.set(role, seen + 1);
+        this.count(`d:${role}:${k}`);
+      }
+    }
+    return this.bank.derived(role, key, fill);
   }
 }
 

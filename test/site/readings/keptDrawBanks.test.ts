@@ -71,4 +71,19 @@ describe('kept banks of deviates', () => {
     expect(rederiveBatch([o!], fewer, deflated, (x) => banks.randomFor(x.id, fewer))).toEqual(rederiveBatch([o!], fewer, deflated));
     expect(banks.kept).toBe(1);
   });
+
+  it('count the derived arrays a bank keeps (at most four per role) however many deflation factors the reader tries', () => {
+    const banks = new KeptDrawBanks();
+    const [o] = objects(1);
+    const use = (r: typeof deflated) => rederiveBatch([o!], settings, r, (x) => banks.randomFor(x.id, settings));
+    use(SMALL_BOLOMETRIC_READING);
+    const first = banks.heldBytes;
+    const spec = (d: number) => parseReadingSpec({ id: 'custom', premise: 'A test premise.', references: ['none'], width: 'deflated', deflation: d, dust: 'none' }, 'test');
+    for (const d of [1.5, 2, 2.5, 3, 3.5, 4, 4.5, 5]) use(spec(d));
+    // Each deflation is a new width measurement, so a new log10 array of the width role; the bank
+    // reuses four such arrays per role, so at most three more than the first derivation made.
+    const array = settings.draws * 8;
+    expect(banks.heldBytes).toBeGreaterThan(first);
+    expect(banks.heldBytes).toBeLessThanOrEqual(first + 3 * array);
+  });
 });
