@@ -29,8 +29,13 @@ describe('the population fit on the committed demo catalog', () => {
       const truth = JSON.parse(readFileSync(join(root, 'data-demo/truth.json'), 'utf8')) as { relation: { alpha: number; beta: number; sigma: number } };
       const summary = JSON.parse(readFileSync(join(dir, 'out/catalog.population.json'), 'utf8')) as {
         relation: { intrinsic: Record<'alpha' | 'beta' | 'sigma', Interval>; naive: Record<'alpha' | 'beta' | 'sigma', Interval>; sampler: { intrinsic: { converged: boolean } } };
+        assumptions: { sampler: { move: string } };
+        references: { sampler: string };
       };
       expect(summary.relation.sampler.intrinsic.converged).toBe(true);
+      // The summary names the sampler's proposal and its sources.
+      expect(summary.assumptions.sampler.move).toMatch(/differential evolution/);
+      expect(summary.references.sampler).toMatch(/ter Braak 2006/);
       // 95 % intervals (2.5th–97.5th percentiles) from the posterior samples the run wrote.
       const db = await DuckDBInstance.create(':memory:');
       const con = await db.connect();

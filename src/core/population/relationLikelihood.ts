@@ -36,7 +36,9 @@ export const RELATION_PIVOT = 10;
 
 /**
  * Detection probability for a Gaussian (M, u) belief whose covariance is fixed: the criteria's standard deviations
- * and correlation are computed once (`prepare`), then each call moves only the means (`at`).
+ * and correlation are computed once (`prepare`), then each call moves only the means (`along`). On the uniform M*
+ * grid the means move by a fixed step from node to node, so a whole window is one line in (h, k)
+ * (see bivariateNormalCdfAlongLine).
  */
 interface DetectionAt {
   /**
@@ -93,7 +95,9 @@ function prepare(tab: SelectionTable, erdf: EddingtonRatioDistribution, vM: numb
  * virial mass (normal about the true mass with the calibration's scatter) and λ_Edd (the assumed log-normal). Given
  * M*, everything is Gaussian and the criteria are linear, so the detection probability is a bivariate normal
  * probability, exact. The approach follows the selection-aware fits of the field (e.g. Li et al. 2024,
- * arXiv:2403.00074); this implementation is our own. Returns a function of (alpha, beta, sigma).
+ * arXiv:2403.00074); this implementation is our own. Returns a function of (alpha, beta, sigma). Each object's
+ * window of M* nodes, and each table's whole grid, is evaluated at once (the Gaussian factors and the bivariate
+ * quadrature by recurrence along the window, {@link addExpQuadratic}): the same sums as node by node, to ~1e-12.
  * @param data - the objects.
  * @param tables - their selection tables.
  * @param grids - the stellar-mass grid of the tables.
