@@ -137,6 +137,9 @@ export function relationLogLikelihood(
   const scratch: BivariateNodesScratch = { scale: 0, sin: new Float64Array(20), invCos2: new Float64Array(20), w: new Float64Array(20), n: 0 };
   // The grid is uniform, so every mean below moves by a fixed step from node to node (see DetectionAt.along).
   const step = nm > 1 ? (ms[1] as number) - (ms[0] as number) : 0;
+  for (let j = 1; j < nm; j++) {
+    if (Math.abs((ms[j] as number) - (ms[0] as number) - j * step) > 1e-9) throw new RangeError('relationLogLikelihood: the M* grid must be uniform');
+  }
   const detBuf = new Float64Array(nm);
   const gaussBuf = new Float64Array(nm);
   return (alpha: number, beta: number, sigma: number): number => {

@@ -73,3 +73,11 @@ describe('relationLogLikelihood', () => {
     }
   });
 });
+
+describe('relationLogLikelihood on a grid that is not uniform', () => {
+  it('refuses it, since it steps the means by one fixed step from node to node', () => {
+    const grids = { mStar: Float64Array.from([8, 8.1, 8.25, 8.3]) };
+    const table = naiveTable(grids);
+    expect(() => relationLogLikelihood([{ x: 8.1, ex: 0.2, y: 7, ey: 0.1, table: 0 }], [table], grids, erdf)).toThrow(/uniform/);
+  });
+});
