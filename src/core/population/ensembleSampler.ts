@@ -55,8 +55,9 @@ export interface EnsembleResult {
 
 /**
  * Affine-invariant ensemble MCMC with the stretch move (Goodman & Weare 2010, CAMCoS 5, 65,
- * eqs. 7 and 10), updating the two halves of the ensemble in turn as Foreman-Mackey et al. 2013
- * (PASP 125, 306, Algorithm 3) do; written here from the papers. The proposals of one half depend only on the
+ * eqs. 7 and 10) or the differential-evolution move (ter Braak 2006; see {@link EnsembleOptions.move}), updating
+ * the two halves of the ensemble in turn as Foreman-Mackey et al. 2013 (PASP 125, 306, Algorithm 3) do; written
+ * here from the papers. The proposals of one half depend only on the
  * other half, so they are evaluated as one batch (in parallel when `logProb` uses threads). The random numbers
  * are drawn in a fixed order whatever evaluates the batch: deterministic for a given Rng.
  * @param logProb - log posterior density of a batch of positions.
