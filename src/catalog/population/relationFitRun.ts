@@ -1,24 +1,17 @@
 import type { Cosmology } from '../../core/cosmology/cosmology.ts';
-import type { DeriveSettings, LineId, Percentiles } from '../../core/derive/types.ts';
+import type { DeriveSettings, Percentiles } from '../../core/derive/types.ts';
 import { getLocalRelation } from '../../core/local/localRelations.ts';
 import { localLogMbh } from '../../core/local/localRelation.ts';
-import type { ForwardRecipe } from '../../core/population/detectionModel.ts';
 import { detectableFraction, fitRelation, selectionBias, type RelationFit } from '../../core/population/fitRelation.ts';
 import { RELATION_PIVOT } from '../../core/population/relationLikelihood.ts';
-import { buildSelectionTables, naiveTable } from '../../core/population/selectionTables.ts';
+import { naiveTable } from '../../core/population/selectionTables.ts';
 import { createRng } from '../../core/random/createRng.ts';
 import { seedFor } from '../../core/random/seedFor.ts';
-import { CALIBRATIONS } from '../../core/virial/calibrations.ts';
-import type { VirialCalibration } from '../../core/virial/virialCalibration.ts';
 import type { SurveyConfig } from '../config/SurveyConfig.ts';
 import type { ObjectVolume } from './objectVolumes.ts';
 import { createRelationLikelihoodPool } from './relationLikelihoodPool.ts';
+import { relationProblemFor } from './relationProblemFor.ts';
 import type { PopulationRow } from './readPopulationRows.ts';
-
-/** M* error assumed where the catalog gives none: common practice for SED-fitted masses, no source. */
-export const DEFAULT_MSTAR_ERR_DEX = 0.3;
-/** Floor of the measurement-only error of log M_BH once the calibration's scatter is taken out, dex. */
-export const MIN_MBH_MEAS_ERR_DEX = 0.05;
 
 /** How one sampler run went. */
 export interface SamplerRun {
@@ -61,38 +54,12 @@ export async function relationFitRun(
   rows: readonly PopulationRow[], volumes: readonly ObjectVolume[], survey: SurveyConfig, settings: DeriveSettings, cosmo: Cosmology,
   onStep?: (done: number, total: number) => void, threads = 1,
 ): Promise<RelationFitSummary | null> {
-  const recipes: Partial<Record<LineId, ForwardRecipe>> = {};
-  for (const line of ['halpha', 'hbeta'] as const) {
-    const cal = (CALIBRATIONS as Record<string, VirialCalibration>)[settings.calibrations[line]];
-    if (cal && (cal.luminosity === 'line' || cal.luminosity === 'l5100')) {
-      recipes[line] = { line, calibration: cal, bc5100: settings.bc5100, eddingtonPerMsun: settings.eddingtonPerMsun };
-    }
-  }
-  let assumed = 0;
-  const use: { x: number; ex: number; y: number; hw: number; site: { field: number; line: LineId; z: number; limitCgs?: number } }[] = [];
-  rows.forEach((r, i) => {
-    const v = volumes[i] as ObjectVolume;
-    if (v.vmaxCmpc3 === null || v.line === null || v.field === null || !recipes[v.line]) return;
-    if (r.logMstar === null || r.logMbh === null || r.logMbhP16 === null || r.logMbhP84 === null || r.z === null) return;
-    const [lo, hi] = survey.fit.mStarRange;
-    if (r.logMstar < lo || r.logMstar > hi) return;
-    if (r.logMstarErr === null) assumed++;
-    use.push({
-      x: r.logMstar, ex: r.logMstarErr ?? DEFAULT_MSTAR_ERR_DEX, y: r.logMbh, hw: (r.logMbhP84 - r.logMbhP16) / 2,
-      site: { field: v.field, line: v.line, z: r.z, ...(v.limitCgs !== undefined ? { limitCgs: v.limitCgs } : {}) },
-    });
-  });
-  if (use.length < 8) return null;
-  const [m0, m1] = survey.fit.mStarRange;
-  const built = buildSelectionTables(cosmo, survey.spec, recipes, use.map((u) => u.site), undefined, { zSlice: 0.25, mStar: [m0, m1, 0.1] });
-  const data = use.map((u, i) => {
-    const sc = (recipes[u.site.line] as ForwardRecipe).calibration.scatterDex;
-    return { x: u.x, ex: u.ex, y: u.y, ey: Math.max(Math.sqrt(Math.max(u.hw * u.hw - sc * sc, 0)), MIN_MBH_MEAS_ERR_DEX), table: built.index[i] as number };
-  });
-  const erdf = survey.fit.eddingtonRatio;
+  const built = relationProblemFor(rows, volumes, survey, settings, cosmo);
+  if (!built) return null;
+  const { problem, assumedMstarErr: assumed, tableWeights: weights } = built;
+  const { data, tables, grids, erdf } = problem;
   const opts = { walkers: survey.fit.walkers, steps: survey.fit.steps, burn: survey.fit.burn, tauFactor: TAU_FACTOR };
   const rng = createRng(seedFor(settings.seed, 'population:relation'));
-  const problem = { data, tables: built.tables, grids: built.grids, erdf };
   // The naive fit (no selection integral) costs little: it runs in this thread, after the selection-aware one,
   // which uses the worker threads. Progress counts the selection-aware fit's steps against its cap.
   let fit: RelationFit;
@@ -107,11 +74,10 @@ export async function relationFitRun(
     fit = await fitRelation(problem, rng, { ...opts, onStep: (s) => onStep?.(s, opts.steps) });
   }
   onStep?.(opts.steps, opts.steps);
-  const naive = await fitRelation({ data: data.map((d) => ({ ...d, table: 0 })), tables: [naiveTable(built.grids)], grids: built.grids, erdf }, rng, opts);
+  const naive = await fitRelation({ data: data.map((d) => ({ ...d, table: 0 })), tables: [naiveTable(grids)], grids, erdf }, rng, opts);
   const run = (f: RelationFit): SamplerRun => ({ stepsRun: f.stepsRun, stepCap: opts.steps, burn: f.burn, tau: f.tau, converged: f.converged });
-  const xs = use.map((u) => u.x).sort((a, b) => a - b);
+  const xs = data.map((d) => d.x).sort((a, b) => a - b);
   const mMed = xs[Math.floor((xs.length - 1) / 2)] as number;
-  const weights = built.tables.map((_, t) => built.index.filter((k) => k === t).length);
   const a = fit.alpha.p50, b = fit.beta.p50, s = fit.sigma.p50;
   const rel = getLocalRelation(settings.localRelation);
   const local = rel.x === 'logMstar' ? localLogMbh(rel, mMed) : NaN;
@@ -128,11 +94,11 @@ export async function relationFitRun(
       ? `After selection, the sample is consistent with the local relation (${rel.label}) within ${Math.max(sig, 0.1).toFixed(1)}σ ${where}.`
       : `After selection, the intrinsic relation lies ${sig.toFixed(1)}σ ${q(0.5) > 0 ? 'above' : 'below'} the local relation (${rel.label}) ${where}.`;
   return {
-    objects: use.length, assumedMstarErr: assumed, medianLogMstar: mMed,
+    objects: data.length, assumedMstarErr: assumed, medianLogMstar: mMed,
     intrinsic: { alpha: fit.alpha, beta: fit.beta, sigma: fit.sigma },
     naive: { alpha: naive.alpha, beta: naive.beta, sigma: naive.sigma },
-    selectionBiasDex: selectionBias(a, b, s, mMed, built.tables, weights, erdf),
-    detectableFraction: detectableFraction(a, b, s, built.tables, weights, built.grids.mStar, erdf),
+    selectionBiasDex: selectionBias(a, b, s, mMed, tables, weights, erdf),
+    detectableFraction: detectableFraction(a, b, s, tables, weights, grids.mStar, erdf),
     localRelation: rel.id, offsetFromLocal: { p16: q(0.16), p50: q(0.5), p84: q(0.84) }, offsetSigmas: sig, sentence,
     acceptance: fit.acceptance, sampler: { intrinsic: run(fit), naive: run(naive) }, samples: { intrinsic: fit.samples, naive: naive.samples },
   };

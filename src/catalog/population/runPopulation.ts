@@ -76,14 +76,14 @@ export async function runPopulation(
       mStarRange: survey.fit.mStarRange,
       // steps: what the selection-aware fit ran (it stops once the kept chain is TAU_FACTOR autocorrelation times long).
       sampler: {
-        walkers: survey.fit.walkers, steps: fit?.sampler.intrinsic.stepsRun ?? survey.fit.steps, stepCap: survey.fit.steps, burn: survey.fit.burn,
+        walkers: survey.fit.walkers, move: 'differential evolution (affine-invariant ensemble)', steps: fit?.sampler.intrinsic.stepsRun ?? survey.fit.steps, stepCap: survey.fit.steps, burn: survey.fit.burn,
         stopRule: `kept chain ≥ ${TAU_FACTOR} autocorrelation times`, converged: fit?.sampler.intrinsic.converged ?? null,
       },
     },
     references: {
       vmax: 'Schmidt 1968, ApJ 151, 393; fields combined as Avni & Bahcall 1980, ApJ 235, 694',
       poisson: GEHRELS86_REFERENCE,
-      sampler: 'Goodman & Weare 2010, CAMCoS 5, 65; Foreman-Mackey et al. 2013, PASP 125, 306',
+      sampler: 'ensemble MCMC with the differential-evolution move: ter Braak 2006, Statistics and Computing 16, 239; Nelson et al. 2014, ApJS 210, 11; stop rule and τ estimate: Foreman-Mackey et al. 2013, PASP 125, 306',
       selection: 'selection inside the likelihood, as in Li et al. 2024 (arXiv:2403.00074); our own implementation',
     },
   };

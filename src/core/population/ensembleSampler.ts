@@ -27,6 +27,12 @@ export interface EnsembleOptions {
   readonly checkEvery?: number;
   /** Stretch scale a (Goodman & Weare 2010 use 2). */
   readonly stretch?: number;
+  /**
+   * The proposal: 'stretch' (Goodman & Weare 2010, the default) or 'differential' (differential evolution, ter Braak
+   * 2006, Statistics and Computing 16, 239: x + γ (x_j − x_k) with two other walkers j ≠ k of the complementary
+   * half and γ = 2.38/√(2 dim) (1 + 0.1 z), z standard normal, as Nelson et al. 2014, ApJS 210, 11, draw it).
+   */
+  readonly move?: 'stretch' | 'differential';
   /** Called after each step with (step, cap), e.g. for a progress bar. */
   readonly onStep?: (step: number, steps: number) => void;
 }
@@ -49,8 +55,9 @@ export interface EnsembleResult {
 
 /**
  * Affine-invariant ensemble MCMC with the stretch move (Goodman & Weare 2010, CAMCoS 5, 65,
- * eqs. 7 and 10), updating the two halves of the ensemble in turn as Foreman-Mackey et al. 2013
- * (PASP 125, 306, Algorithm 3) do; written here from the papers. The proposals of one half depend only on the
+ * eqs. 7 and 10) or the differential-evolution move (ter Braak 2006; see {@link EnsembleOptions.move}), updating
+ * the two halves of the ensemble in turn as Foreman-Mackey et al. 2013 (PASP 125, 306, Algorithm 3) do; written
+ * here from the papers. The proposals of one half depend only on the
  * other half, so they are evaluated as one batch (in parallel when `logProb` uses threads). The random numbers
  * are drawn in a fixed order whatever evaluates the batch: deterministic for a given Rng.
  * @param logProb - log posterior density of a batch of positions.
@@ -72,6 +79,8 @@ export async function ensembleSample(
   if (!(burn >= 0 && burn < steps)) throw new RangeError(`ensembleSample: burn must be in [0, steps), got ${burn}`);
   const a = opts.stretch ?? 2;
   const checkEvery = opts.checkEvery ?? 100;
+  const differential = opts.move === 'differential';
+  const gamma0 = 2.38 / Math.sqrt(2 * dim);
   const pos = new Float64Array(walkers * dim);
   const lp = new Float64Array(walkers).fill(-Infinity);
   // Draw the starting ball in rounds: every walker still outside the prior is redrawn (bounded rounds, then fail).
@@ -104,6 +113,14 @@ export async function ensembleSample(
       for (let i = 0; i < half; i++) {
         const w = first + i;
         const j = other + Math.floor(rng.next() * half);
+        if (differential) {
+          // A second walker k ≠ j of the same half; the proposal is symmetric (zs = 1: no Jacobian term).
+          const k = other + ((j - other + 1 + Math.floor(rng.next() * (half - 1))) % half);
+          const g = gamma0 * (1 + 0.1 * standardNormal(rng));
+          zs[i] = 1;
+          for (let d = 0; d < dim; d++) proposals[i * dim + d] = (pos[w * dim + d] as number) + g * ((pos[j * dim + d] as number) - (pos[k * dim + d] as number));
+          continue;
+        }
         // z ~ g(z) ∝ 1/√z on [1/a, a]: z = ((a − 1) u + 1)² / a.
         const zz = ((a - 1) * rng.next() + 1) ** 2 / a;
         zs[i] = zz;

@@ -1,4 +1,5 @@
-import { bivariateNodesInto, bivariateNormalCdfWith, type BivariateNodesScratch } from './bivariateNormalCdf.ts';
+import { bivariateNodesInto, bivariateNormalCdfAlongLine, type BivariateNodesScratch } from './bivariateNormalCdf.ts';
+import { addExpQuadratic } from './addExpQuadratic.ts';
 import { criteriaMoments, type DetectionLinear, type MassBelief } from './detectionModel.ts';
 import type { EddingtonRatioDistribution } from './eddingtonRatioDistribution.ts';
 import { fastNormalCdf as normalCdf } from './fastNormalCdf.ts';
@@ -35,16 +36,22 @@ export const RELATION_PIVOT = 10;
 
 /**
  * Detection probability for a Gaussian (M, u) belief whose covariance is fixed: the criteria's standard deviations
- * and correlation are computed once (`prepare`), then each call moves only the means (`at`).
+ * and correlation are computed once (`prepare`), then each call moves only the means (`along`). On the uniform M*
+ * grid the means move by a fixed step from node to node, so a whole window is one line in (h, k)
+ * (see bivariateNormalCdfAlongLine).
  */
 interface DetectionAt {
-  at(mM: number, mU: number): number;
+  /**
+   * The probabilities at `count` points whose means step evenly, (mM0 + dM q, mU0 + dU q) for q = 0 … count − 1,
+   * written to `out`.
+   */
+  along(mM0: number, dM: number, mU0: number, dU: number, count: number, out: Float64Array): void;
 }
 
 function prepare(tab: SelectionTable, erdf: EddingtonRatioDistribution, vM: number, vU: number, cMU: number, scratch: BivariateNodesScratch): DetectionAt {
   const lin = tab.linear;
-  if (!lin) return { at: () => 1 };
-  if (!lin.possible) return { at: () => 0 };
+  if (!lin) return { along: (_m, _d, _u, _e, count, out) => out.fill(1, 0, count) };
+  if (!lin.possible) return { along: (_m, _d, _u, _e, count, out) => out.fill(0, 0, count) };
   const mo = criteriaMoments(lin, erdf, { mM: 0, mU: 0, vM, vU, cMU });
   // criteriaMoments at zero means gives h = (constant part)/sd: recover the sds to move the means cheaply.
   const sl2 = erdf.sigmaLog * erdf.sigmaLog;
@@ -52,18 +59,31 @@ function prepare(tab: SelectionTable, erdf: EddingtonRatioDistribution, vM: numb
   const sB = Math.sqrt(lin.bM * lin.bM * vM + lin.bU * lin.bU * vU + 2 * lin.bM * lin.bU * cMU + lin.bL * lin.bL * sl2);
   const a0 = lin.a0 + lin.aL * erdf.meanLog;
   const b0 = lin.b0 + lin.bL * erdf.meanLog;
-  if (lin.noWidthCut) return { at: (mM) => normalCdf((a0 + lin.aM * mM) / sA) };
+  if (lin.noWidthCut) {
+    return {
+      along: (mM0, dM, _u, _e, count, out) => {
+        for (let q = 0; q < count; q++) out[q] = normalCdf((a0 + lin.aM * (mM0 + dM * q)) / sA);
+      },
+    };
+  }
   // The nodes go into the caller's scratch: each DetectionAt is used before the next is prepared.
   const nodes = bivariateNodesInto(mo.rho, scratch);
   return {
-    at: (mM, mU) => {
-      const h = (a0 + lin.aM * mM) / sA;
-      const k = (b0 + lin.bM * mM + lin.bU * mU) / sB;
-      // Far from either boundary one criterion decides alone (error < 1e-12): skip the bivariate integral.
-      if (h < -7 || k < -7) return 0;
-      if (k > 7) return normalCdf(h);
-      if (h > 7) return normalCdf(k);
-      return bivariateNormalCdfWith(nodes, h, k);
+    along: (mM0, dM, mU0, dU, count, out) => {
+      const h0 = (a0 + lin.aM * mM0) / sA;
+      const dh = (lin.aM * dM) / sA;
+      const k0 = (b0 + lin.bM * mM0 + lin.bU * mU0) / sB;
+      const dk = (lin.bM * dM + lin.bU * dU) / sB;
+      bivariateNormalCdfAlongLine(nodes, h0, dh, k0, dk, count, out);
+      for (let q = 0; q < count; q++) {
+        const h = h0 + dh * q;
+        const k = k0 + dk * q;
+        // Far from either boundary one criterion decides alone (error < 1e-12): the bivariate quadrature, which
+        // loses relative precision there, is not used.
+        if (h < -7 || k < -7) out[q] = 0;
+        else if (k > 7) out[q] = normalCdf(h);
+        else if (h > 7) out[q] = normalCdf(k);
+      }
     },
   };
 }
@@ -75,7 +95,9 @@ function prepare(tab: SelectionTable, erdf: EddingtonRatioDistribution, vM: numb
  * virial mass (normal about the true mass with the calibration's scatter) and λ_Edd (the assumed log-normal). Given
  * M*, everything is Gaussian and the criteria are linear, so the detection probability is a bivariate normal
  * probability, exact. The approach follows the selection-aware fits of the field (e.g. Li et al. 2024,
- * arXiv:2403.00074); this implementation is our own. Returns a function of (alpha, beta, sigma).
+ * arXiv:2403.00074); this implementation is our own. Returns a function of (alpha, beta, sigma). Each object's
+ * window of M* nodes, and each table's whole grid, is evaluated at once (the Gaussian factors and the bivariate
+ * quadrature by recurrence along the window, {@link addExpQuadratic}): the same sums as node by node, to ~1e-12.
  * @param data - the objects.
  * @param tables - their selection tables.
  * @param grids - the stellar-mass grid of the tables.
@@ -113,19 +135,24 @@ export function relationLogLikelihood(
   const priorSums = tables.map((t) => t.massPrior.reduce((a, b) => a + b, 0));
   const logDen = new Float64Array(tables.length);
   const scratch: BivariateNodesScratch = { scale: 0, sin: new Float64Array(20), invCos2: new Float64Array(20), w: new Float64Array(20), n: 0 };
+  // The grid is uniform, so every mean below moves by a fixed step from node to node (see DetectionAt.along).
+  const step = nm > 1 ? (ms[1] as number) - (ms[0] as number) : 0;
+  for (let j = 1; j < nm; j++) {
+    if (Math.abs((ms[j] as number) - (ms[0] as number) - j * step) > 1e-9) throw new RangeError('relationLogLikelihood: the M* grid must be uniform');
+  }
+  const detBuf = new Float64Array(nm);
+  const gaussBuf = new Float64Array(nm);
   return (alpha: number, beta: number, sigma: number): number => {
     const s2 = sigma * sigma;
+    const dmu = beta * step;
+    const muAt = (j: number): number => alpha + beta * ((ms[j] as number) - RELATION_PIVOT);
     for (let t = 0; t < tables.length; t++) {
       const tab = tables[t] as SelectionTable;
       const sc2 = tab.calibrationScatter * tab.calibrationScatter;
-      const det = prepare(tab, erdf, s2, s2 + sc2, s2, scratch);
+      const mu0 = muAt(0);
+      prepare(tab, erdf, s2, s2 + sc2, s2, scratch).along(mu0, dmu, mu0, dmu, nm, detBuf);
       let den = 0;
-      for (let j = 0; j < nm; j++) {
-        const prior = tab.massPrior[j] as number;
-        if (prior === 0) continue;
-        const mu = alpha + beta * ((ms[j] as number) - RELATION_PIVOT);
-        den += prior * det.at(mu, mu);
-      }
+      for (let j = 0; j < nm; j++) den += (tab.massPrior[j] as number) * (detBuf[j] as number);
       logDen[t] = den > 0 ? Math.log(den / (priorSums[t] as number)) : -Infinity;
     }
     let total = 0;
@@ -140,16 +167,16 @@ export function relationLogLikelihood(
       const vM = s2 - (s2 * s2) / vy;
       const vU = vTot - (vTot * vTot) / vy;
       const cMU = s2 - (s2 * vTot) / vy;
-      const det = prepare(tab, erdf, vM, vU, cMU, scratch);
-      let num = 0;
-      const j0 = first[i] as number;
+      const n = count[i] as number;
       const o = offset[i] as number;
-      for (let q = 0; q < (count[i] as number); q++) {
-        const mu = alpha + beta * ((ms[j0 + q] as number) - RELATION_PIVOT);
-        const r = d.y - mu;
-        const zy = r / sy;
-        num += (wxa[o + q] as number) * Math.exp(-0.5 * zy * zy) * det.at(mu + (s2 / vy) * r, mu + (vTot / vy) * r);
-      }
+      const mu0 = muAt(first[i] as number);
+      const r0 = d.y - mu0;
+      // N(y | mu, sy) up to 1/(sy√2π) at the window's nodes: exp(−(r0 − dmu q)² / (2 vy)).
+      gaussBuf.fill(0, 0, n);
+      addExpQuadratic(gaussBuf, n, (-0.5 * dmu * dmu) / vy, (r0 * dmu) / vy, (-0.5 * r0 * r0) / vy, 1);
+      prepare(tab, erdf, vM, vU, cMU, scratch).along(mu0 + (s2 / vy) * r0, dmu * (1 - s2 / vy), mu0 + (vTot / vy) * r0, dmu * (1 - vTot / vy), n, detBuf);
+      let num = 0;
+      for (let q = 0; q < n; q++) num += (wxa[o + q] as number) * (gaussBuf[q] as number) * (detBuf[q] as number);
       const ld = logDen[d.table] as number;
       if (!(num > 0) || !Number.isFinite(ld)) return -Infinity;
       total += Math.log(num / sy) - ld;

@@ -1,5 +1,5 @@
 import { describe, it } from 'vitest';
-import { bivariateNormalCdf } from '../../../src/core/population/bivariateNormalCdf.ts';
+import { bivariateNodes, bivariateNormalCdf, bivariateNormalCdfAlongLine, bivariateNormalCdfWith } from '../../../src/core/population/bivariateNormalCdf.ts';
 import { normalCdf } from '../../../src/core/population/normalCdf.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 
@@ -43,6 +43,24 @@ describe('bivariateNormalCdf with fewer nodes at small and moderate correlation'
     for (const rho of [-0.74, -0.5, -0.29, -0.1, 0.05, 0.2, 0.299, 0.31, 0.6, 0.749]) {
       for (const [h, k] of [[0, 0], [1.3, -0.4], [-2.1, 0.8], [3, 2.5], [-0.7, -1.9]] as const) {
         expectClose(bivariateNormalCdf(h, k, rho), reference(h, k, rho), { atol: 3e-10, source: `internal (the tabulated Φ is good to ~1e-10): Simpson reference at (h, k, ρ) = (${h}, ${k}, ${rho})` });
+      }
+    }
+  });
+});
+
+describe('bivariateNormalCdfAlongLine', () => {
+  it('gives the point-by-point probabilities along a line to 1e-12, at small, moderate and high correlation', () => {
+    // Internal check: the same quadrature evaluated one point at a time.
+    for (const rho of [-0.98, -0.9, -0.8, -0.5, 0.1, 0.6, 0.95]) {
+      const nodes = bivariateNodes(rho);
+      for (const [h0, dh, k0, dk, count] of [[-6, 0.4, 3, -0.2, 30], [2.5, -0.1, -1, 0.15, 25], [-9, 0.9, -9, 0.8, 22], [0.3, 0, -0.4, 0, 4]] as const) {
+        const out = new Float64Array(count);
+        bivariateNormalCdfAlongLine(nodes, h0, dh, k0, dk, count, out);
+        for (let q = 0; q < count; q++) {
+          const h = h0 + dh * q;
+          const k = k0 + dk * q;
+          expectClose(out[q] as number, bivariateNormalCdfWith(nodes, h, k), { atol: 1e-12, source: `internal: point by point at (h, k, ρ) = (${h.toFixed(2)}, ${k.toFixed(2)}, ${rho})` });
+        }
       }
     }
   });
