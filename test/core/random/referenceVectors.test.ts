@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { mix32, splitmix32, xoshiro128ss } from '../../../src/core/random/index.ts';
+import { createRng, mix32, seedFor, splitmix32, xoshiro128ss } from '../../../src/core/random/index.ts';
 
 describe('the generators against outputs of their reference code', () => {
   it('xoshiro128** from the state (1, 2, 3, 4) gives the reference code\'s first ten outputs', () => {
@@ -26,5 +26,30 @@ describe('the generators against outputs of their reference code', () => {
     expect(Array.from({ length: 4 }, a)).toEqual([1684164658, 3653269916, 2939563536, 2141751570]);
     const b = splitmix32(0xdeadbeef);
     expect(Array.from({ length: 4 }, b)).toEqual([46217145, 304148291, 1711218402, 2692075039]);
+  });
+
+  it('forms seeds and streams exactly as described, so the draws of a published catalog can be reproduced', () => {
+    // Computed with scripts/reference/randomStreams.py (/usr/bin/python3 3.11): an independent transcription of
+    // seedWords, seedFor (FNV-1a 32 over UTF-16 units, keyed by both seed words, lowbias32 finish) and createRng.
+    const seeds: [number, string, number][] = [
+      [42, 'obj-001', 1979006604047047],
+      [0, '', 1797594948019372],
+      [20261202, 'CW-0007', 5894995214456153],
+      [2 ** 40 + 7, 'é✓', 3408044352868355],
+      [-3, 'a', 844987769082685],
+      [7.5, 'x', 7381768754547089],
+    ];
+    for (const [g, id, want] of seeds) expect(seedFor(g, id), `seedFor(${g}, ${id})`).toBe(want);
+    const streams: [number, number[]][] = [
+      [7, [1249970141, 3064461936, 3798612436, 1307997396]],
+      [2 ** 40 + 7, [2636419009, 3966019615, 1348877271, 1849302959]],
+      [-7, [3557922357, 490401282, 379509482, 3738650430]],
+      [0.25, [3032440278, 3733865621, 4234537249, 1400869079]],
+      [20261202, [887456415, 301848632, 1113036121, 93312781]],
+    ];
+    for (const [seed, want] of streams) {
+      const rng = createRng(seed);
+      expect(Array.from({ length: 4 }, () => rng.nextUint32()), `createRng(${seed})`).toEqual(want);
+    }
   });
 });
