@@ -49,4 +49,26 @@ describe('deriveObject outputs beside the mass', () => {
     const bankLike = { n: 50, normals: () => new Float64Array(50), uniforms: () => new Float64Array(50) };
     expect(() => deriveObject({ id: 'X', z: 6, lines: {} }, settings, bankLike as never)).toThrow('the bank holds 50 draws per role, the settings ask for 200');
   });
+
+  it('flags signal-to-noise below 2 in a luminosity or width it uses, a lensed object, and an object at or above the seed redshift', () => {
+    const ha = (lumErr: number, fwhmErr: number) => ({ halpha: { fwhmKms: { value: 2500, errLo: fwhmErr, errHi: fwhmErr }, lumErgS: { value: 3e42, errLo: lumErr, errHi: lumErr } } });
+    expect(derive({ id: 'SNR-OK', z: 6, lines: ha(1e42, 500) }).flags).not.toContain('low_snr');
+    expect(derive({ id: 'SNR-LUM', z: 6, lines: ha(2e42, 500) }).flags).toContain('low_snr'); // S/N 1.5
+    expect(derive({ id: 'SNR-FWHM', z: 6, lines: ha(1e42, 1500) }).flags).toContain('low_snr'); // S/N 1.67
+    const lensed = derive({ id: 'LENS', z: 6, lines: ha(1e42, 500), mu: { value: 2 } });
+    expect(lensed.flags).toContain('lensed');
+    // Magnification divides the luminosity: log10(3e42 / 2).
+    expectClose(lensed.logLum.halpha!, lg(1.5e42), { atol: 1e-12, source: 'L / μ, closed form' });
+    expect(derive({ id: 'UNLENSED', z: 6, lines: ha(1e42, 500), mu: { value: 1 } }).flags).not.toContain('lensed');
+    // Default seed redshift z = 20 (defaultSettings): at 20 and above no seed mass or growth rate.
+    const high = derive({ id: 'Z20', z: 20, lines: ha(1e42, 500) });
+    expect(high.flags).toContain('z_above_seed_redshift');
+    expect(high.logMseed).toBeNull();
+    expect(high.lambdaReqLight).toBeNull();
+    expect(derive({ id: 'Z19', z: 19.9, lines: ha(1e42, 500) }).flags).not.toContain('z_above_seed_redshift');
+  });
+
+  it('refuses a redshift that is not positive and finite, naming it', () => {
+    for (const z of [0, -1, Infinity, NaN]) expect(() => derive({ id: 'BADZ', z, lines: {} })).toThrow(`redshift must be positive and finite, got ${z}`);
+  });
 });
