@@ -20,23 +20,9 @@ export function lowWord(x: number): number {
   return i32[0] as number;
 }
 
-/** The double whose high and low words are `hi` and `lo` (int32 bit patterns). */
-export function fromWords(hi: number, lo: number): number {
-  i32[1] = hi;
-  i32[0] = lo;
-  return f64[0] as number;
-}
-
 /** `x` with its high word replaced by `hi` (fdlibm's SET_HIGH_WORD). */
 export function withHighWord(x: number, hi: number): number {
   f64[0] = x;
   i32[1] = hi;
-  return f64[0] as number;
-}
-
-/** `x` with its low word replaced by `lo` (fdlibm's SET_LOW_WORD). */
-export function withLowWord(x: number, lo: number): number {
-  f64[0] = x;
-  i32[0] = lo;
   return f64[0] as number;
 }

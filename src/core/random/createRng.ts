@@ -74,5 +74,13 @@ export function createRng(seed: number): Rng {
   const s3 = next() | 0;
   // The all-zero state is the one fixed point of xoshiro; splitmix32 cannot give four zeros in a row, but be explicit.
   if ((s0 | s1 | s2 | s3) === 0) s0 = 1;
-  return new Xoshiro128ss(s0, s1, s2, s3);
+  return xoshiro128ss(s0, s1, s2, s3);
+}
+
+/**
+ * xoshiro128** from a given state (four 32-bit words, not all zero), without seeding: for checking
+ * the generator against the reference code's published outputs.
+ */
+export function xoshiro128ss(s0: number, s1: number, s2: number, s3: number): Rng {
+  return new Xoshiro128ss(s0 | 0, s1 | 0, s2 | 0, s3 | 0);
 }

@@ -1,5 +1,5 @@
 export type { Rng } from './rng.ts';
-export { createRng } from './createRng.ts';
+export { createRng, xoshiro128ss } from './createRng.ts';
 export { seedFor } from './seedFor.ts';
 export { mix32, splitmix32 } from './splitmix32.ts';
 export { standardNormal } from './standardNormal.ts';

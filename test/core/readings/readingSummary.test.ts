@@ -16,4 +16,10 @@ describe('readingSummarySql', () => {
     expect(s.overMassive.fraction).toBeNull();
     expect(s.medianLogEddRatio).toBeNull();
   });
+
+  it('reads a missing column (undefined) as null, not as NaN', () => {
+    const s = summaryFromRow({ reading: 'x', objects: 1, n_super: 0, k_super: 0 });
+    expect(s.superEddington.fraction).toBeNull();
+    expect(s.medianLogMbh).toBeNull();
+  });
 });
