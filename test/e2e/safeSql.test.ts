@@ -103,6 +103,9 @@ describe('visitor SQL', () => {
       const option = page.locator('.cm-tooltip-autocomplete li', { hasText: 'log_mbh' }).first();
       await option.waitFor({ timeout: 5_000 });
       await expect(option.locator('.cm-completionDetail').textContent()).resolves.toMatch(/M☉|Msun|solMass|dex/);
+      // CodeMirror ignores Enter for its interactionDelay (75 ms) after the list opens, so that a
+      // list popping up under a fast typist does not take the Enter; a reader waits that long anyway.
+      await page.waitForTimeout(200);
       await page.keyboard.press('Enter');
       await expect(page.locator('#sql').inputValue()).resolves.toMatch(/^SELECT log_mbh/);
     } finally {
