@@ -54,11 +54,14 @@ export function standardNormal(rng: Rng): number {
 /** Words taken from the generator at a time by {@link fillStandardNormals}. */
 const CHUNK = 512;
 
+/** Stands in for a generator between fills. */
+const NO_SOURCE: Rng = { next: () => 0, nextUint32: () => 0 };
+
 /** Serves a generator's words from a buffer filled in bulk: the same sequence as the generator's own. */
 class BufferedWords implements Rng {
   readonly buf = new Uint32Array(CHUNK);
   pos = CHUNK;
-  source: Rng = { next: () => 0, nextUint32: () => 0 };
+  source: Rng = NO_SOURCE;
 
   refill(): void {
     const src = this.source;
@@ -99,7 +102,8 @@ export function fillStandardNormals(rng: Rng, out: Float64Array): void {
     if (Math.abs(u) < (RATIO[i] as number)) out[k] = u * (X[i] as number);
     else out[k] = edge(w, i, u);
   }
-  w.source = { next: () => 0, nextUint32: () => 0 };
+  // Let go of the caller's generator (no new object per call: this runs once per role and object).
+  w.source = NO_SOURCE;
 }
 
 /** The wedge and tail tests for a first word of layer `i` and abscissa `u` already drawn; a rejected point starts afresh. */
