@@ -40,6 +40,7 @@ import { READINGS_COLUMNS } from '../readings/readingsColumns.ts';
 import type { ReadingRowContext } from '../readings/readingsColumns.ts';
 import { buildReadingsMetadata, READINGS_METADATA_KEY } from '../readings/readingsMetadata.ts';
 import { summarizeReadings } from '../readings/summarizeReadings.ts';
+import { untilAborted } from './untilAborted.ts';
 import type { ReadingSummary } from '../../core/readings/readingSummary.ts';
 
 /**
@@ -193,11 +194,9 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
     const maxInFlight = 2 * deriver.threads + 1;
     const rowsTotal = src.nRows;
 
-    // Rejects as soon as the run is aborted, so a long batch in a worker is not waited for.
-    const aborted = opts.signal ? abortedPromise(opts.signal) : null;
-    aborted?.catch(() => undefined);
     const writeChunk = async (chunk: PendingChunk): Promise<void> => {
-      const packed = chunk.results ? await (aborted ? Promise.race([chunk.results, aborted]) : chunk.results) : null;
+      // Rejects as soon as the run is aborted, so a long batch in a worker is not waited for.
+      const packed = chunk.results ? await (opts.signal ? untilAborted(chunk.results, opts.signal) : chunk.results) : null;
       let k = 0;
       for (const row of chunk.rows) {
         const index = derivable(row) ? k++ : -1;
@@ -324,13 +323,6 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
   } finally {
     await source?.close().catch(() => undefined);
   }
-}
-
-function abortedPromise(signal: AbortSignal): Promise<never> {
-  return new Promise((_, reject) => {
-    if (signal.aborted) reject(signal.reason);
-    else signal.addEventListener('abort', () => reject(signal.reason), { once: true });
-  });
 }
 
 /** A row is derived only when its inputs parsed and it has no problem at all. */
