@@ -36,7 +36,9 @@ const AS_TEXT = new Set([
  * dates/times → string (ISO text). Nested types (LIST, STRUCT, MAP, ARRAY), BLOB, INTERVAL and
  * others raise a CatalogError naming the column. `meta` holds the file's key-value metadata as
  * strings (except the binary `ARROW:schema`); an Astropy `table_meta_yaml` entry is parsed for
- * column units/descriptions and its `meta` mapping is merged into `meta`.
+ * column units/descriptions and its `meta` mapping is merged into `meta`; astropy's masked
+ * columns (a data column and a boolean `<name>.mask` column) read as one column, missing where
+ * the mask is set.
  *
  * @param path - file to read
  */
@@ -70,9 +72,21 @@ export async function openParquet(path: string): Promise<TableSource> {
       const countRes = await query(con, `SELECT num_rows FROM parquet_file_metadata(${sqlString(path)})`, path);
       const nRows = Number(countRes.value(0, 0) ?? 0);
       const kv = await query(con, `SELECT key, value FROM parquet_kv_metadata(${sqlString(path)})`, path);
-      const columns: ColumnInfo[] = names.map((name, i) => ({ name, kind: kinds[i]!, fileType: types[i]!.toString() }));
-      const meta = kvMeta(kv.getRows() as unknown[][], columns);
-      const sql = () => `SELECT ${names.map((n, i) => selectExpr(n, columns[i]!.kind, typeIds[i]!)).join(', ')} FROM ${src}`;
+      const all: ColumnInfo[] = names.map((name, i) => ({ name, kind: kinds[i]!, fileType: types[i]!.toString() }));
+      const meta = kvMeta(kv.getRows() as unknown[][], all);
+      // astropy's masked columns: the data column reads as missing where its mask column is true,
+      // and the mask column itself is not a column of the table.
+      const masks = astropyMasks(meta, all);
+      const kept = all.map((_, i) => i).filter((i) => !masks.maskColumns.has(i));
+      const columns = kept.map((i) => all[i]!);
+      const sql = () => {
+        const exprs = kept.map((i) => {
+          const e = selectExpr(names[i]!, all[i]!.kind, typeIds[i]!);
+          const m = masks.maskOf.get(i);
+          return m === undefined ? e : `CASE WHEN ${ident(names[m]!)} IS NOT FALSE THEN NULL ELSE ${e} END`;
+        });
+        return `SELECT ${exprs.join(', ')} FROM ${src}`;
+      };
       return parquetSource(path, inst, columns, nRows, meta, sql);
     } finally {
       con.closeSync();
@@ -188,6 +202,37 @@ function applyAstropyYaml(text: string, columns: ColumnInfo[], meta: Record<stri
   }
   if (h.meta && typeof h.meta === 'object' && !Array.isArray(h.meta)) Object.assign(meta, h.meta);
   return true;
+}
+
+/**
+ * The mask columns astropy wrote for its masked columns. astropy's Parquet writer does not use
+ * Parquet's nulls: a MaskedColumn `x` is stored as the column `x` (masked cells hold a fill value)
+ * and a boolean column `x.mask`, both named under `__serialized_columns__` in `table_meta_yaml`
+ * (astropy.io.misc.parquet with astropy.table.serialize). Only pairs whose two columns are both
+ * in the file, the mask boolean, are used; then `__serialized_columns__` leaves `meta` when every
+ * entry was such a pair.
+ */
+function astropyMasks(meta: Record<string, unknown>, columns: readonly ColumnInfo[]): { maskOf: Map<number, number>; maskColumns: Set<number> } {
+  const maskOf = new Map<number, number>();
+  const maskColumns = new Set<number>();
+  const serialized = meta.__serialized_columns__;
+  if (!serialized || typeof serialized !== 'object' || Array.isArray(serialized)) return { maskOf, maskColumns };
+  const index = (name: unknown): number => (typeof name === 'string' ? columns.findIndex((c) => c.name === name) : -1);
+  let all = true;
+  for (const [name, entry] of Object.entries(serialized as Record<string, unknown>)) {
+    const e = entry as { __class__?: unknown; data?: { name?: unknown }; mask?: { name?: unknown } } | null;
+    const d = index(e?.data?.name);
+    const m = index(e?.mask?.name);
+    const pair = e?.__class__ === 'astropy.table.column.MaskedColumn' && d >= 0 && m >= 0 && d !== m && columns[m]!.kind === 'bool' && e.data?.name === name;
+    if (!pair || maskOf.has(d) || maskColumns.has(m)) {
+      all = false;
+      continue;
+    }
+    maskOf.set(d, m);
+    maskColumns.add(m);
+  }
+  if (all) delete meta.__serialized_columns__;
+  return { maskOf, maskColumns };
 }
 
 function bytesToText(x: unknown): string {

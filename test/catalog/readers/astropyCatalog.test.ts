@@ -7,13 +7,15 @@ import { openTable } from '../../../src/catalog/readers/openTable.ts';
 
 // One invented catalog written by astropy 5.2.1 (Debian python3-astropy; see
 // test/fixtures/readers/astropy-version.txt) in every format it writes that we read, by
-// test/fixtures/readers/make_astropy_fixtures.py. Values below are the ones that script writes
+// test/fixtures/readers/make_astropy_fixtures.py (the Parquet file with pyarrow 25.0.1, which
+// stores masked cells as a fill value plus a '<name>.mask' column). Values below are the ones that script writes
 // ("computed with astropy 5.2.1" only in the sense that astropy serialised them).
 const fixture = (name: string) => fileURLToPath(new URL(`../../fixtures/readers/${name}`, import.meta.url));
 
 const FILES = [
   'astropy-catalog.csv', 'astropy-catalog.csv.gz', 'astropy-catalog.ecsv', 'astropy-catalog.fits', 'astropy-catalog.fits.gz',
   'astropy-catalog-tabledata.vot', 'astropy-catalog-tabledata.vot.gz', 'astropy-catalog-binary.vot', 'astropy-catalog-binary2.vot',
+  'astropy-catalog.parquet',
 ];
 
 const N = 12;
@@ -85,8 +87,19 @@ describe('one catalog written by astropy in every format', () => {
     expect(field[3]).toBe('0042');
     expect(field[11]).toBeNull();
     // astropy itself strips blanks when it writes CSV/ECSV, and FITS drops trailing blanks.
-    const padded = name.endsWith('.vot') || name.endsWith('.vot.gz') ? ' padded ' : name.includes('.fits') ? ' padded' : 'padded';
+    const padded = name.endsWith('.vot') || name.endsWith('.vot.gz') || name.endsWith('.parquet') ? ' padded ' : name.includes('.fits') ? ' padded' : 'padded';
     expect(field[2]).toBe(padded);
     expect(nspec).toEqual(['1', '2', '3', '4', '5', '6', '7', '8', '9', '10', null, '9007199254740993']);
+  });
+});
+
+describe("astropy's Parquet encoding of masked columns", () => {
+  it('reads each masked column as one column: the .mask columns are not columns of the table', async () => {
+    const src = await openTable(fixture('astropy-catalog.parquet'));
+    await src.close();
+    expect(src.columns.map((c) => c.name)).toEqual(['id', 'z', 'fwhm_halpha', 'flux_halpha', 'flux_halpha_err', 'lam_l_5100', 'log_mstar', 'av', 'field', 'nspec']);
+    expect(src.meta).not.toHaveProperty('__serialized_columns__');
+    expect(src.meta.survey).toBe('Cinderwake (invented)');
+    expect(src.columns.find((c) => c.name === 'fwhm_halpha')?.unit).toBe('km / s');
   });
 });

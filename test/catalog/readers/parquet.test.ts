@@ -45,4 +45,39 @@ describe('the Parquet reader', () => {
     expect(src.columns).toEqual([{ name: 'fwhm', kind: 'float', unit: 'km / s', description: 'line width', fileType: 'DOUBLE' }]);
     expect(src.meta).toEqual({ origin: 'invented', catalog: 'invented' });
   });
+
+  // The YAML below follows what astropy 5.2.1 with pyarrow 25.0.1 writes for a MaskedColumn (see
+  // test/fixtures/readers/astropy-catalog.parquet and make_astropy_fixtures.py).
+  const masked = (cls: string) =>
+    "datatype:\\n- {name: x, datatype: float64}\\n- {name: x.mask, datatype: bool}\\nmeta: !!omap\\n- __serialized_columns__:\\n    x:\\n" +
+    `      __class__: ${cls}\\n      data: !astropy.table.SerializedColumn {name: x}\\n      mask: !astropy.table.SerializedColumn {name: x.mask}\\n`;
+
+  it("reads astropy's masked column as missing where its .mask column is true (or null), and drops the .mask column", async () => {
+    const { src, columns } = await read(
+      `SELECT * FROM (VALUES (1.5, false), (2.5, true), (3.5, NULL)) t(x, "x.mask")`,
+      `, KV_METADATA {table_meta_yaml: E'${masked('astropy.table.column.MaskedColumn')}'}`,
+    );
+    expect(src.columns.map((c) => c.name)).toEqual(['x']);
+    expect(columns).toEqual([[1.5, null, null]]);
+    expect(src.meta).toEqual({});
+  });
+
+  it('leaves columns alone when the serialized entry is not a masked column pair', async () => {
+    const { src, columns } = await read(
+      `SELECT * FROM (VALUES (1.5, false), (2.5, true)) t(x, "x.mask")`,
+      `, KV_METADATA {table_meta_yaml: E'${masked('astropy.time.core.Time')}'}`,
+    );
+    expect(src.columns.map((c) => c.name)).toEqual(['x', 'x.mask']);
+    expect(columns).toEqual([[1.5, 2.5], [false, true]]);
+    expect(src.meta).toHaveProperty('__serialized_columns__');
+  });
+
+  it('leaves columns alone when the named mask column is not boolean', async () => {
+    const { src, columns } = await read(
+      `SELECT * FROM (VALUES (1.5, 0), (2.5, 1)) t(x, "x.mask")`,
+      `, KV_METADATA {table_meta_yaml: E'${masked('astropy.table.column.MaskedColumn')}'}`,
+    );
+    expect(src.columns.map((c) => c.name)).toEqual(['x', 'x.mask']);
+    expect(columns).toEqual([[1.5, 2.5], [0, 1]]);
+  });
 });
