@@ -4,9 +4,10 @@ import type { ObjectInputs } from '../../core/derive/types.ts';
 import type { CensusConfig } from '../config/CensusConfig.ts';
 import { displayPath } from '../config/loadConfig.ts';
 import { catalogMetadataJson, buildCatalogMetadata } from '../metadata/buildCatalogMetadata.ts';
+import { toolVersion } from '../metadata/toolVersion.ts';
 import { METADATA_KEY } from '../metadata/catalogMetadata.ts';
 import { parquetStandardKeys } from '../publish/parquetStandardKeys.ts';
-import { tableDocOf } from '../publish/tableDoc.ts';
+import { readingsTableDoc, tableDocOf } from '../publish/tableDoc.ts';
 import { exportCatalog, exportPath } from '../publish/exportCatalog.ts';
 import { DEFAULT_GZIP_LIMITS } from '../readers/gzipLimits.ts';
 import { sha256File } from '../metadata/sha256.ts';
@@ -279,7 +280,10 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
     }
     if (writer.rowCount !== counts.rows) throw new Error(`wrote ${writer.rowCount} rows for ${counts.rows} read; nothing was written`);
     const readingsMeta = buildReadingsMetadata(batchReadings.primary.id, path.basename(paths.readings), batchReadings.list, READINGS_COLUMNS);
-    await readingsWriter.finish({ [READINGS_METADATA_KEY]: JSON.stringify(readingsMeta) });
+    await readingsWriter.finish({
+      [READINGS_METADATA_KEY]: JSON.stringify(readingsMeta),
+      ...parquetStandardKeys(readingsTableDoc(toolVersion()), readingsWriter.textLengths()),
+    });
     readingsWriter = null;
     readingsMeta.summary = await summarizeReadings(readingsTemp, batchReadings.list.map((r) => r.id));
     const metadata = buildCatalogMetadata({
@@ -294,7 +298,7 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
       readings: readingsMeta,
     });
     const doc = tableDocOf(metadata);
-    await writer.finish({ [METADATA_KEY]: catalogMetadataJson(metadata), ...parquetStandardKeys(doc) });
+    await writer.finish({ [METADATA_KEY]: catalogMetadataJson(metadata), ...parquetStandardKeys(doc, writer.textLengths()) });
     writer = null;
     // ECSV, VOTable and FITS copies, staged with the rest so that all files are replaced together.
     const exports = exportTargets.map((t) => ({ format: t.format, path: set.stagedExtra(t.path) }));

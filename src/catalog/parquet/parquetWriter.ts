@@ -25,6 +25,11 @@ export interface ParquetWriter {
   /** Rows appended so far. */
   readonly rowCount: number;
   /**
+   * The longest value appended so far in each text column, in Unicode code points (what Python's
+   * `len` counts, and so astropy's `table::len::<name>` keys); 0 for a column without values.
+   */
+  textLengths(): Map<string, number>;
+  /**
    * Writes every appended row, in insertion order, to `parquetPath` (zstd, single-threaded so
    * that the bytes depend only on the rows and the metadata), with `kvMetadata` as Parquet
    * key/value metadata, then closes the scratch database.
@@ -119,6 +124,8 @@ export async function openParquetWriter(
   let vectors = columns.map((_, i) => chunk.getColumnVector(i) as unknown as WritableVector);
   let inChunk = 0;
   let rowCount = 0;
+  const textColumns = columns.flatMap((c, i) => (c.kind === 'string' ? [i] : []));
+  const textLength = new Array<number>(textColumns.length).fill(0);
 
   // Rows are gathered column-wise into a DuckDB data chunk (numbers go into typed arrays on the
   // JS side, copied in one call per column), which is far cheaper than one native call per value.
@@ -143,8 +150,18 @@ export async function openParquetWriter(
     get rowCount() {
       return rowCount;
     },
+    textLengths() {
+      return new Map(textColumns.map((i, k) => [columns[i]!.name, textLength[k]!]));
+    },
     appendRow(values) {
       for (let i = 0; i < vectors.length; i++) vectors[i]!.setItem(inChunk, convert[i]!(values[i]));
+      for (let k = 0; k < textColumns.length; k++) {
+        const v = values[textColumns[k]!];
+        if (v === null || v === undefined) continue;
+        const text = typeof v === 'string' ? v : String(v);
+        // Code points never outnumber UTF-16 units, so only a longer text needs counting.
+        if (text.length > textLength[k]!) textLength[k] = Math.max(textLength[k]!, codePoints(text));
+      }
       inChunk++;
       rowCount++;
       if (inChunk === VECTOR_ROWS) flushChunk();
@@ -173,6 +190,22 @@ export async function openParquetWriter(
       }
     },
   };
+}
+
+/** Unicode code points in `text` (a surrogate pair counts once). */
+export function codePoints(text: string): number {
+  let n = text.length;
+  for (let i = 0; i < text.length - 1; i++) {
+    const c = text.charCodeAt(i);
+    if (c >= 0xd800 && c <= 0xdbff) {
+      const d = text.charCodeAt(i + 1);
+      if (d >= 0xdc00 && d <= 0xdfff) {
+        n--;
+        i++;
+      }
+    }
+  }
+  return n;
 }
 
 /** Rows of one DuckDB data chunk (DuckDB's standard vector size). */

@@ -3,7 +3,7 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { DuckDBInstance } from '@duckdb/node-api';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { openParquetWriter } from '../../../src/catalog/parquet/parquetWriter.ts';
+import { codePoints, openParquetWriter } from '../../../src/catalog/parquet/parquetWriter.ts';
 import type { CellValue, ParquetColumn } from '../../../src/catalog/parquet/parquetWriter.ts';
 
 let dir: string;
@@ -111,5 +111,36 @@ describe('openParquetWriter', () => {
     w.appendRow(['a', 1, 1, true, 1]);
     await w.abort();
     expect(await readdir(dir)).not.toContain('aborted.parquet');
+  });
+});
+
+describe('codePoints', () => {
+  it('counts Unicode code points as Python’s len does: a surrogate pair once, a lone surrogate once', () => {
+    // Python 3: len('a') == 1, len('σ') == 1, len('\U0001F52D') == 1, len('\ud800') == 1 (closed forms).
+    expect(codePoints('')).toBe(0);
+    expect(codePoints('abc')).toBe(3);
+    expect(codePoints('3σ')).toBe(2);
+    expect(codePoints('\u{1F52D}x')).toBe(2);
+    expect(codePoints('\u{1F52D}\u{1F52D}')).toBe(2);
+    expect(codePoints('\ud800')).toBe(1);
+    expect(codePoints('\ud800x')).toBe(2);
+    expect(codePoints('x\udc00\ud800')).toBe(3);
+  });
+});
+
+describe('the text lengths a writer records', () => {
+  it('keeps the longest value of each text column in code points, ignoring nulls; 0 for a column without values', async () => {
+    const cols: ParquetColumn[] = [
+      { name: 'id', kind: 'string' },
+      { name: 'note', kind: 'string' },
+      { name: 'empty', kind: 'string' },
+      { name: 'x', kind: 'float' },
+    ];
+    const w = await openParquetWriter(path.join(dir, 'len.parquet'), cols, { scratchDir: path.join(dir, 'scratch-len') });
+    w.appendRow(['a', '\u{1F52D}\u{1F52D}\u{1F52D}', null, 1]);
+    w.appendRow(['abcd', 'xy', undefined, 2]);
+    w.appendRow(['ab', null, null, 3]);
+    expect([...w.textLengths()]).toEqual([['id', 4], ['note', 3], ['empty', 0]]);
+    await w.abort();
   });
 });

@@ -1,4 +1,5 @@
 import { execFile } from 'node:child_process';
+import { existsSync } from 'node:fs';
 import { writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -28,8 +29,21 @@ export async function deriveTiny(dir: string, args: string[] = [], config?: stri
 }
 
 /** Runs the astropy reader script on `file` in `mode` and returns its JSON. */
-export async function readWithAstropy(mode: 'ecsv' | 'votable' | 'fits' | 'parquet-keys', file: string): Promise<any> {
+export async function readWithAstropy(mode: 'ecsv' | 'votable' | 'fits' | 'parquet-keys' | 'parquet', file: string, python = '/usr/bin/python3'): Promise<any> {
   const script = fileURLToPath(new URL('./readWithAstropy.py', import.meta.url));
-  const { stdout } = await run('/usr/bin/python3', [script, mode, file], { maxBuffer: 64 * 1024 * 1024 });
+  const { stdout } = await run(python, [script, mode, file], { maxBuffer: 64 * 1024 * 1024 });
   return JSON.parse(stdout);
+}
+
+/**
+ * A Python with astropy and pyarrow, for the tests that read our Parquet files with
+ * `astropy.table.Table.read` itself: `$DAWN_CENSUS_PYARROW_PYTHON`, else `.venv-pyarrow/bin/python`
+ * in the repository (made by .ci/run from the pyarrow wheel when the machine has one), else null
+ * (Debian packages no pyarrow; those tests are then skipped and say so).
+ */
+export function pyarrowPython(): string | null {
+  const fromEnv = process.env.DAWN_CENSUS_PYARROW_PYTHON;
+  if (fromEnv) return fromEnv;
+  const venv = fileURLToPath(new URL('../../../.venv-pyarrow/bin/python', import.meta.url));
+  return existsSync(venv) ? venv : null;
 }

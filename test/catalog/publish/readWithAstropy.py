@@ -3,6 +3,7 @@ description as astropy sees them, and its values (NaN and masked as null).
 
     /usr/bin/python3 readWithAstropy.py <mode> <file>
 mode: ecsv | votable | fits | parquet-keys (a JSON file {key: value} of Parquet key/value metadata)
+      | parquet (Table.read itself: needs pyarrow, so run it with a Python that has it)
 """
 import io, json, math, sys, warnings
 
@@ -75,4 +76,9 @@ elif mode == 'parquet-keys':
     tab = vt.get_first_table()
     out['votable_version'] = kv['IVOA.VOTable-Parquet.version']
     out['votable'] = {f.name: {'unit': None if f.unit is None else f.unit.to_string(), 'ucd': f.ucd, 'description': f.description} for f in tab.fields}
+elif mode == 'parquet':
+    t = Table.read(path, format='parquet')
+    out['columns'] = describe(t)
+    out['meta'] = {k: str(v) for k, v in t.meta.items()}
+    out['dtypes'] = {name: t[name].dtype.str for name in t.colnames}
 print(json.dumps(out))
