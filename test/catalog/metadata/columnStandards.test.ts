@@ -2,10 +2,13 @@ import { spawnSync } from 'node:child_process';
 import { describe, expect, it } from 'vitest';
 import { checkUcd } from '../../../src/core/metadata/index.ts';
 import { parseUnit } from '../../../src/core/units/index.ts';
+import { POPULATION_TABLES } from '../../../src/catalog/population/populationColumns.ts';
 import { allOutputColumns } from './allOutputColumns.ts';
 
 const PYTHON = '/usr/bin/python3';
-const columns = allOutputColumns();
+// Every column derive can write, and the three tables of `dawn-census population` (named table.column).
+const populationColumns = Object.entries(POPULATION_TABLES).flatMap(([table, t]) => t.columns.map((c) => ({ ...c, name: `${table}.${c.name}` })));
+const columns = [...allOutputColumns(), ...populationColumns];
 const numeric = columns.filter((c) => c.kind === 'float' || c.kind === 'int');
 
 /* Parses each unit with astropy: VOUnits first; a `dex(...)` unit with astropy's generic reader
@@ -35,6 +38,7 @@ describe('output column metadata', () => {
     });
     expect(bad).toEqual([]);
     expect(columns.length).toBeGreaterThan(100);
+    expect(populationColumns.length).toBe(22);
   });
 
   it('gives every numeric output column a unit that the project parser reads', () => {
