@@ -92,14 +92,24 @@ export function fillStandardNormals(rng: Rng, out: Float64Array): void {
   w.source = rng;
   w.pos = CHUNK;
   const buf = w.buf;
-  for (let k = 0; k < out.length; k++) {
-    if (w.pos === CHUNK) w.refill();
-    const j = buf[w.pos++] as number;
+  const n = out.length;
+  // The read position in a local, handed to `w` only around the rare edge path (which reads on).
+  let pos = CHUNK;
+  for (let k = 0; k < n; k++) {
+    if (pos === CHUNK) {
+      w.refill();
+      pos = 0;
+    }
+    const j = buf[pos++] as number;
     const i = j & (N - 1);
     const u = ((j >>> 7) + 0.5) * (2 / 33554432) - 1;
     // The common case, as in standardNormal; the rest goes to edgeInto with the word already taken.
     if (Math.abs(u) < (RATIO[i] as number)) out[k] = u * (X[i] as number);
-    else edgeInto(w, i, j >>> 7, out, k);
+    else {
+      w.pos = pos;
+      edgeInto(w, i, j >>> 7, out, k);
+      pos = w.pos;
+    }
   }
   // Let go of the caller's generator (no new object per call: this runs once per role and object).
   w.source = NO_SOURCE;
