@@ -9,7 +9,7 @@ import type { DerivedColumnSpec } from '../metadata/derivedColumns.ts';
 import { derivedReference } from '../metadata/derivedReference.ts';
 import type { SettingsProvenance } from '../metadata/settingsProvenance.ts';
 import type { CellValue } from '../parquet/parquetWriter.ts';
-import { packedValue } from './packedDerived.ts';
+import { packedField } from './packedDerived.ts';
 import type { PackedDerived } from './packedDerived.ts';
 import type { NormalizedRow } from '../normalize/normalizeChunk.ts';
 
@@ -45,8 +45,11 @@ function derivedColumn(spec: DerivedColumnSpec, provenance: SettingsProvenance |
   let value: OutputColumn['value'];
   if (source === 'flags') value = (c) => c.flags;
   else if (source === 'mbhMethod' || source === 'lbolMethod') value = (c) => (c.packed ? c.packed[source][c.k] : null);
-  else if (spec.kind === 'bool') value = (c) => (c.packed && !c.packed.errors[c.k] ? packedValue(c.packed, c.k, source) === 1 : null);
-  else value = (c) => (c.packed ? packedValue(c.packed, c.k, source) : null);
+  else {
+    const read = packedField(source);
+    if (spec.kind === 'bool') value = (c) => (c.packed && !c.packed.errors[c.k] ? read(c.packed, c.k) === 1 : null);
+    else value = (c) => (c.packed ? read(c.packed, c.k) : null);
+  }
   return { ...doc, group: 'derived', ...(reference ? { reference } : {}), value };
 }
 

@@ -108,5 +108,16 @@ export function packedValue(packed: PackedDerived, i: number, f: PackedField): n
   return packed.numbers[i * PACKED_WIDTH + PACKED_OFFSET[f]]!;
 }
 
+/**
+ * A reader of field `f`: `(packed, i) => packedValue(packed, i, f)` with the field's offset looked
+ * up once. The output columns read every field of every row, and the lookup by name per value
+ * was a tenth of the writing thread's time.
+ */
+export function packedField(f: PackedField): (packed: PackedDerived, i: number) => number {
+  const offset = PACKED_OFFSET[f];
+  if (offset === undefined) throw new Error(`no packed field ${f}`);
+  return (packed, i) => packed.numbers[i * PACKED_WIDTH + offset]!;
+}
+
 /** The lines whose luminosity field exists, for callers that iterate them. */
 export const PACKED_LINES: readonly LineId[] = LINES;

@@ -1,7 +1,7 @@
 import type { ColumnDoc } from '../metadata/columnDoc.ts';
 import { DERIVED_PERCENTILES, DERIVED_TAIL } from '../metadata/derivedColumns.ts';
 import type { DerivedColumnSpec } from '../metadata/derivedColumns.ts';
-import { packedValue } from '../derive/packedDerived.ts';
+import { packedField } from '../derive/packedDerived.ts';
 import type { PackedDerived } from '../derive/packedDerived.ts';
 import type { CellValue } from '../parquet/parquetWriter.ts';
 
@@ -35,7 +35,10 @@ function column(spec: DerivedColumnSpec): ReadingsColumn {
   let value: ReadingsColumn['value'];
   if (source === 'flags') value = (c) => c.flags;
   else if (source === 'mbhMethod' || source === 'lbolMethod') value = (c) => (c.packed ? c.packed[source][c.k] : null);
-  else value = (c) => (c.packed ? packedValue(c.packed, c.k, source) : null);
+  else {
+    const read = packedField(source);
+    value = (c) => (c.packed ? read(c.packed, c.k) : null);
+  }
   const description =
     source === 'flags' ? `${doc.description}; under this reading, also the reading's own flags (width_from_core, core_width_fallback, width_deflated, dust_off_by_reading, lbol_route_unchanged)` : `${doc.description}, under this row's reading`;
   return { ...doc, description, group: 'derived', value };

@@ -10,6 +10,7 @@ import { lambdaRequired, logSeedMassRequired } from '../growth/salpeterGrowth.ts
 import { planObject, type LumSource } from './objectPlan.ts';
 import { createBuffers, evaluateChain, sampleInputs, OUT, type ChainBuffers } from './evaluateChain.ts';
 import { log10 } from '../math/index.ts';
+import { countPositive } from './countPositive.ts';
 
 /** Working arrays, reused across objects: one sample for the nominal values, `draws` for the Monte Carlo. */
 const nominalBuffers = createBuffers(1);
@@ -99,14 +100,10 @@ export function deriveObject(inputs: ObjectInputs, settings: DeriveSettings, ran
   evaluateChain(plan, settings, db, false);
   const [dMbh, dLbol, dEdd, , dDelta] = db.out as [Float64Array, Float64Array, Float64Array, Float64Array, Float64Array];
   const localScatter = db.localScatter;
-  let superEdd = 0;
-  let above = 0;
-  for (let k = 0; k < draws; k++) {
-    if ((dEdd[k] as number) > 0) superEdd++;
-    // Above a local black hole of the same host quantity: the relation's intrinsic scatter is
-    // part of the comparison, as in local_offset_sigma.
-    if ((dDelta[k] as number) + (localScatter[k] as number) > 0) above++;
-  }
+  // Above a local black hole of the same host quantity: the relation's intrinsic scatter is
+  // part of the comparison, as in local_offset_sigma.
+  const superEdd = countPositive(dEdd, null);
+  const above = countPositive(dDelta, localScatter);
 
   // Bounds: a quantity resting on an upper-limit flux is a limit; its Monte Carlo spread
   // (the limit held fixed) is not an interval, and a probability of it is not defined.
@@ -211,3 +208,4 @@ export function deriveObject(inputs: ObjectInputs, settings: DeriveSettings, ran
     flags: [...flags].sort(),
   };
 }
+

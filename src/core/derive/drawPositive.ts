@@ -57,7 +57,22 @@ export function drawFromBank(bank: DrawBank, role: string, m: Measured, out: Flo
   // The smallest draw, to skip the redraw pass when nothing is ≤ 0 (nearly always).
   let min = Infinity;
   if (lo === hi) {
-    for (let k = 0; k < n; k++) {
+    // Four draws per step: the compiler checks each array passed in at every access it cannot
+    // prove repeated, so four accesses per step pay for those checks once (about twice as fast).
+    const n4 = n - (n % 4);
+    for (let k = 0; k < n4; k += 4) {
+      const x0 = v + lo * (z[k] as number);
+      const x1 = v + lo * (z[k + 1] as number);
+      const x2 = v + lo * (z[k + 2] as number);
+      const x3 = v + lo * (z[k + 3] as number);
+      out[k] = x0;
+      out[k + 1] = x1;
+      out[k + 2] = x2;
+      out[k + 3] = x3;
+      const m = Math.min(x0, x1, x2, x3);
+      if (m < min) min = m;
+    }
+    for (let k = n4; k < n; k++) {
       const x = v + lo * (z[k] as number);
       out[k] = x;
       if (x < min) min = x;

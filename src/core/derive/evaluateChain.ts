@@ -3,13 +3,13 @@ import type { LumSource, ObjectPlan } from './objectPlan.ts';
 import type { DrawBank } from '../random/drawBank.ts';
 import { DRAW_ROLES } from './drawRoles.ts';
 import { ebvFromBalmerDecrement } from '../dust/balmerDecrement.ts';
-import { virialLogMass } from '../virial/virialCalibration.ts';
+import { virialLogMass, virialLogMassInto } from '../virial/virialCalibration.ts';
 import { logL5100FromLogLHbeta } from '../virial/lineContinuumRelations.ts';
 import { logLbolFromHalpha } from '../bolometric/logLbolFromHalpha.ts';
 import { logLbolFromContinuum } from '../bolometric/logLbolFromContinuum.ts';
 import { logLbolFixedBC } from '../bolometric/fixedCorrections.ts';
 import { logSeedMassRequired } from '../growth/salpeterGrowth.ts';
-import { localLogMbh } from '../local/localRelation.ts';
+import { localOffsetInto } from '../local/localRelation.ts';
 import { drawFromBank } from './drawPositive.ts';
 import { log10, log10InPlace } from '../math/index.ts';
 
@@ -139,7 +139,15 @@ function isExact(m: { errLo?: number; errHi?: number }): boolean {
 
 /** out = sigma · z, draw by draw. */
 function scaled(z: Float64Array, sigma: number, out: Float64Array): void {
-  for (let k = 0; k < out.length; k++) out[k] = sigma * (z[k] as number);
+  const n = out.length;
+  const n4 = n - (n % 4);
+  for (let k = 0; k < n4; k += 4) {
+    out[k] = sigma * (z[k] as number);
+    out[k + 1] = sigma * (z[k + 1] as number);
+    out[k + 2] = sigma * (z[k + 2] as number);
+    out[k + 3] = sigma * (z[k + 3] as number);
+  }
+  for (let k = n4; k < n; k++) out[k] = sigma * (z[k] as number);
 }
 
 /** log10 L_bol from the corrected log10 luminosity of the plan's bolometric source. */
@@ -160,6 +168,7 @@ function lbolRoute(plan: ObjectPlan, settings: DeriveSettings, logL: number): nu
  */
 export function evaluateChain(plan: ObjectPlan, settings: DeriveSettings, b: ChainBuffers, nominal: boolean): void {
   const n = b.n;
+  const n4 = n - (n % 4);
   const { logMu, ebv, logFwhm, scatter, x } = b;
   const indices = nominal ? plan.sources.map((_, i) => i) : plan.used;
   for (const i of indices) {
@@ -167,17 +176,23 @@ export function evaluateChain(plan: ObjectPlan, settings: DeriveSettings, b: Cha
     const L = b.logL[i] as Float64Array;
     const c = s.isFlux ? plan.logFourPiDl2 : 0;
     const dk = 0.4 * s.dustK;
-    for (let k = 0; k < n; k++) L[k] = (L[k] as number) + c - (logMu[k] as number) + dk * (ebv[k] as number);
+    // Four draws per step here and below, for the reason given in virialLogMassInto; the same operations in the same order.
+    for (let k = 0; k < n4; k += 4) {
+      L[k] = (L[k] as number) + c - (logMu[k] as number) + dk * (ebv[k] as number);
+      L[k + 1] = (L[k + 1] as number) + c - (logMu[k + 1] as number) + dk * (ebv[k + 1] as number);
+      L[k + 2] = (L[k + 2] as number) + c - (logMu[k + 2] as number) + dk * (ebv[k + 2] as number);
+      L[k + 3] = (L[k + 3] as number) + c - (logMu[k + 3] as number) + dk * (ebv[k + 3] as number);
+    }
+    for (let k = n4; k < n; k++) L[k] = (L[k] as number) + c - (logMu[k] as number) + dk * (ebv[k] as number);
   }
 
   const [logM, logLbol, logEdd, logMseed, delta] = b.out as [Float64Array, Float64Array, Float64Array, Float64Array, Float64Array];
   const mass = plan.mass;
   if (mass) {
     const L = b.logL[mass.source] as Float64Array;
-    for (let k = 0; k < n; k++) {
-      const l = L[k] as number;
-      logM[k] = virialLogMass(mass.cal, mass.l5100FromHbeta ? logL5100FromLogLHbeta(l) : l, logFwhm[k] as number) + (scatter[k] as number);
-    }
+    if (mass.l5100FromHbeta) {
+      for (let k = 0; k < n; k++) logM[k] = virialLogMass(mass.cal, logL5100FromLogLHbeta(L[k] as number), logFwhm[k] as number) + (scatter[k] as number);
+    } else virialLogMassInto(mass.cal, L, logFwhm, scatter, logM);
   } else logM.fill(NaN);
 
   const lbol = plan.lbol;
@@ -189,12 +204,25 @@ export function evaluateChain(plan: ObjectPlan, settings: DeriveSettings, b: Cha
     const f0 = lbolRoute(plan, settings, 40);
     const slope = lbolRoute(plan, settings, 41) - f0;
     const linear = !nominal && Math.abs(f0 + 5 * slope - lbolRoute(plan, settings, 45)) < 1e-9;
-    if (linear) for (let k = 0; k < n; k++) logLbol[k] = f0 + slope * ((L[k] as number) - 40);
-    else for (let k = 0; k < n; k++) logLbol[k] = lbolRoute(plan, settings, L[k] as number);
+    if (linear) {
+      for (let k = 0; k < n4; k += 4) {
+        logLbol[k] = f0 + slope * ((L[k] as number) - 40);
+        logLbol[k + 1] = f0 + slope * ((L[k + 1] as number) - 40);
+        logLbol[k + 2] = f0 + slope * ((L[k + 2] as number) - 40);
+        logLbol[k + 3] = f0 + slope * ((L[k + 3] as number) - 40);
+      }
+      for (let k = n4; k < n; k++) logLbol[k] = f0 + slope * ((L[k] as number) - 40);
+    } else for (let k = 0; k < n; k++) logLbol[k] = lbolRoute(plan, settings, L[k] as number);
   } else logLbol.fill(NaN);
 
   const logEddPerMsun = log10(settings.eddingtonPerMsun);
-  for (let k = 0; k < n; k++) logEdd[k] = (logLbol[k] as number) - logEddPerMsun - (logM[k] as number);
+  for (let k = 0; k < n4; k += 4) {
+    logEdd[k] = (logLbol[k] as number) - logEddPerMsun - (logM[k] as number);
+    logEdd[k + 1] = (logLbol[k + 1] as number) - logEddPerMsun - (logM[k + 1] as number);
+    logEdd[k + 2] = (logLbol[k + 2] as number) - logEddPerMsun - (logM[k + 2] as number);
+    logEdd[k + 3] = (logLbol[k + 3] as number) - logEddPerMsun - (logM[k + 3] as number);
+  }
+  for (let k = n4; k < n; k++) logEdd[k] = (logLbol[k] as number) - logEddPerMsun - (logM[k] as number);
 
   if (nominal && !Number.isNaN(plan.dtSeedGyr)) {
     for (let k = 0; k < n; k++)
@@ -202,6 +230,6 @@ export function evaluateChain(plan: ObjectPlan, settings: DeriveSettings, b: Cha
   } else logMseed.fill(NaN);
 
   const local = plan.local;
-  if (local) for (let k = 0; k < n; k++) delta[k] = (logM[k] as number) - localLogMbh(local.rel, x[k] as number);
+  if (local) localOffsetInto(local.rel, logM, x, delta);
   else delta.fill(NaN);
 }

@@ -38,6 +38,30 @@ export function localLogMbh(rel: LocalRelation, x: number): number {
 }
 
 /**
+ * `out[k] = logMbh[k] − localLogMbh(rel, x[k])` for every k, bit for bit: the offset of each
+ * draw's mass from the relation, with the relation's numbers read once rather than per draw.
+ * @param rel - the relation.
+ * @param logMbh - log10 M_BH / M_sun per draw.
+ * @param x - the relation's input per draw, in the units of `rel.x`.
+ * @param out - receives the offsets, dex; as long as `logMbh`.
+ */
+export function localOffsetInto(rel: LocalRelation, logMbh: Float64Array, x: Float64Array, out: Float64Array): void {
+  const a = rel.a;
+  const b = rel.b;
+  const pivot = rel.pivot;
+  const n = out.length;
+  const n4 = n - (n % 4);
+  // Four draws per step, for the reason given in virialLogMassInto.
+  for (let k = 0; k < n4; k += 4) {
+    out[k] = (logMbh[k] as number) - (a + b * ((x[k] as number) - pivot));
+    out[k + 1] = (logMbh[k + 1] as number) - (a + b * ((x[k + 1] as number) - pivot));
+    out[k + 2] = (logMbh[k + 2] as number) - (a + b * ((x[k + 2] as number) - pivot));
+    out[k + 3] = (logMbh[k + 3] as number) - (a + b * ((x[k + 3] as number) - pivot));
+  }
+  for (let k = n4; k < n; k++) out[k] = (logMbh[k] as number) - (a + b * ((x[k] as number) - pivot));
+}
+
+/**
  * Which input a relation needs.
  * @param rel - the relation.
  */

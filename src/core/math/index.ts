@@ -1,4 +1,4 @@
-export { exp } from './exp.ts';
+export { exp, expInPlace } from './exp.ts';
 export { expm1 } from './expm1.ts';
 export { log } from './log.ts';
 export { log10, log10InPlace } from './log10.ts';

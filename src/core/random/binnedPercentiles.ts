@@ -38,7 +38,30 @@ export function binnedPercentiles(values: Float64Array): Percentiles | null {
   let max = -Infinity;
   // NaN fails both comparisons; the sum carries it (and ±Infinity) to the check below.
   let sum = 0;
-  for (let i = 0; i < n; i++) {
+  // The passes over the values go four at a time: the optimizing compiler checks an array passed
+  // in (its map, length and data pointer) at every element access it cannot prove repeated, so a
+  // loop body that reads four elements pays for those checks once instead of four times (about
+  // twice as fast). The order of every operation is that of the plain loop.
+  const n4 = n - (n % 4);
+  for (let i = 0; i < n4; i += 4) {
+    const x0 = values[i] as number;
+    const x1 = values[i + 1] as number;
+    const x2 = values[i + 2] as number;
+    const x3 = values[i + 3] as number;
+    sum += x0;
+    if (x0 < min) min = x0;
+    if (x0 > max) max = x0;
+    sum += x1;
+    if (x1 < min) min = x1;
+    if (x1 > max) max = x1;
+    sum += x2;
+    if (x2 < min) min = x2;
+    if (x2 > max) max = x2;
+    sum += x3;
+    if (x3 < min) min = x3;
+    if (x3 > max) max = x3;
+  }
+  for (let i = n4; i < n; i++) {
     const x = values[i] as number;
     sum += x;
     if (x < min) min = x;
@@ -51,9 +74,27 @@ export function binnedPercentiles(values: Float64Array): Percentiles | null {
   counts.fill(0);
   if (binOfValue.length < n) binOfValue = new Uint16Array(n);
   const bins = binOfValue;
-  for (let i = 0; i < n; i++) {
+  // b = NBINS only for x = max (or by rounding just below it): it belongs to the last bin.
+  for (let i = 0; i < n4; i += 4) {
+    const b0 = ((values[i] as number) - min) * scale;
+    const b1 = ((values[i + 1] as number) - min) * scale;
+    const b2 = ((values[i + 2] as number) - min) * scale;
+    const b3 = ((values[i + 3] as number) - min) * scale;
+    const bin0 = b0 < NBINS ? b0 | 0 : NBINS - 1;
+    const bin1 = b1 < NBINS ? b1 | 0 : NBINS - 1;
+    const bin2 = b2 < NBINS ? b2 | 0 : NBINS - 1;
+    const bin3 = b3 < NBINS ? b3 | 0 : NBINS - 1;
+    bins[i] = bin0;
+    bins[i + 1] = bin1;
+    bins[i + 2] = bin2;
+    bins[i + 3] = bin3;
+    counts[bin0] = (counts[bin0] as number) + 1;
+    counts[bin1] = (counts[bin1] as number) + 1;
+    counts[bin2] = (counts[bin2] as number) + 1;
+    counts[bin3] = (counts[bin3] as number) + 1;
+  }
+  for (let i = n4; i < n; i++) {
     const b = ((values[i] as number) - min) * scale;
-    // b = NBINS only for x = max (or by rounding just below it): it belongs to the last bin.
     const bin = b < NBINS ? b | 0 : NBINS - 1;
     bins[i] = bin;
     counts[bin] = (counts[bin] as number) + 1;
@@ -94,15 +135,21 @@ export function binnedPercentiles(values: Float64Array): Percentiles | null {
     slotOfBin[b] = ++slots;
     offset += c;
   }
-  for (let i = 0; i < n; i++) {
+  // Four at a time as above; only a few values per hundred are gathered.
+  for (let i = 0; i < n4; i += 4) {
+    const s0 = slotOfBin[bins[i] as number] as number;
+    const s1 = slotOfBin[bins[i + 1] as number] as number;
+    const s2 = slotOfBin[bins[i + 2] as number] as number;
+    const s3 = slotOfBin[bins[i + 3] as number] as number;
+    if ((s0 | s1 | s2 | s3) === 0) continue;
+    if (s0 !== 0) gather(s0, values[i] as number);
+    if (s1 !== 0) gather(s1, values[i + 1] as number);
+    if (s2 !== 0) gather(s2, values[i + 2] as number);
+    if (s3 !== 0) gather(s3, values[i + 3] as number);
+  }
+  for (let i = n4; i < n; i++) {
     const s = slotOfBin[bins[i] as number] as number;
-    if (s !== 0) {
-      const x = values[i] as number;
-      // Not `gathered[(fill[s - 1] as number)++]`: StrykerJS 9.6 prints that without its parentheses, which does not parse.
-      const k = fill[s - 1] as number;
-      fill[s - 1] = k + 1;
-      gathered[k] = x;
-    }
+    if (s !== 0) gather(s, values[i] as number);
   }
   for (let s = 0; s < slots; s++) sortRange(gathered, start[s] as number, fill[s] as number);
   for (let j = 0; j < 6; j++) slotOfRank[j] = slotOfBin[binOf[j] as number] as number;
@@ -117,6 +164,14 @@ export function binnedPercentiles(values: Float64Array): Percentiles | null {
     return t === 0 ? lo : lerp(lo, order(2 * i + 1), t);
   };
   return { p16: at(0, 0.16), p50: at(1, 0.5), p84: at(2, 0.84) };
+}
+
+/** Appends `x` to the stretch of `gathered` of slot `s` (1-based). */
+function gather(s: number, x: number): void {
+  // Not `gathered[(fill[s - 1] as number)++]`: StrykerJS 9.6 prints that without its parentheses, which does not parse.
+  const k = fill[s - 1] as number;
+  fill[s - 1] = k + 1;
+  gathered[k] = x;
 }
 
 /** Sorts a[from..to) ascending as TypedArray sort does (no NaN here): insertion sort for the usual few values, else the built-in sort. */

@@ -1,5 +1,6 @@
 import type { Percentiles } from '../derive/types.ts';
 import { percentiles16_50_84 } from './percentiles.ts';
+import { binnedPercentiles } from './binnedPercentiles.ts';
 
 /** Samples remembered per memo: one per variant of a quantity among an object's readings. */
 const ENTRIES = 4;
@@ -39,9 +40,14 @@ export class PercentileMemo {
       this.kept[slot] = k;
     }
     k.values.set(values);
-    // Computed on the kept copy, which it may reorder: the caller's sample stays as it was.
-    k.p = percentiles16_50_84(k.values);
-    k.values.set(values);
+    // The counting path reads the sample without reordering it; the selection it falls back to
+    // reorders, so that runs on the kept copy, which is then restored.
+    const counted = binnedPercentiles(values);
+    if (counted) k.p = counted;
+    else {
+      k.p = percentiles16_50_84(k.values);
+      k.values.set(values);
+    }
     return { ...k.p };
   }
 }
@@ -50,7 +56,16 @@ export class PercentileMemo {
 function sameValues(a: Float64Array, b: Float64Array): boolean {
   const n = a.length;
   if (n !== b.length) return false;
-  for (let i = 0; i < n; i++) {
+  // Four at a time while they are bitwise-plain equal (the common case of a repeated sample; the
+  // compiler checks each array once per step instead of at every element), then one by one.
+  const n4 = n - (n % 4);
+  let i = 0;
+  for (; i < n4; i += 4) {
+    if (a[i] !== b[i] || a[i + 1] !== b[i + 1] || a[i + 2] !== b[i + 2] || a[i + 3] !== b[i + 3]) break;
+    // Equal numbers that may still differ: zeros of either sign (NaN never gets here).
+    if (a[i] === 0 || a[i + 1] === 0 || a[i + 2] === 0 || a[i + 3] === 0) break;
+  }
+  for (; i < n; i++) {
     const x = a[i] as number;
     const y = b[i] as number;
     if (x === y) {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { allocatePacked, PACKED_FIELDS, PACKED_WIDTH, packInto, packedValue } from '../../../src/catalog/derive/packedDerived.ts';
+import { allocatePacked, PACKED_FIELDS, PACKED_WIDTH, packInto, packedField, packedValue } from '../../../src/catalog/derive/packedDerived.ts';
 import type { DerivedObject } from '../../../src/core/derive/types.ts';
 
 const derived: DerivedObject = {
@@ -50,6 +50,18 @@ describe('packed derived results', () => {
     expect(packedValue(p, 0, 'logMbh')).toBeNaN();
     expect(packedValue(p, 2, 'ageGyr')).toBeNaN();
     expect(p.flags[0]).toBe('');
+  });
+
+  it('give, through a reader made for one field, what packedValue gives for every field and record', () => {
+    const p = allocatePacked(3);
+    packInto(p, 1, derived);
+    packInto(p, 2, { ...derived, ageGyr: 0.5, logMbh: 6.5 });
+    for (const f of PACKED_FIELDS) {
+      const read = packedField(f);
+      for (let i = 0; i < 3; i++) expect(Object.is(read(p, i), packedValue(p, i, f)), `${f}, record ${i}`).toBe(true);
+    }
+    expect(packedField('ageGyr')(p, 2)).toBe(0.5);
+    expect(() => packedField('nope' as never)).toThrow('no packed field nope');
   });
 
   it('pack which quantities are bounds as 1 and the others as 0', () => {

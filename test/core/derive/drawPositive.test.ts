@@ -82,6 +82,30 @@ describe('drawFromBank', () => {
     expect(differ).toBe(0);
   });
 
+  it('draws value + σ·z for every draw of any count, the one to three left over by its steps of four included, and redraws a non-positive one there', () => {
+    for (const n of [1, 2, 3, 5, 6, 7, 1001, 1002, 1003]) {
+      const bank = createDrawBank(createRng(40 + n), n);
+      const out = new Float64Array(n);
+      drawFromBank(bank, 'lum_halpha', { value: 100, errLo: 5, errHi: 5 }, out, true);
+      const z = bank.normals('lum_halpha');
+      for (let k = 0; k < n; k++) expect(out[k], `n = ${n}, k = ${k}`).toBe(100 + 5 * (z[k] as number));
+    }
+    // A single draw ≤ 0, in any place of a step of four or among those left over, must still be
+    // found and redrawn (a bank whose deviates are all 0 but one).
+    for (const n of [5, 6, 7, 1003]) {
+      for (const bad of [0, 1, 2, 3, n - 1]) {
+        const z = new Float64Array(n);
+        z[bad] = -10;
+        const redraw = createRng(3);
+        const bank = { n, generation: 0, normals: () => z, uniforms: () => { throw new Error('uniforms'); }, redraws: () => redraw, derived: () => { throw new Error('derived'); } };
+        const out = new Float64Array(n);
+        drawFromBank(bank, 'lum_halpha', { value: 1, errLo: 0.5, errHi: 0.5 }, out, true);
+        for (let k = 0; k < n; k++) if (k !== bad) expect(out[k]).toBe(1);
+        expect(out[bad], `n = ${n}, draw ${bad}`).toBeGreaterThan(0);
+      }
+    }
+  });
+
   it('draws a one-sided error (lower error zero) only above the value', () => {
     const out = drawn(23, { value: 10, errLo: 0, errHi: 2 }, true);
     expect(Math.min(...out)).toBeGreaterThanOrEqual(10);

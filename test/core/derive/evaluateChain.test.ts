@@ -5,7 +5,7 @@ import type { DeriveSettings, ObjectInputs } from '../../../src/core/derive/type
 import { createRng } from '../../../src/core/random/createRng.ts';
 import { seedFor } from '../../../src/core/random/seedFor.ts';
 import { createDrawBank } from '../../../src/core/random/drawBank.ts';
-import { createBuffers, sampleInputs } from '../../../src/core/derive/evaluateChain.ts';
+import { createBuffers, evaluateChain, sampleInputs, type ChainBuffers } from '../../../src/core/derive/evaluateChain.ts';
 import { planObject } from '../../../src/core/derive/objectPlan.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 
@@ -135,5 +135,65 @@ describe('sampleInputs: every measurement draws from its own role', () => {
     // … while the dust itself is drawn: E(B−V) varies from draw to draw.
     expect(new Set(withDust.ebv).size).toBeGreaterThan(400);
     expect(new Set(without.ebv)).toEqual(new Set([0]));
+  });
+});
+
+describe('evaluateChain over many draws', () => {
+  // Internal check, no external values: the chain works draw by draw, so each draw of a run over n
+  // draws must equal the chain run over that draw alone. The loops go four draws at a time, so
+  // counts that leave one to three over are the ones to check.
+  const object: ObjectInputs = {
+    id: 'steps-of-four',
+    z: 6.2,
+    lines: { halpha: { fluxCgs: { value: 2e-18, errLo: 3e-19, errHi: 3e-19 }, fwhmKms: { value: 1800, errLo: 200, errHi: 260 } } },
+    mu: { value: 1.8, errLo: 0.2, errHi: 0.2 },
+    av: { value: 0.6, errLo: 0.2, errHi: 0.2 },
+    logMstar: { value: 9.2, errLo: 0.3, errHi: 0.3 },
+  };
+  const s = settings();
+  const plan = planObject(object, s);
+  const copyDraw = (from: ChainBuffers, k: number, to: ChainBuffers): void => {
+    to.logMu[0] = from.logMu[k] as number;
+    to.ebv[0] = from.ebv[k] as number;
+    from.logL.forEach((a, i) => ((to.logL[i] as Float64Array)[0] = a[k] as number));
+    to.logFwhm[0] = from.logFwhm[k] as number;
+    to.x[0] = from.x[k] as number;
+    to.scatter[0] = from.scatter[k] as number;
+    to.localScatter[0] = from.localScatter[k] as number;
+  };
+
+  it('gives every draw, the last ones of a count not a multiple of four included, exactly what the chain gives that draw alone', () => {
+    for (const n of [1, 2, 3, 5, 6, 7, 1001, 1002, 1003]) {
+      const bank = createDrawBank(rngFor(`steps-${n}`), n);
+      const b = createBuffers(n);
+      sampleInputs(plan, s, bank, b);
+      const inputs = createBuffers(n);
+      for (let k = 0; k < n; k++) copyDraw(b, k, inputs);
+      const before = createBuffers(n);
+      (['logMu', 'ebv', 'logFwhm', 'x', 'scatter', 'localScatter'] as const).forEach((key) => before[key].set(b[key]));
+      b.logL.forEach((a, i) => (before.logL[i] as Float64Array).set(a));
+      evaluateChain(plan, s, b, false);
+      const one = createBuffers(1);
+      for (let k = 0; k < n; k++) {
+        copyDraw(before, k, one);
+        evaluateChain(plan, s, one, false);
+        b.out.forEach((a, slot) => expect(Object.is(a[k], (one.out[slot] as Float64Array)[0]), `n = ${n}, draw ${k}, output ${slot}`).toBe(true));
+        for (const i of plan.used) expect(Object.is((b.logL[i] as Float64Array)[k], (one.logL[i] as Float64Array)[0]), `n = ${n}, draw ${k}, source ${i}`).toBe(true);
+      }
+    }
+  });
+
+  it('scales the calibration\'s and the local relation\'s deviates by their scatter for every draw', () => {
+    for (const n of [3, 1003]) {
+      const bank = createDrawBank(rngFor(`scatter-${n}`), n);
+      const b = createBuffers(n);
+      sampleInputs(plan, s, bank, b);
+      const zm = bank.normals('mass_scatter');
+      const zl = bank.normals('local_scatter');
+      for (let k = 0; k < n; k++) {
+        expect(b.scatter[k], `n = ${n}, draw ${k}`).toBe(plan.mass!.cal.scatterDex * (zm[k] as number));
+        expect(b.localScatter[k], `n = ${n}, draw ${k}`).toBe(plan.local!.rel.scatterDex * (zl[k] as number));
+      }
+    }
   });
 });

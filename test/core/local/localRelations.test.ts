@@ -1,6 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import { getLocalRelation, LOCAL_RELATIONS } from '../../../src/core/local/localRelations.ts';
-import { inLocalRelationRange, localLogMbh, localRelationInput } from '../../../src/core/local/localRelation.ts';
+import { inLocalRelationRange, localLogMbh, localOffsetInto, localRelationInput } from '../../../src/core/local/localRelation.ts';
+import { createRng } from '../../../src/core/random/index.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 
 const lg = Math.log10;
@@ -75,5 +76,20 @@ describe('local relation ranges and errors', () => {
 
   it('list the known ids, comma-separated, when an id is unknown', () => {
     expect(() => getLocalRelation('nope')).toThrow('(known: rv15_agn, rv15_early, kh13_mbulge, kh13_sigma)');
+  });
+});
+
+describe('localOffsetInto', () => {
+  it('gives log M_BH minus localLogMbh, bit for bit, draw by draw, for every relation and every length', () => {
+    const rng = createRng(6);
+    for (const rel of Object.values(LOCAL_RELATIONS)) {
+      for (const n of [0, 1, 2, 3, 4, 5, 7, 1000, 1001, 1003]) {
+        const logMbh = Float64Array.from({ length: n }, () => 6 + 3 * rng.next());
+        const x = Float64Array.from({ length: n }, () => rel.pivot + (rng.next() - 0.5));
+        const out = new Float64Array(n);
+        localOffsetInto(rel, logMbh, x, out);
+        for (let k = 0; k < n; k++) expect(Object.is(out[k], (logMbh[k] as number) - localLogMbh(rel, x[k] as number)), `${rel.id}, n = ${n}, k = ${k}`).toBe(true);
+      }
+    }
   });
 });

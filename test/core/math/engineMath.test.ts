@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { exp, expm1, log, log10, log10InPlace, log1p, pow } from '../../../src/core/math/index.ts';
+import { exp, expInPlace, expm1, log, log10, log10InPlace, log1p, pow } from '../../../src/core/math/index.ts';
 import { createRng } from '../../../src/core/random/index.ts';
 
 /**
@@ -132,5 +132,28 @@ describe('log10InPlace', () => {
     const arr = Float64Array.from(xs);
     log10InPlace(arr);
     for (let k = 0; k < xs.length; k++) expect(Object.is(arr[k], log10(xs[k] as number)), `log10(${xs[k]})`).toBe(true);
+  });
+});
+
+describe('expInPlace', () => {
+  it('gives exp bit for bit over the whole range, at the branch edges of the reduction, and for the special values', () => {
+    const rng = createRng(7);
+    const xs: number[] = [];
+    // Uniform over exp's finite range, and the small arguments of the ziggurat's wedge test.
+    for (let k = 0; k < 20000; k++) xs.push((rng.next() - 0.5) * 1500, -4 * rng.next(), 0.1 * (rng.next() - 0.5));
+    // Either side of each threshold exp branches on: 2^-28, 0.5 ln 2, 1.5 ln 2, where 2^k leaves the normal range, overflow.
+    for (const t of [2 ** -28, 0.5 * Math.LN2, 1.5 * Math.LN2, 1021 * Math.LN2, 708.39, 709.782712893384, 745.1332191019411]) {
+      for (const s of [-1, 1]) for (const f of [1 - 2 ** -52, 1, 1 + 2 ** -52, 1 - 1e-9, 1 + 1e-9]) xs.push(s * t * f);
+    }
+    xs.push(0, -0, 1, -1, 2 ** -1074, Infinity, -Infinity, NaN, 1e-300, 800, -800);
+    const arr = Float64Array.from(xs);
+    expInPlace(arr, 0, arr.length);
+    for (let k = 0; k < xs.length; k++) expect(Object.is(arr[k], exp(xs[k] as number)), `exp(${xs[k]})`).toBe(true);
+  });
+
+  it('changes only the values in [from, to)', () => {
+    const arr = Float64Array.from([1, 2, 3, 4]);
+    expInPlace(arr, 1, 3);
+    expect(Array.from(arr)).toEqual([1, exp(2), exp(3), 4]);
   });
 });

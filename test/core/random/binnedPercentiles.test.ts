@@ -49,6 +49,30 @@ describe('binnedPercentiles', () => {
     expect(binnedPercentiles(new Float64Array(10))).toBeNull();
   });
 
+  it('reads the last values of a sample whose length is not a multiple of four like the others (range, counts and gathering)', () => {
+    // The passes go four values at a time; these put what matters into the one to three left over.
+    for (const n of [1001, 1002, 1003]) {
+      const withNaN = Float64Array.from({ length: n }, (_, i) => i);
+      withNaN[n - 1] = NaN;
+      expect(binnedPercentiles(withNaN), `NaN last, n = ${n}`).toBeNull();
+      const outlier = Float64Array.from({ length: n }, () => standardNormal(rng));
+      outlier[n - 1] = 1e9; // the range comes from the last value alone: the bulk crowds one bin
+      expect(binnedPercentiles(outlier), `outlier last, n = ${n}`).toBeNull();
+      // The order statistics the percentiles need, moved to the end (swapped with the last values).
+      const v = Float64Array.from({ length: n }, (_, i) => 100 + i * 0.5);
+      [0.5, 0.16, 0.84].forEach((p, j) => {
+        const k = Math.floor((n - 1) * p);
+        [v[k], v[n - 1 - j]] = [v[n - 1 - j]!, v[k]!];
+      });
+      expect(binnedPercentiles(v), `needed values last, n = ${n}`).toEqual(bySort(v));
+      // The smallest and largest values last.
+      const w = Float64Array.from({ length: n }, () => standardNormal(rng));
+      w[n - 1] = -6;
+      w[n - 2] = 6;
+      expect(binnedPercentiles(w), `extremes last, n = ${n}`).toEqual(bySort(w));
+    }
+  });
+
   it('orders −0 before +0 as a full sort does, so an order statistic among zeros keeps its sign', () => {
     // 30 × −1, then 20 × +0 and 20 × −0 (in that order), then 31 × +1: sorted, index 50 is the first +0.
     const v = Float64Array.from([...Array(30).fill(-1), ...Array(20).fill(0), ...Array(20).fill(-0), ...Array(31).fill(1)]);

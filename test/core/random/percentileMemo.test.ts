@@ -37,6 +37,38 @@ describe('PercentileMemo', () => {
     expect(memo.percentiles(b).p50).toBe(49);
   });
 
+  it('tells apart samples that differ in one value at any place of its steps of four, or among those left over', () => {
+    // The comparison goes four values at a time; a difference in any one of the four, or after them, must count.
+    for (const n of [1000, 1001, 1003]) {
+      const a = Float64Array.from({ length: n }, (_, i) => i + 1); // no zero: the four-at-a-time comparison runs
+      for (const at of [4, 5, 6, 7, n - 1]) {
+        const memo = new PercentileMemo();
+        memo.percentiles(a);
+        const b = Float64Array.from(a);
+        b[at] = -1; // one value moved below all others: every order statistic moves
+        expect(memo.percentiles(b), `n = ${n}, value ${at}`).toEqual(plain(b));
+        // NaN and a zero's sign there too.
+        const c = Float64Array.from(a);
+        c[at] = NaN;
+        const d = Float64Array.from(a);
+        d[at] = 0;
+        const e = Float64Array.from(d);
+        e[at] = -0;
+        expect(memo.percentiles(c), `NaN, n = ${n}, value ${at}`).toEqual(plain(c));
+        expect(memo.percentiles(Float64Array.from(c)), `NaN again, n = ${n}, value ${at}`).toEqual(plain(c));
+        expect(memo.percentiles(d)).toEqual(plain(d));
+        expect(memo.percentiles(e)).toEqual(plain(e));
+      }
+    }
+    // A zero's sign decides the median itself, in the last place of a length leaving three over.
+    const memo = new PercentileMemo();
+    const plus = Float64Array.from([...Array(51).fill(-1), ...Array(51).fill(1), 0]);
+    const minus = Float64Array.from(plus);
+    minus[102] = -0;
+    expect(Object.is(memo.percentiles(plus).p50, 0)).toBe(true);
+    expect(Object.is(memo.percentiles(minus).p50, -0)).toBe(true);
+  });
+
   it('tells apart samples that differ only in the sign of a zero', () => {
     const memo = new PercentileMemo();
     // 50 × −1, a zero, 50 × +1: the median is the zero itself, with its sign.
