@@ -40,7 +40,7 @@ import { defaultReadingsConfig } from '../config/readingsConfig.ts';
 import { READINGS_COLUMNS } from '../readings/readingsColumns.ts';
 import type { ReadingRowContext } from '../readings/readingsColumns.ts';
 import { buildReadingsMetadata, READINGS_METADATA_KEY } from '../readings/readingsMetadata.ts';
-import { summarizeReadings } from '../readings/summarizeReadings.ts';
+import { summarizeReadingRows } from '../readings/summarizeReadings.ts';
 import { untilAborted } from './untilAborted.ts';
 import type { ReadingSummary } from '../../core/readings/readingSummary.ts';
 
@@ -282,12 +282,14 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
     }
     if (writer.rowCount !== counts.rows) throw new Error(`wrote ${writer.rowCount} rows for ${counts.rows} read; nothing was written`);
     const readingsMeta = buildReadingsMetadata(batchReadings.primary.id, path.basename(paths.readings), batchReadings.list, READINGS_COLUMNS);
-    await readingsWriter.finish({
+    // The readings file's own metadata is written without the summary (the catalog's carries it).
+    const readingsKv = {
       [READINGS_METADATA_KEY]: JSON.stringify(readingsMeta),
       ...parquetStandardKeys(readingsTableDoc(toolVersion()), readingsWriter.textLengths()),
-    });
-    readingsWriter = null;
-    readingsMeta.summary = await summarizeReadings(readingsTemp, batchReadings.list.map((r) => r.id));
+    };
+    const rw = readingsWriter;
+    await rw.commit();
+    readingsMeta.summary = await summarizeReadingRows((sql) => rw.queryRows(sql), batchReadings.list.map((r) => r.id));
     const metadata = buildCatalogMetadata({
       config: opts.config,
       source: src,
@@ -300,8 +302,15 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
       readings: readingsMeta,
     });
     const doc = tableDocOf(metadata);
-    await writer.finish({ [METADATA_KEY]: catalogMetadataJson(metadata), ...parquetStandardKeys(doc, writer.textLengths()) });
+    // The two Parquet files are written at the same time, one DuckDB thread each (the workers
+    // have stopped, so both cores are free); each file's bytes do not depend on the other.
+    const written = await Promise.allSettled([
+      rw.finish(readingsKv),
+      writer.finish({ [METADATA_KEY]: catalogMetadataJson(metadata), ...parquetStandardKeys(doc, writer.textLengths()) }),
+    ]);
+    readingsWriter = null;
     writer = null;
+    for (const w of written) if (w.status === 'rejected') throw w.reason;
     // ECSV, VOTable and FITS copies, staged with the rest so that all files are replaced together.
     const exports = exportTargets.map((t) => ({ format: t.format, path: set.stagedExtra(t.path) }));
     await exportCatalog(set.staged('catalog'), doc, exports);

@@ -30,6 +30,16 @@ export interface ParquetWriter {
    */
   textLengths(): Map<string, number>;
   /**
+   * Ends appending: every appended row is committed to the scratch table, which `queryRows` can
+   * then read. Called by `finish` if not before; no row may be appended after it.
+   */
+  commit(): Promise<void>;
+  /**
+   * Runs `sql` on the committed rows (the scratch table is named `rows`) and returns the result's
+   * rows as plain JS objects. Only between `commit` and `finish`.
+   */
+  queryRows(sql: string): Promise<Record<string, unknown>[]>;
+  /**
    * Writes every appended row, in insertion order, to `parquetPath` (zstd, single-threaded so
    * that the bytes depend only on the rows and the metadata), with `kvMetadata` as Parquet
    * key/value metadata, then closes the scratch database.
@@ -127,6 +137,7 @@ export async function openParquetWriter(
   let vectors = columns.map((_, i) => chunk.getColumnVector(i) as unknown as WritableVector);
   let inChunk = 0;
   let rowCount = 0;
+  let committed = false;
   const textColumns = columns.flatMap((c, i) => (c.kind === 'string' ? [i] : []));
   const textLength = new Array<number>(textColumns.length).fill(0);
 
@@ -149,6 +160,16 @@ export async function openParquetWriter(
     inChunk = 0;
   };
 
+  const commit = async (): Promise<void> => {
+    if (committed) return;
+    committed = true;
+    flushChunk();
+    app.flushSync();
+    app.closeSync();
+    appender = null;
+    await con.run('COMMIT');
+  };
+
   return {
     get rowCount() {
       return rowCount;
@@ -157,6 +178,7 @@ export async function openParquetWriter(
       return new Map(textColumns.map((i, k) => [columns[i]!.name, textLength[k]!]));
     },
     appendRow(values) {
+      if (committed) throw new Error('appendRow after commit');
       for (let i = 0; i < vectors.length; i++) vectors[i]!.setItem(inChunk, convert[i]!(values[i]));
       for (let k = 0; k < textColumns.length; k++) {
         const v = values[textColumns[k]!];
@@ -169,13 +191,14 @@ export async function openParquetWriter(
       rowCount++;
       if (inChunk === VECTOR_ROWS) flushChunk();
     },
+    commit,
+    async queryRows(sql) {
+      if (!committed) throw new Error('queryRows before commit: the rows are not in the table yet');
+      return (await con.runAndReadAll(sql)).getRowObjectsJS() as Record<string, unknown>[];
+    },
     async finish(kvMetadata) {
       try {
-        flushChunk();
-        app.flushSync();
-        app.closeSync();
-        appender = null;
-        await con.run('COMMIT');
+        await commit();
         const kv = Object.entries(kvMetadata)
           .map(([k, v]) => `${sqlString(k)}: ${sqlString(v)}`)
           .join(', ');

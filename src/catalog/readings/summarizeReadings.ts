@@ -26,3 +26,14 @@ export async function summarizeReadings(parquetPath: string, order: readonly str
     instance.closeSync();
   }
 }
+
+/**
+ * The same summary from the readings writer's committed scratch table (the table `rows`), before
+ * its Parquet file is written, so that file and the catalog can be written at the same time.
+ * @param query - runs SQL on the scratch database (`ParquetWriter.queryRows`).
+ * @param order - reading ids in display order.
+ */
+export async function summarizeReadingRows(query: (sql: string) => Promise<Record<string, unknown>[]>, order: readonly string[]): Promise<ReadingSummary[]> {
+  const rows = (await query(readingSummarySql('rows'))).map((r) => summaryFromRow(r));
+  return order.flatMap((id) => rows.filter((r) => r.reading === id));
+}

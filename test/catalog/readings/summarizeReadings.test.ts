@@ -3,7 +3,8 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { DuckDBInstance } from '@duckdb/node-api';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { summarizeReadings } from '../../../src/catalog/readings/summarizeReadings.ts';
+import { openParquetWriter, type CellValue, type ParquetColumn } from '../../../src/catalog/parquet/parquetWriter.ts';
+import { summarizeReadingRows, summarizeReadings } from '../../../src/catalog/readings/summarizeReadings.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 
 let dir: string;
@@ -58,5 +59,29 @@ describe('summarizeReadings', () => {
 
   it('returns the readings in the order asked, leaving out ids the table does not hold', async () => {
     expect((await summarizeReadings(file, ['c', 'x', 'a'])).map((s) => s.reading)).toEqual(['c', 'a']);
+  });
+});
+
+describe('summarizeReadingRows', () => {
+  it("gives the file's summary from a Parquet writer's committed scratch table, in the order asked", async () => {
+    const db = await DuckDBInstance.create(':memory:');
+    const con = await db.connect();
+    const rows = (await con.runAndReadAll(`SELECT reading, n, p_super_eddington, delta_log_mbh_local, lambda_req_light, log_mbh, log_edd_ratio FROM '${file}'`)).getRows();
+    con.closeSync();
+    db.closeSync();
+    const columns: ParquetColumn[] = [
+      { name: 'reading', kind: 'string' }, { name: 'n', kind: 'int' }, { name: 'p_super_eddington', kind: 'float' }, { name: 'delta_log_mbh_local', kind: 'float' },
+      { name: 'lambda_req_light', kind: 'float' }, { name: 'log_mbh', kind: 'float' }, { name: 'log_edd_ratio', kind: 'float' },
+    ];
+    const w = await openParquetWriter(path.join(dir, 'w.parquet'), columns, { scratchDir: path.join(dir, 'scratch-w') });
+    for (const r of rows) w.appendRow(r as CellValue[]);
+    await expect(w.queryRows('SELECT 1')).rejects.toThrow(/before commit/);
+    await w.commit();
+    expect(() => w.appendRow(rows[0] as CellValue[])).toThrow(/after commit/);
+    const fromTable = await summarizeReadingRows((sql) => w.queryRows(sql), ['c', 'a', 'b']);
+    await w.finish({});
+    expect(fromTable.map((s) => s.reading)).toEqual(['c', 'a', 'b']);
+    expect(fromTable).toEqual(await summarizeReadings(file, ['c', 'a', 'b']));
+    expect(fromTable[1]!.superEddington).toMatchObject({ k: 3, n: 400 });
   });
 });
