@@ -10,12 +10,14 @@ const GEHRELS = { rtol: 1e-7, source: 'Gehrels 1986 Tables 1–2 (S = 1), astrop
 
 const member = (x: number, vmaxCmpc3: number, xDraws: number[] = []): DensityMember => ({ x, vmaxCmpc3, xDraws });
 
+// Computed inside each test (not once per file) so that a mutation run sees every test use the code.
+const sample = () =>
+  binnedDensity([member(6.2, 1e5), member(6.5, 2e5), member(6.999, 1e6), member(7.2, 4e5), member(8, 1e3), member(5.99, 1e3)], [6, 6.5, 7, 8], 1e7);
+
 describe('binnedDensity', () => {
-  const edges = [6, 6.5, 7, 8];
-  const members = [member(6.2, 1e5), member(6.5, 2e5), member(6.999, 1e6), member(7.2, 4e5), member(8, 1e3), member(5.99, 1e3)];
-  const bins = binnedDensity(members, edges, 1e7);
 
   it('sums 1/V_max over the members in each bin and divides by the bin width (Schmidt 1968)', () => {
+    const bins = sample();
     expect(bins.map((b) => [b.lo, b.hi, b.count])).toEqual([[6, 6.5, 1], [6.5, 7, 2], [7, 8, 1]]);
     // Closed form: Σ 1/V_max / Δx. A value on a bin's lower edge belongs to that bin; the last edge (8) and
     // anything below the first are outside.
@@ -25,6 +27,7 @@ describe('binnedDensity', () => {
   });
 
   it('scales the Poisson 1σ limits of the count by phi per object', () => {
+    const bins = sample();
     const b = bins[1]!;
     expectClose(b.phiHi, (UPPER[2]! * b.phi) / 2, GEHRELS);
     expectClose(b.phiLo, (LOWER[2]! * b.phi) / 2, GEHRELS);
@@ -33,14 +36,18 @@ describe('binnedDensity', () => {
   });
 
   it('gives an empty bin zero density and an upper limit of 1.841 objects in the whole volume', () => {
-    const [b] = binnedDensity([member(7.5, 1e5)], [6, 7, 8], 2e7);
+    const [b] = binnedDensity([member(7.5, 1e5)], [6, 6.5, 8], 2e7);
     expect(b!.count).toBe(0);
     expect(b!.phi).toBe(0);
     expect(b!.phiLo).toBe(0);
-    expectClose(b!.phiHi, UPPER[0]! / (2e7 * 1), GEHRELS);
+    expectClose(b!.phiHi, UPPER[0]! / (2e7 * 0.5), GEHRELS);
+    // No members at all: every bin empty, no draws.
+    const empty = binnedDensity([], [6, 7], 1e7);
+    expect(empty.map((e) => [e.count, e.phi, e.phiP16])).toEqual([[0, 0, null]]);
   });
 
   it('has no draw percentiles without draws', () => {
+    const bins = sample();
     expect(bins[0]!.phiP16).toBeNull();
     expect(bins[0]!.phiP84).toBeNull();
   });
