@@ -16,9 +16,8 @@ export async function summarizeReadings(parquetPath: string, order: readonly str
   try {
     const con = await instance.connect();
     try {
-      const reader = await con.runAndReadAll(readingSummarySql(`read_parquet(${sqlString(parquetPath)})`));
-      const rows = reader.getRowObjectsJS().map((r) => summaryFromRow(r as Record<string, unknown>));
-      return order.flatMap((id) => rows.filter((r) => r.reading === id));
+      const query = async (sql: string) => (await con.runAndReadAll(sql)).getRowObjectsJS() as Record<string, unknown>[];
+      return await summarizeReadingRows(query, order, `read_parquet(${sqlString(parquetPath)})`);
     } finally {
       con.closeSync();
     }
@@ -32,8 +31,13 @@ export async function summarizeReadings(parquetPath: string, order: readonly str
  * its Parquet file is written, so that file and the catalog can be written at the same time.
  * @param query - runs SQL on the scratch database (`ParquetWriter.queryRows`).
  * @param order - reading ids in display order.
+ * @param source - the SQL source of the readings rows (the scratch table by default).
  */
-export async function summarizeReadingRows(query: (sql: string) => Promise<Record<string, unknown>[]>, order: readonly string[]): Promise<ReadingSummary[]> {
-  const rows = (await query(readingSummarySql('rows'))).map((r) => summaryFromRow(r));
+export async function summarizeReadingRows(
+  query: (sql: string) => Promise<Record<string, unknown>[]>,
+  order: readonly string[],
+  source = 'rows',
+): Promise<ReadingSummary[]> {
+  const rows = (await query(readingSummarySql(source))).map((r) => summaryFromRow(r));
   return order.flatMap((id) => rows.filter((r) => r.reading === id));
 }
