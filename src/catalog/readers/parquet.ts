@@ -217,7 +217,8 @@ function astropyMasks(meta: Record<string, unknown>, columns: readonly ColumnInf
   const maskColumns = new Set<number>();
   const serialized = meta.__serialized_columns__;
   if (!serialized || typeof serialized !== 'object' || Array.isArray(serialized)) return { maskOf, maskColumns };
-  const index = (name: unknown): number => (typeof name === 'string' ? columns.findIndex((c) => c.name === name) : -1);
+  const byName = new Map(columns.map((c, i) => [c.name, i]));
+  const index = (name: unknown): number => (typeof name === 'string' ? (byName.get(name) ?? -1) : -1);
   let all = true;
   for (const [name, entry] of Object.entries(serialized as Record<string, unknown>)) {
     const e = entry as { __class__?: unknown; data?: { name?: unknown }; mask?: { name?: unknown } } | null;
