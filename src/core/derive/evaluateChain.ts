@@ -111,8 +111,12 @@ export function sampleInputs(plan: ObjectPlan, settings: DeriveSettings, bank: D
   } else b.ebv.fill(0);
 
   // Every source's observed value, as log10 (the corrections are added by evaluateChain).
-  const indices = bank ? plan.used : plan.sources.map((_, i) => i);
-  for (const i of indices) {
+  // Indexed loops over the plan's sources (here and in evaluateChain): iterating `plan.used` and a
+  // fresh index array with for…of made the optimized code check the arrays' maps, and it was
+  // thrown away and compiled again when an object's array had another elements kind.
+  const count = bank ? plan.used.length : plan.sources.length;
+  for (let j = 0; j < count; j++) {
+    const i = bank ? (plan.used[j] as number) : j;
     const s = plan.sources[i] as LumSource;
     if (s.isLimit) (b.logL[i] as Float64Array).fill(log10(s.m.value));
     else drawLog(DRAW_ROLES.luminosity[s.key], s.m, b.logL[i] as Float64Array);
@@ -170,8 +174,9 @@ export function evaluateChain(plan: ObjectPlan, settings: DeriveSettings, b: Cha
   const n = b.n;
   const n4 = n - (n % 4);
   const { logMu, ebv, logFwhm, scatter, x } = b;
-  const indices = nominal ? plan.sources.map((_, i) => i) : plan.used;
-  for (const i of indices) {
+  const count = nominal ? plan.sources.length : plan.used.length;
+  for (let j = 0; j < count; j++) {
+    const i = nominal ? j : (plan.used[j] as number);
     const s = plan.sources[i] as LumSource;
     const L = b.logL[i] as Float64Array;
     const c = s.isFlux ? plan.logFourPiDl2 : 0;
