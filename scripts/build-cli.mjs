@@ -1,6 +1,7 @@
 #!/usr/bin/env node
 // Compiles the command (src/catalog, src/core) to lib/ with tsc (types are checked by
-// `npm run typecheck`, so emit only) and copies the worker bootstrap beside it.
+// `npm run typecheck`, so emit only) and copies the worker bootstraps and the site build's
+// resolution hook (plain .mjs) beside it.
 // `--if-stale` skips the build when lib/ is newer than every source file (the test setup uses it).
 import { execFileSync } from 'node:child_process';
 import { copyFileSync, existsSync, readdirSync, statSync, writeFileSync } from 'node:fs';
@@ -28,5 +29,6 @@ if (!process.argv.includes('--if-stale') || stale()) {
   execFileSync(process.execPath, [tsc, '-p', path.join(root, 'tsconfig.cli.json'), '--noCheck'], { stdio: 'inherit' });
   copyFileSync(path.join(root, 'src/catalog/derive/deriveWorkerBootstrap.mjs'), path.join(root, 'lib/catalog/derive/deriveWorkerBootstrap.mjs'));
   copyFileSync(path.join(root, 'src/catalog/population/relationWorkerBootstrap.mjs'), path.join(root, 'lib/catalog/population/relationWorkerBootstrap.mjs'));
+  copyFileSync(path.join(root, 'src/catalog/cli/siteResolveHook.mjs'), path.join(root, 'lib/catalog/cli/siteResolveHook.mjs'));
   writeFileSync(stamp, new Date().toISOString() + '\n');
 }

@@ -1,8 +1,8 @@
 #!/usr/bin/env bash
 # Checks the package as a group receives it: packs the tool, installs the tarball in an empty
 # folder, and from there runs the CLI, derives the demo catalog, builds the site for it (with a
-# non-root site.base), serves it with `site preview`, and opens its main pages in headless
-# Chromium (scripts/check-site-pages.ts, playwright-core from this checkout's node_modules):
+# non-root site.base; again from a data folder without node_modules), serves it with
+# `site preview`, and opens its main pages in headless Chromium (scripts/check-site-pages.ts, playwright-core from this checkout's node_modules):
 # no console error, no failed request, nothing asked of another host.
 # Run by .ci/run after the tests. Usage: scripts/check-pack.sh
 set -euo pipefail
@@ -36,6 +36,17 @@ npx --no-install dawn-census site build -c census.config.yaml --out site
 test -f site/index.html
 grep -q 'href="/census/' site/index.html || { echo "pack: the built site ignores site.base" >&2; exit 1; }
 echo "pack: installed tarball derived the demo catalog and built its site under /census/"
+
+# A data folder with no node_modules above it, the tool run from where it is installed (as after a
+# global install or with npx): the site build must still find the site's dependencies.
+mkdir "$work/data" && cd "$work/data"
+cp "$work/group/catalog.csv" "$work/group/census.config.yaml" .
+tool="$work/group/node_modules/.bin/dawn-census"
+"$tool" derive -c census.config.yaml --draws 100 --quiet
+"$tool" site build -c census.config.yaml --out site > build.log 2>&1 || { cat build.log >&2; echo "pack: site build from a data folder without node_modules failed" >&2; exit 1; }
+test -f site/index.html
+echo "pack: the site builds from a data folder without node_modules of its own"
+cd "$work/group"
 
 # Serve the built site from the installed package and open its pages in Chromium.
 npx --no-install dawn-census site preview -c census.config.yaml --out site --port 0 > preview.log 2>&1 &

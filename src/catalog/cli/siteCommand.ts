@@ -1,6 +1,7 @@
 import { existsSync } from 'node:fs';
+import { register } from 'node:module';
 import path from 'node:path';
-import { fileURLToPath } from 'node:url';
+import { fileURLToPath, pathToFileURL } from 'node:url';
 import { loadConfig } from '../config/loadConfig.ts';
 import { ConfigError } from '../config/ConfigError.ts';
 import { defaultOutputPath } from '../derive/outputPaths.ts';
@@ -46,6 +47,20 @@ export function parseSiteArgs(argv: readonly string[]): SiteArgs {
 /** The package's own folder (where astro.config.mjs and the site sources are): three levels up from src/catalog/cli or lib/catalog/cli. */
 const PACKAGE_ROOT = fileURLToPath(new URL('../../../', import.meta.url));
 
+let resolveHookRegistered = false;
+
+/**
+ * Lets the prerendering step of the build find the site's dependencies when the output folder has
+ * no node_modules above it (see siteResolveHook.mjs). Registered once per process.
+ */
+function registerSiteResolveHook(): void {
+  if (resolveHookRegistered) return;
+  // module.register exists from Node 20.6; without it a data folder needs its own node_modules.
+  if (typeof register !== 'function') return;
+  register(new URL('./siteResolveHook.mjs', import.meta.url), { data: { packageRootUrl: pathToFileURL(PACKAGE_ROOT).href } });
+  resolveHookRegistered = true;
+}
+
 /** `site.base` normalised to start and end with '/'. */
 function normalBase(base: string): string {
   let b = base.trim() || '/';
@@ -71,6 +86,7 @@ export async function siteBuild(args: SiteArgs, log: TextOut): Promise<{ out: st
   const saved = { CENSUS_CATALOG: process.env.CENSUS_CATALOG, CENSUS_BASE: process.env.CENSUS_BASE, CENSUS_OUT_DIR: process.env.CENSUS_OUT_DIR };
   Object.assign(process.env, { CENSUS_CATALOG: catalog, CENSUS_BASE: base, CENSUS_OUT_DIR: out });
   try {
+    registerSiteResolveHook();
     const { build } = await import('astro');
     await build({ root: PACKAGE_ROOT, logLevel: 'warn' });
   } catch (e) {
