@@ -80,6 +80,23 @@ describe('object pages', () => {
       await expect(page.locator('tr[data-column="log_mbh"] td').nth(1).textContent()).resolves.toBe(Number(row!.log_mbh).toFixed(2));
       await waitForCharts(page);
       expect(await page.locator('[data-chart="mbh-z"] g[class*="census-highlighted"]').count()).toBeGreaterThan(0);
+
+      // A bound reads as on the page built at build time: "<" and the words, no interval.
+      const [limit] = await nodeQuery(inject('demoParquet'), `SELECT id, log_mbh FROM census WHERE log_mbh_is_limit ORDER BY id LIMIT 1`);
+      await page.goto(new URL(`object/?id=${encodeURIComponent(String(limit!.id))}`, inject('siteUrl')).href);
+      await page.waitForSelector('tr[data-column="log_mbh"]', { timeout: 30_000 });
+      const bound = page.locator('tr[data-column="log_mbh"]');
+      await expect(bound.locator('td').nth(1).textContent()).resolves.toBe(`< ${Number(limit!.log_mbh).toFixed(2)} (upper limit)`);
+      await expect(bound.locator('td').nth(2).textContent()).resolves.toBe('');
+      // On a phone the column name moves under the quantity's name, and the value keeps its room.
+      await page.setViewportSize({ width: 390, height: 844 });
+      await expect(bound.locator('td.col-name').isVisible()).resolves.toBe(false);
+      await expect(bound.locator('th .col-under').isVisible()).resolves.toBe(true);
+      const valueBox = (await bound.locator('td').nth(1).boundingBox())!;
+      const tableBox = (await bound.locator('xpath=ancestor::div[contains(@class,"table-wrap")]').boundingBox())!;
+      expect(valueBox.x + valueBox.width).toBeLessThanOrEqual(tableBox.x + tableBox.width + 0.5);
+      await page.setViewportSize({ width: 1280, height: 900 });
+
       await page.goto(new URL('object/?id=no-such-object', inject('siteUrl')).href);
       await page.waitForFunction(() => /is not in the catalog/.test(document.querySelector('[data-not-found]')?.textContent ?? ''), undefined, { timeout: 30_000 });
       expect(site.foreign()).toEqual([]);

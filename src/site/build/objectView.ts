@@ -28,6 +28,17 @@ export interface ViewLine {
   numeric: boolean;
 }
 
+/**
+ * The text of a line's value cell: the value with "<" or ">" before a bound, and the words that
+ * say which bound it is (shown muted after it). One function for the page built at build time and
+ * the in-browser viewer, so both say it the same way.
+ */
+export function valueText(l: ViewLine): { text: string; note: string | null } {
+  const text = l.limitMark ? `${l.limitMark} ${l.value}` : l.limit ? `< ${l.value}` : l.value;
+  const note = l.limit || l.limitMark === '<' ? 'upper limit' : l.limitMark === '>' ? 'lower limit' : null;
+  return { text, note };
+}
+
 export interface ObjectView {
   id: string;
   inputs: ViewLine[];

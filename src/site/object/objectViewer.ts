@@ -7,7 +7,7 @@ import { CensusDbError, queryCensus, TABLE } from '../db/duckdb.ts';
 import { rowObjects } from '../db/resultSet.ts';
 import { sqlString } from '../db/sqlIdent.ts';
 import { bindDbStatus } from '../db/statusView.ts';
-import { objectView, type ViewLine } from '../build/objectView.ts';
+import { objectView, valueText, type ViewLine } from '../build/objectView.ts';
 import type { CatalogRow } from '../build/loadCatalog.ts';
 import type { ColumnMeta } from '../build/siteMeta.ts';
 import { mountCatalogCharts } from '../population/mountCatalogCharts.ts';
@@ -25,9 +25,9 @@ function valueTable(lines: ViewLine[], spreadHeading: string): HTMLElement {
   const table = document.createElement('table');
   table.className = 'data values';
   const head = document.createElement('tr');
-  const heads: [string, boolean][] = [['Quantity', false], ['Column', false], ['Value', true], ...(spreadHeading ? [[spreadHeading, true] as [string, boolean]] : []), ['Unit', false]];
-  for (const [h, num] of heads) {
-    const th = text('th', h, num ? 'num' : undefined);
+  const heads: [string, string | undefined][] = [['Quantity', undefined], ['Column', 'col-name'], ['Value', 'num'], ...(spreadHeading ? [[spreadHeading, 'num'] as [string, string]] : []), ['Unit', undefined]];
+  for (const [h, cls] of heads) {
+    const th = text('th', h, cls);
     th.setAttribute('scope', 'col');
     head.append(th);
   }
@@ -39,9 +39,15 @@ function valueTable(lines: ViewLine[], spreadHeading: string): HTMLElement {
     const th = text('th', l.label);
     th.setAttribute('scope', 'row');
     th.title = l.description;
+    th.append(text('code', l.column, 'col-under'));
     const code = document.createElement('td');
+    code.className = 'col-name';
     code.append(text('code', l.column));
-    tr.append(th, code, text('td', l.limit ? `< ${l.value} (upper limit)` : l.value, l.numeric ? 'num' : undefined));
+    // The same words as the page built at build time (ValueTable.astro): "<" or ">" and which bound.
+    const { text: shown, note } = valueText(l);
+    const value = text('td', shown, l.numeric ? 'num' : undefined);
+    if (note) value.append(text('span', ` (${note})`, 'muted small'));
+    tr.append(th, code, value);
     if (spreadHeading) tr.append(text('td', l.spread, 'num'));
     tr.append(text('td', l.unit));
     body.append(tr);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { objectView } from '../../../src/site/build/objectView.ts';
+import { objectView, valueText, type ViewLine } from '../../../src/site/build/objectView.ts';
 
 describe('objectView of a bound', () => {
   const row = {
@@ -19,5 +19,22 @@ describe('objectView of a bound', () => {
     expect(line('log_edd_ratio').limitMark).toBe('>');
     expect(line('log_lbol').limitMark).toBeUndefined();
     expect(line('log_lbol').spread).toMatch(/–/);
+  });
+});
+
+describe('valueText', () => {
+  const line = (over: Partial<ViewLine>): ViewLine => ({ column: 'log_mbh', label: 'Black-hole mass', value: '6.28', spread: '', unit: 'dex(solMass)', description: '', numeric: true, ...over });
+
+  it('writes a measurement as it is, with no words after it', () => {
+    expect(valueText(line({ spread: '6.1 – 6.5' }))).toEqual({ text: '6.28', note: null });
+  });
+
+  it('marks an upper limit of an input or a derived bound with "<"', () => {
+    expect(valueText(line({ limit: true }))).toEqual({ text: '< 6.28', note: 'upper limit' });
+    expect(valueText(line({ limitMark: '<' }))).toEqual({ text: '< 6.28', note: 'upper limit' });
+  });
+
+  it('marks a lower limit with ">" and says so', () => {
+    expect(valueText(line({ column: 'log_edd_ratio', value: '-0.69', limitMark: '>' }))).toEqual({ text: '> -0.69', note: 'lower limit' });
   });
 });
