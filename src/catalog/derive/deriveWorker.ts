@@ -3,6 +3,7 @@ import type { DeriveSettings, ObjectInputs } from '../../core/derive/types.ts';
 import { deriveBatch } from './deriveBatch.ts';
 import type { BatchReadings, DeriveObjectFn } from './deriveBatch.ts';
 import type { PackedDerived } from './packedDerived.ts';
+import { detachOnce } from '../../shared/workers/detachOnce.ts';
 
 /** What the pool hands each worker at start-up (`workerData`). */
 export interface DeriveWorkerData {
@@ -41,17 +42,4 @@ export function serveDeriveWorker(port: MessagePort, data: DeriveWorkerData, der
     }
     else port.postMessage(answer);
   });
-}
-
-/**
- * Detaches one throwaway ArrayBuffer. V8 compiles typed-array code on the assumption that no
- * buffer was ever detached, and drops all of that code once one is: the first answer's transfer
- * used to throw away nearly every optimized function of the core in each worker, to be compiled
- * again (about a third of the worker's compiling, measured with --trace-deopt). Detaching before
- * any of it is compiled makes the first compilation the lasting one.
- */
-export function detachOnce(): ArrayBuffer {
-  const buffer = new ArrayBuffer(8);
-  structuredClone(buffer, { transfer: [buffer] });
-  return buffer;
 }

@@ -12,6 +12,7 @@ import { KeptDrawBanks } from './keptDrawBanks.ts';
 import { rederiveBatch } from './rederiveBatch.ts';
 import { packRederived } from './rederivedColumns.ts';
 import { workerSlice } from './workerSlice.ts';
+import { detachOnce } from '../../shared/workers/detachOnce.ts';
 
 export type RederiveRequest =
   | { type: 'load'; seq: number; url: string; warm: WarmUp; worker: number; workers: number; describe: boolean }
@@ -38,6 +39,8 @@ export interface LoadedPopulation {
 }
 
 const scope = self as unknown as Worker;
+// Before the warm-up compiles anything: the answers transfer their buffers (see detachOnce).
+detachOnce();
 let inputs: ObjectInputs[] = [];
 const banks = new KeptDrawBanks();
 /**

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { detachOnce } from '../../../src/catalog/derive/deriveWorker.ts';
+import { detachOnce } from '../../../src/shared/workers/detachOnce.ts';
 
 describe('detachOnce', () => {
   it('detaches a buffer by transferring it, as the first answer of a batch would', () => {

@@ -1,0 +1,19 @@
+/**
+ * Detaches one throwaway ArrayBuffer, for a worker (Node's worker_threads or a web worker) that
+ * answers by transferring buffers. V8 compiles typed-array code on the assumption that no buffer
+ * has ever been detached in the isolate, and throws all of that code away the first time one is:
+ * a worker's first transferred answer used to discard nearly every optimized function of the
+ * derivation, to be compiled again (measured with --trace-deopt on the derive workers; the live
+ * reading's workers lost their warm-up the same way). Called before any of that code is compiled,
+ * it makes the first compilation the lasting one.
+ * @returns the detached buffer (zero bytes long).
+ */
+export function detachOnce(): ArrayBuffer {
+  const buffer = new ArrayBuffer(8);
+  structuredClone(buffer, { transfer: [buffer] });
+  return buffer;
+}
+
+// structuredClone is a global of both Node and browsers; the pure modules' type check (no DOM, no
+// Node types) does not know it.
+declare function structuredClone<T>(value: T, options?: { transfer?: ArrayBuffer[] }): T;
