@@ -1,7 +1,7 @@
 #!/usr/bin/env node
 // Compiles the command (src/catalog, src/core) to lib/ with tsc (types are checked by
-// `npm run typecheck`, so emit only) and copies the worker bootstraps and the site build's
-// resolution hook (plain .mjs) beside it.
+// `npm run typecheck`, so emit only), copies the worker bootstraps and the site build's
+// resolution hook (plain .mjs) beside it, and bundles the derive worker with the core into one file.
 // `--if-stale` skips the build when lib/ is newer than every source file (the test setup uses it).
 import { execFileSync } from 'node:child_process';
 import { copyFileSync, existsSync, readdirSync, statSync, writeFileSync } from 'node:fs';
@@ -30,5 +30,16 @@ if (!process.argv.includes('--if-stale') || stale()) {
   copyFileSync(path.join(root, 'src/catalog/derive/deriveWorkerBootstrap.mjs'), path.join(root, 'lib/catalog/derive/deriveWorkerBootstrap.mjs'));
   copyFileSync(path.join(root, 'src/catalog/population/relationWorkerBootstrap.mjs'), path.join(root, 'lib/catalog/population/relationWorkerBootstrap.mjs'));
   copyFileSync(path.join(root, 'src/catalog/cli/siteResolveHook.mjs'), path.join(root, 'lib/catalog/cli/siteResolveHook.mjs'));
+  // The derive worker and the science core as one file (see src/catalog/derive/deriveWorkerEntry.ts).
+  const { buildSync } = createRequire(import.meta.url)('esbuild');
+  buildSync({
+    entryPoints: [path.join(root, 'lib/catalog/derive/deriveWorkerEntry.js')],
+    outfile: path.join(root, 'lib/catalog/derive/deriveWorker.bundle.js'),
+    bundle: true,
+    format: 'esm',
+    platform: 'node',
+    target: 'node20',
+    logLevel: 'warning',
+  });
   writeFileSync(stamp, new Date().toISOString() + '\n');
 }
