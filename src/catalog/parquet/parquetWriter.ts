@@ -4,7 +4,6 @@ import { duckdb } from '../duckdb/nodeApi.ts';
 import type { DuckDBAppender, DuckDBConnection, DuckDBType } from '@duckdb/node-api';
 import { sqlIdentifier, sqlString } from './sqlLiteral.ts';
 
-const { BIGINT, BOOLEAN, DOUBLE, DuckDBDataChunk, DuckDBInstance, VARCHAR } = duckdb;
 
 /** Storage kind of an output column (the readers' `ColumnInfo.kind`). */
 export type ValueKind = 'float' | 'int' | 'bool' | 'string';
@@ -95,6 +94,7 @@ export async function openParquetWriter(
     throw new Error(`${columns.length} columns is more than the ${MAX_PARQUET_COLUMNS} the Parquet writer accepts`);
   }
   await mkdir(options.scratchDir, { recursive: true });
+  const { DuckDBDataChunk, DuckDBInstance } = duckdb();
   const instance = await DuckDBInstance.create(path.join(options.scratchDir, 'rows.duckdb'), {
     threads: '1',
     preserve_insertion_order: 'true',
@@ -131,7 +131,8 @@ export async function openParquetWriter(
   }
   const app = appender;
   const con = connection;
-  const types = columns.map((c) => DUCK_TYPE[c.kind]);
+  const duckType = duckTypes();
+  const types = columns.map((c) => duckType[c.kind]);
   const convert = columns.map((c) => CONVERT[c.kind]);
   const chunk = DuckDBDataChunk.create(types, VECTOR_ROWS);
   let vectors = columns.map((_, i) => chunk.getColumnVector(i) as unknown as WritableVector);
@@ -243,7 +244,11 @@ interface WritableVector {
   flush(): void;
 }
 
-const DUCK_TYPE: Record<ValueKind, DuckDBType> = { float: DOUBLE, int: BIGINT, bool: BOOLEAN, string: VARCHAR };
+/** DuckDB's type of each storage kind. */
+function duckTypes(): Record<ValueKind, DuckDBType> {
+  const { BIGINT, BOOLEAN, DOUBLE, VARCHAR } = duckdb();
+  return { float: DOUBLE, int: BIGINT, bool: BOOLEAN, string: VARCHAR };
+}
 
 const CONVERT: Record<ValueKind, (v: CellValue) => number | bigint | boolean | string | null> = {
   float: (v) => {

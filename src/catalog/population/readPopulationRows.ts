@@ -3,7 +3,6 @@ import { LINES, type LineId } from '../../core/derive/types.ts';
 import { sqlIdentifier, sqlString } from '../parquet/sqlLiteral.ts';
 import { CatalogError } from '../readers/CatalogError.ts';
 
-const { DuckDBInstance } = duckdb;
 
 /** What the population step reads of one derived object. */
 export interface PopulationRow {
@@ -28,7 +27,7 @@ export interface PopulationRow {
 export async function readPopulationRows(
   parquetPath: string, fieldColumn: string | undefined, limitColumns: Partial<Record<LineId, string>>, limitScale: number,
 ): Promise<PopulationRow[]> {
-  const db = await DuckDBInstance.create(':memory:');
+  const db = await duckdb().DuckDBInstance.create(':memory:');
   const con = await db.connect();
   try {
     const src = `read_parquet(${sqlString(parquetPath)})`;

@@ -6,7 +6,6 @@ import { sqlIdentifier, sqlString } from '../parquet/sqlLiteral.ts';
 import { ecsvWriter, fitsWriter, votableWriter, type FormatWriter } from './exportWriters.ts';
 import type { TableDoc } from './tableDoc.ts';
 
-const { DuckDBInstance } = duckdb;
 
 /** File name ending of each extra format. */
 export const EXPORT_EXTENSION: Record<ExportFormat, string> = { ecsv: '.ecsv', votable: '.vot', fits: '.fits' };
@@ -23,7 +22,7 @@ export function exportPath(parquetPath: string, format: ExportFormat): string {
  */
 export async function exportCatalog(parquetPath: string, doc: TableDoc, targets: readonly { format: ExportFormat; path: string }[]): Promise<void> {
   if (targets.length === 0) return;
-  const db = await DuckDBInstance.create(':memory:', { memory_limit: '256MB', threads: '1' });
+  const db = await duckdb().DuckDBInstance.create(':memory:', { memory_limit: '256MB', threads: '1' });
   const con = await db.connect();
   const files: { w: FormatWriter; fh: Awaited<ReturnType<typeof open>> }[] = [];
   try {

@@ -8,7 +8,6 @@ import { ChunkBuilder, checkChunkRows } from './ChunkBuilder.ts';
 import { settleColumnNames } from './columnNames.ts';
 import { toPlain } from './ecsvHeader.ts';
 
-const { DuckDBInstance, DuckDBTypeId } = duckdb;
 
 /** DuckDB settings for reading one file: bounded memory on a shared 2-core machine. */
 const DUCKDB_OPTIONS = { memory_limit: '1GB', threads: '2' };
@@ -16,14 +15,24 @@ const DUCKDB_OPTIONS = { memory_limit: '1GB', threads: '2' };
 /** Decimal digits a double holds exactly: DECIMAL(p, s) with p up to this is read as a float. */
 const MAX_EXACT_DECIMAL_DIGITS = 15;
 
-const SMALL_INT = new Set([DuckDBTypeId.TINYINT, DuckDBTypeId.SMALLINT, DuckDBTypeId.INTEGER, DuckDBTypeId.UTINYINT, DuckDBTypeId.USMALLINT, DuckDBTypeId.UINTEGER]);
-const WIDE_INT = new Set([DuckDBTypeId.BIGINT, DuckDBTypeId.UBIGINT, DuckDBTypeId.HUGEINT, DuckDBTypeId.UHUGEINT]);
-const FLOAT = new Set([DuckDBTypeId.FLOAT, DuckDBTypeId.DOUBLE, DuckDBTypeId.DECIMAL]);
-const AS_TEXT = new Set([
-  DuckDBTypeId.VARCHAR, DuckDBTypeId.ENUM, DuckDBTypeId.UUID, DuckDBTypeId.DATE, DuckDBTypeId.TIME, DuckDBTypeId.TIME_NS,
-  DuckDBTypeId.TIME_TZ, DuckDBTypeId.TIMESTAMP, DuckDBTypeId.TIMESTAMP_S, DuckDBTypeId.TIMESTAMP_MS, DuckDBTypeId.TIMESTAMP_NS,
-  DuckDBTypeId.TIMESTAMP_TZ,
-]);
+/** DuckDB's type ids by how a column is read (built at the first file: DuckDB loads on first use). */
+interface TypeSets {
+  smallInt: Set<DuckDBTypeIdType>;
+  wideInt: Set<DuckDBTypeIdType>;
+  float: Set<DuckDBTypeIdType>;
+  asText: Set<DuckDBTypeIdType>;
+}
+let typeSets: TypeSets | null = null;
+function sets(): TypeSets {
+  const T = duckdb().DuckDBTypeId;
+  typeSets ??= {
+    smallInt: new Set([T.TINYINT, T.SMALLINT, T.INTEGER, T.UTINYINT, T.USMALLINT, T.UINTEGER]),
+    wideInt: new Set([T.BIGINT, T.UBIGINT, T.HUGEINT, T.UHUGEINT]),
+    float: new Set([T.FLOAT, T.DOUBLE, T.DECIMAL]),
+    asText: new Set([T.VARCHAR, T.ENUM, T.UUID, T.DATE, T.TIME, T.TIME_NS, T.TIME_TZ, T.TIMESTAMP, T.TIMESTAMP_S, T.TIMESTAMP_MS, T.TIMESTAMP_NS, T.TIMESTAMP_TZ]),
+  };
+  return typeSets;
+}
 
 /**
  * Opens a Parquet file through DuckDB (`@duckdb/node-api`), streaming DuckDB's result chunks.
@@ -44,6 +53,8 @@ const AS_TEXT = new Set([
  */
 export async function openParquet(path: string): Promise<TableSource> {
   await checkMagic(path);
+  const { DuckDBInstance, DuckDBTypeId } = duckdb();
+  const { smallInt: SMALL_INT, wideInt: WIDE_INT, float: FLOAT, asText: AS_TEXT } = sets();
   const inst = await DuckDBInstance.create(':memory:', DUCKDB_OPTIONS);
   try {
     const con = await inst.connect();
@@ -135,6 +146,7 @@ function parquetSource(path: string, inst: DuckDBInstanceType, columns: ColumnIn
 
 /** Casts in SQL so DuckDB hands back plain JS numbers, booleans and strings. */
 function selectExpr(name: string, kind: ColumnKind, id: DuckDBTypeIdType): string {
+  const { DuckDBTypeId } = duckdb();
   const c = ident(name);
   if (kind === 'string' && id !== DuckDBTypeId.VARCHAR) return `CAST(${c} AS VARCHAR)`;
   if (kind === 'int' || id === DuckDBTypeId.DECIMAL) return `CAST(${c} AS DOUBLE)`;

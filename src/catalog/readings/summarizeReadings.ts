@@ -2,7 +2,6 @@ import { duckdb } from '../duckdb/nodeApi.ts';
 import { readingSummarySql, summaryFromRow, type ReadingSummary } from '../../core/readings/readingSummary.ts';
 import { sqlString } from '../parquet/sqlLiteral.ts';
 
-const { DuckDBInstance } = duckdb;
 
 /**
  * The per-reading summary of a readings Parquet file, computed by the shared SQL
@@ -12,7 +11,7 @@ const { DuckDBInstance } = duckdb;
  * @param order - reading ids in display order.
  */
 export async function summarizeReadings(parquetPath: string, order: readonly string[]): Promise<ReadingSummary[]> {
-  const instance = await DuckDBInstance.create(':memory:', { threads: '1' });
+  const instance = await duckdb().DuckDBInstance.create(':memory:', { threads: '1' });
   try {
     const con = await instance.connect();
     try {
