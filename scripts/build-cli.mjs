@@ -1,7 +1,8 @@
 #!/usr/bin/env node
 // Compiles the command (src/catalog, src/core) to lib/ with tsc (types are checked by
 // `npm run typecheck`, so emit only), copies the worker bootstraps and the site build's
-// resolution hook (plain .mjs) beside it, and bundles the derive worker with the core into one file.
+// resolution hook (plain .mjs) beside it, and bundles the derive worker (with the core) and the
+// derive command each into one file.
 // `--if-stale` skips the build when lib/ is newer than every source file (the test setup uses it).
 import { execFileSync } from 'node:child_process';
 import { copyFileSync, existsSync, readdirSync, statSync, writeFileSync } from 'node:fs';
@@ -30,15 +31,43 @@ if (!process.argv.includes('--if-stale') || stale()) {
   copyFileSync(path.join(root, 'src/catalog/derive/deriveWorkerBootstrap.mjs'), path.join(root, 'lib/catalog/derive/deriveWorkerBootstrap.mjs'));
   copyFileSync(path.join(root, 'src/catalog/population/relationWorkerBootstrap.mjs'), path.join(root, 'lib/catalog/population/relationWorkerBootstrap.mjs'));
   copyFileSync(path.join(root, 'src/catalog/cli/siteResolveHook.mjs'), path.join(root, 'lib/catalog/cli/siteResolveHook.mjs'));
+  const { build } = createRequire(import.meta.url)('esbuild');
   // The derive worker and the science core as one file (see src/catalog/derive/deriveWorkerEntry.ts).
-  const { buildSync } = createRequire(import.meta.url)('esbuild');
-  buildSync({
+  await build({
     entryPoints: [path.join(root, 'lib/catalog/derive/deriveWorkerEntry.js')],
     outfile: path.join(root, 'lib/catalog/derive/deriveWorker.bundle.js'),
     bundle: true,
     format: 'esm',
     platform: 'node',
     target: 'node20',
+    logLevel: 'warning',
+  });
+  // The derive command and everything of ours it imports as one file, which main loads instead of
+  // the modules one by one. Packages stay imports. The error classes main tells apart with
+  // instanceof stay imports of their own modules, shared with main (a bundled copy would be
+  // another class).
+  const cliDir = path.join(root, 'lib/catalog/cli');
+  const sharedClasses = /[\\/]catalog[\\/](config[\\/]ConfigError|readers[\\/]CatalogError|cli[\\/]UsageError|outputs[\\/]OutputRefused)\.js$/;
+  const keepSharedClasses = {
+    name: 'keep-shared-classes',
+    setup(b) {
+      b.onResolve({ filter: /(ConfigError|CatalogError|UsageError|OutputRefused)\.js$/ }, (args) => {
+        const file = path.resolve(args.resolveDir, args.path);
+        if (!sharedClasses.test(file)) return undefined;
+        const rel = path.relative(cliDir, file).split(path.sep).join('/');
+        return { path: rel.startsWith('.') ? rel : `./${rel}`, external: true };
+      });
+    },
+  };
+  await build({
+    entryPoints: [path.join(cliDir, 'deriveCommand.js')],
+    outfile: path.join(cliDir, 'deriveCommand.bundle.js'),
+    bundle: true,
+    format: 'esm',
+    platform: 'node',
+    target: 'node20',
+    packages: 'external',
+    plugins: [keepSharedClasses],
     logLevel: 'warning',
   });
   writeFileSync(stamp, new Date().toISOString() + '\n');

@@ -1,3 +1,4 @@
+import { existsSync } from 'node:fs';
 import { ConfigError } from '../config/ConfigError.ts';
 import { toolVersion } from '../metadata/toolVersion.ts';
 import { CatalogError } from '../readers/CatalogError.ts';
@@ -62,7 +63,10 @@ export async function main(argv: readonly string[], io: CliIo = processIo(), opt
     process.once('SIGTERM', onSigterm);
     try {
       // Loaded here, not at start-up: it pulls in DuckDB's native module, which --help does not need.
-      const { deriveCommand } = await import('./deriveCommand.ts');
+      // Compiled, it is one bundled file (scripts/build-cli.mjs), about 0.25 s faster to load than
+      // its modules one by one.
+      const bundle = new URL('./deriveCommand.bundle.js', import.meta.url);
+      const { deriveCommand } = existsSync(bundle) ? ((await import(bundle.href)) as typeof import('./deriveCommand.ts')) : await import('./deriveCommand.ts');
       await deriveCommand(args, io.stderr, { ...options, signal: interrupt.signal });
     } finally {
       process.off('SIGINT', onSigint);

@@ -6,7 +6,8 @@ import type { BatchReadings } from './deriveBatch.ts';
 import type { DeriveResultMessage, DeriveTaskMessage, DeriveWorkerData } from './deriveWorker.ts';
 import type { PackedDerived } from './packedDerived.ts';
 
-const BOOTSTRAP = new URL('./deriveWorkerBootstrap.mjs', import.meta.url);
+// '../derive/': the same file from lib/catalog/derive/ and from the bundled derive command in lib/catalog/cli/.
+const BOOTSTRAP = new URL('../derive/deriveWorkerBootstrap.mjs', import.meta.url);
 
 interface Task {
   message: DeriveTaskMessage;
