@@ -2,8 +2,9 @@
 # Checks the package as a group receives it: packs the tool, installs the tarball in an empty
 # folder, and from there runs the CLI, derives the demo catalog, builds the site for it (with a
 # non-root site.base; again from a data folder without node_modules), serves it with
-# `site preview`, and opens its main pages in headless Chromium (scripts/check-site-pages.ts, playwright-core from this checkout's node_modules):
-# no console error, no failed request, nothing asked of another host.
+# `site preview`, and opens its main pages in headless Chromium (scripts/check-site-pages.ts,
+# playwright-core from this checkout's node_modules): no console error, no failed request, nothing
+# asked of another host.
 # Run by .ci/run after the tests. Usage: scripts/check-pack.sh
 set -euo pipefail
 root="$(cd "$(dirname "$0")/.." && pwd)"
