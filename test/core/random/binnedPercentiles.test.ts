@@ -106,6 +106,18 @@ describe('binnedPercentiles', () => {
     expect(got).toEqual(bySort(v));
   });
 
+  it('reads the bin of no value past the sample\'s end, where a longer sample left one', () => {
+    // Source of truth: the full sort. The bin of each value is kept in an array grown to the longest
+    // sample seen; the first call leaves at place 100 the bin of 15, which the second (0..99, one
+    // value per bin, the same range) needs for its 16th percentile. Reading place 100 would gather a
+    // value that is not in the sample into that bin.
+    const longer = Float64Array.from({ length: 104 }, (_, i) => (i < 100 ? i : 15));
+    expect(binnedPercentiles(longer)).toEqual(bySort(longer));
+    const v = Float64Array.from({ length: 100 }, (_, i) => i);
+    expect(binnedPercentiles(v)).toEqual(bySort(v));
+    expect(bySort(v)).toEqual({ p16: 15.84, p50: 49.5, p84: 83.16 }); // (n − 1)p = 15.84, 49.5, 83.16 on 0..99
+  });
+
   it('orders −0 before +0 as a full sort does, so an order statistic among zeros keeps its sign', () => {
     // 30 × −1, then 20 × +0 and 20 × −0 (in that order), then 31 × +1: sorted, index 50 is the first +0.
     const v = Float64Array.from([...Array(30).fill(-1), ...Array(20).fill(0), ...Array(20).fill(-0), ...Array(31).fill(1)]);
