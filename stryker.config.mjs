@@ -17,7 +17,7 @@ export default {
   htmlReporter: { fileName: 'reports/mutation/index.html' },
   jsonReporter: { fileName: 'reports/mutation/mutation.json' },
   tempDirName: '.stryker-tmp',
-  ignorePatterns: ['.stryker-tmp-*', '.scratch', 'data-demo/out', 'public/data', 'dist', '.astro', 'test/e2e', 'test/fixtures', 'reports'],
+  ignorePatterns: ['.stryker-tmp-*', '.venv*', '.scratch', 'data-demo/out', 'public/data', 'dist', '.astro', 'test/e2e', 'test/fixtures', 'reports'],
   cleanTempDir: true,
   thresholds: { high: 90, low: 85, break: null },
   timeoutMS: 20_000,

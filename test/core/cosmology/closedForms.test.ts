@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { expectClose } from '../../helpers/expectClose.ts';
-import { createCosmology, getCosmology, TABLE_Z_MAX } from '../../../src/core/cosmology/index.ts';
+import { createCosmology, getCosmology, TABLE_DU, TABLE_Z_MAX } from '../../../src/core/cosmology/index.ts';
+import { expm1, log1p } from '../../../src/core/math/index.ts';
 
 // Closed forms (Hogg 1999, astro-ph/9905116, for the distance definitions; standard results for
 // the ages). The brief asks for 1e-5 relative; the tables reach ~1e-11, so rtol 1e-9 is used
@@ -16,6 +17,19 @@ describe('cosmology against closed forms', () => {
       expectClose(eds.comovingDistanceMpc(z), 2 * eds.hubbleDistanceMpc * (1 - 1 / Math.sqrt(1 + z)), { rtol: RTOL, source: src });
       expectClose(eds.ageGyr(z), (2 / 3) * eds.hubbleTimeGyr * (1 + z) ** -1.5, { rtol: RTOL, source: src });
     }
+  });
+
+  it('reproduces Einstein–de Sitter distance and age exactly at the tables\' last node', () => {
+    // The grid is u = ln(1+z) in steps of TABLE_DU up to the first node at or above ln(1 + TABLE_Z_MAX);
+    // a z whose u falls on that last node is read from the last interval's end.
+    const uLast = Math.ceil(log1p(TABLE_Z_MAX) / TABLE_DU) * TABLE_DU;
+    let z = expm1(uLast);
+    for (let k = 0; k < 8 && log1p(z) !== uLast; k++) z = log1p(z) < uLast ? z * (1 + 2 ** -52) : z * (1 - 2 ** -53);
+    expect(log1p(z)).toBe(uLast);
+    const eds = createCosmology({ name: 'EdS', H0: 70, Om0: 1, Tcmb0: 0, Neff: 0, reference: 'test model' });
+    const src = `Einstein–de Sitter closed form at z = ${z}: D_C = 2 D_H (1 − (1+z)^-1/2), t = (2/3) t_H (1+z)^-3/2`;
+    expectClose(eds.comovingDistanceMpc(z), 2 * eds.hubbleDistanceMpc * (1 - 1 / Math.sqrt(1 + z)), { rtol: RTOL, source: src });
+    expectClose(eds.ageGyr(z), (2 / 3) * eds.hubbleTimeGyr * (1 + z) ** -1.5, { rtol: RTOL, source: src });
   });
 
   it('reproduces the flat ΛCDM age without radiation (asinh form)', () => {

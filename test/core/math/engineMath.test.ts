@@ -119,6 +119,7 @@ describe('engine-independent math', () => {
 
 describe('log10InPlace', () => {
   it('gives log10 bit for bit over every magnitude, near powers of two, and for the special values', () => {
+    // Source of truth: log10 (fdlibm 5.3's e_log10.c, checked against correctly rounded values in correctlyRounded.test.ts).
     const rng = createRng(99);
     const xs: number[] = [];
     // Random significands at every binary exponent of the normal range, and just around each power of two.
@@ -128,6 +129,14 @@ describe('log10InPlace', () => {
     }
     // sqrt(2) region (the reduction's switch), and the range of Monte Carlo fluxes and widths.
     for (let k = 0; k < 2000; k++) xs.push(Math.SQRT2 * (1 + (rng.next() - 0.5) * 1e-6), 1e-18 * (1 + 3 * rng.next()), 500 + 8000 * rng.next());
+    // Within 2^-20 of 1, where log10 takes e_log.c's short formula for |f| < 2^-20 and the general
+    // one differs in the last bit: three such arguments (found by comparing the two over 600,000
+    // points of the bands next to powers of two from 2^-30 to 2^30; all were next to 1) and more of the band.
+    xs.push(1.000000806335071, 0.9999992406778155, 1.0000008825290407);
+    for (let k = 0; k < 2000; k++) xs.push(1 + rng.next() * 2 ** -20, 1 - rng.next() * 2 ** -21);
+    // Subnormals whose significand reaches the high word (the path that scales them up first), and negatives.
+    for (let k = 0; k < 200; k++) xs.push(2 ** -1030 * (1 + rng.next()), 2 ** -1041 * (1 + rng.next()));
+    xs.push(1e-310, 2.5e-309, -5.5, -1e-310, -1e300);
     xs.push(1, 10, 1e22, 5e-324, 2 ** -1060, 0, -0, -1, Infinity, -Infinity, NaN, Number.MAX_VALUE, Number.MIN_VALUE);
     const arr = Float64Array.from(xs);
     log10InPlace(arr);

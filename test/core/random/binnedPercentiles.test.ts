@@ -2,13 +2,20 @@ import { describe, expect, it } from 'vitest';
 import { binnedPercentiles } from '../../../src/core/random/binnedPercentiles.ts';
 import { createRng, standardNormal } from '../../../src/core/random/index.ts';
 
-/** numpy's default 'linear' quantile from a full sort (the definition the fast path must reproduce exactly). */
+/**
+ * numpy's default 'linear' quantile from a full sort (the definition the fast path must reproduce exactly),
+ * rounded as numpy 1.24's `_lerp` (function_base.py) rounds it: a + (b − a)t below t = 0.5, b − (b − a)(1 − t)
+ * from 0.5 up. (With a + (b − a)t throughout, the exact comparisons held only for the samples these seeds give.)
+ */
 function sortedQuantile(values: Float64Array, p: number): number {
   const s = Float64Array.from(values).sort();
   const h = (s.length - 1) * p;
   const k = Math.floor(h);
   const t = h - k;
-  return t === 0 ? s[k]! : s[k]! + (s[Math.min(k + 1, s.length - 1)]! - s[k]!) * t;
+  if (t === 0) return s[k]!;
+  const a = s[k]!;
+  const b = s[Math.min(k + 1, s.length - 1)]!;
+  return t >= 0.5 ? b - (b - a) * (1 - t) : a + (b - a) * t;
 }
 const bySort = (v: Float64Array) => ({ p16: sortedQuantile(v, 0.16), p50: sortedQuantile(v, 0.5), p84: sortedQuantile(v, 0.84) });
 
@@ -71,6 +78,44 @@ describe('binnedPercentiles', () => {
       w[n - 2] = 6;
       expect(binnedPercentiles(w), `extremes last, n = ${n}`).toEqual(bySort(w));
     }
+  });
+
+  it('counts the largest value in the last bin when it is tied and needed, at any place of a step of four', () => {
+    // Source of truth: the full sort (numpy's linear rule, bySort). The range is [0, 8], so the maximum
+    // lands exactly on the bins' end ((8 − 0) · 512/8 = 512) and must be counted in the last bin. It takes
+    // the 25 places of one residue mod 4 among the first 100 (the four-at-a-time pass): a quarter of the
+    // sample, so the 84th percentile is the maximum.
+    const own = createRng(78); // its own stream: the other tests' samples stay as they were
+    for (let j = 0; j < 4; j++) {
+      // A normal sample first, so that what the previous case left in the working arrays cannot stand in for the answer.
+      binnedPercentiles(Float64Array.from({ length: 2000 }, () => standardNormal(own)));
+      const v = Float64Array.from({ length: 101 }, (_, i) => (i < 100 && i % 4 === j ? 8 : (i * 7919) % 101 / 16));
+      expect(Math.max(...v)).toBe(8);
+      expect(binnedPercentiles(v), `maximum at places ${j} mod 4`).toEqual(bySort(v));
+      expect(bySort(v).p84).toBe(8);
+    }
+  });
+
+  it('answers when a needed bin holds exactly as many values as it may (512), the bin at the top of the range', () => {
+    // Source of truth: the full sort. 88 values in [0, 500) and 512 in [998.1, 1000], all inside the last
+    // of the 512 bins of [0, 1000] (width 1000/512 ≈ 1.95): the median and 84th percentile lie there.
+    const v = Float64Array.from({ length: 600 }, (_, i) => (i < 88 ? i * 5.5 : 998.1 + ((i - 88) * 1.9) / 511));
+    expect(v[599]).toBe(1000);
+    const got = binnedPercentiles(v);
+    expect(got).not.toBeNull();
+    expect(got).toEqual(bySort(v));
+  });
+
+  it('reads the bin of no value past the sample\'s end, where a longer sample left one', () => {
+    // Source of truth: the full sort. The bin of each value is kept in an array grown to the longest
+    // sample seen; the first call leaves at place 100 the bin of 15, which the second (0..99, one
+    // value per bin, the same range) needs for its 16th percentile. Reading place 100 would gather a
+    // value that is not in the sample into that bin.
+    const longer = Float64Array.from({ length: 104 }, (_, i) => (i < 100 ? i : 15));
+    expect(binnedPercentiles(longer)).toEqual(bySort(longer));
+    const v = Float64Array.from({ length: 100 }, (_, i) => i);
+    expect(binnedPercentiles(v)).toEqual(bySort(v));
+    expect(bySort(v)).toEqual({ p16: 15.84, p50: 49.5, p84: 83.16 }); // (n − 1)p = 15.84, 49.5, 83.16 on 0..99
   });
 
   it('orders −0 before +0 as a full sort does, so an order statistic among zeros keeps its sign', () => {

@@ -138,6 +138,24 @@ describe('the draw bank', () => {
       expect(calls).toEqual([1]);
     });
 
+    it('keeps nothing from a fill that throws part-way over a kept key\'s array, on the first object too', () => {
+      // The first object of a new bank is generation 1: a half-made entry must not pass for current there.
+      // Source of truth: the fill's own definition, key v gives v + z[k] (z the role's deviates).
+      const b = new ReusableDrawBank().reset(createRng(38), 8);
+      const calls: number[] = [];
+      for (const v of [1, 2, 3, 4]) b.derived('width_halpha', key(v), fillFrom(b, calls, v));
+      // A fifth key takes the place of key 1 (the memory holds four), writes over its array and throws.
+      const broken = (out: Float64Array) => {
+        out.fill(NaN);
+        throw new Error('bad');
+      };
+      expect(() => b.derived('width_halpha', key(5), broken)).toThrow('bad');
+      const one = b.derived('width_halpha', key(1), fillFrom(b, calls, 1));
+      expect(calls).toEqual([1, 2, 3, 4, 1]);
+      const z = b.normals('width_halpha');
+      for (let k = 0; k < one.length; k++) expect(one[k]).toBe(1 + (z[k] as number));
+    });
+
     it('moves to a new generation with every object', () => {
       const b = new ReusableDrawBank().reset(createRng(37), 8);
       const g = b.generation;

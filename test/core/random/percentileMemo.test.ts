@@ -41,11 +41,14 @@ describe('PercentileMemo', () => {
     // The comparison goes four values at a time; a difference in any one of the four, or after them, must count.
     for (const n of [1000, 1001, 1003]) {
       const a = Float64Array.from({ length: n }, (_, i) => i + 1); // no zero: the four-at-a-time comparison runs
-      for (const at of [4, 5, 6, 7, n - 1]) {
+      // 0 to 3: the first step of four (a step that misses a difference goes on to the next); 4 to 7: a later one.
+      for (const at of [0, 1, 2, 3, 4, 5, 6, 7, n - 1]) {
         const memo = new PercentileMemo();
         memo.percentiles(a);
         const b = Float64Array.from(a);
-        b[at] = -1; // one value moved below all others: every order statistic moves
+        // One value moved past all others, so every order statistic moves: the first (the smallest)
+        // to the top, any other below the bottom.
+        b[at] = at === 0 ? 2 * n : -1;
         expect(memo.percentiles(b), `n = ${n}, value ${at}`).toEqual(plain(b));
         // NaN and a zero's sign there too.
         const c = Float64Array.from(a);
@@ -67,6 +70,51 @@ describe('PercentileMemo', () => {
     minus[102] = -0;
     expect(Object.is(memo.percentiles(plus).p50, 0)).toBe(true);
     expect(Object.is(memo.percentiles(minus).p50, -0)).toBe(true);
+  });
+
+  it('tells apart samples whose zeros differ in sign at any place of a step of four, where the zero decides the median', () => {
+    // Source of truth: the median of 50 × −1, one zero and 50 × +1 is that zero, with its sign
+    // (numpy's linear rule, (n − 1)/2 = 50 exactly: no interpolation), and so are the plain percentiles.
+    // The zero goes to places 0 to 7, inside the four-at-a-time comparison (101 values: the first 100).
+    for (let at = 0; at < 8; at++) {
+      const plus = Float64Array.from({ length: 101 }, (_, i) => (i === at ? 0 : i < 51 ? -1 : 1));
+      const minus = Float64Array.from(plus);
+      minus[at] = -0;
+      const memo = new PercentileMemo();
+      expect(Object.is(memo.percentiles(plus).p50, 0), `+0 at ${at}`).toBe(true);
+      expect(Object.is(memo.percentiles(minus).p50, -0), `−0 at ${at} after +0`).toBe(true);
+      expect(Object.is(memo.percentiles(plus).p50, 0), `+0 at ${at} after −0`).toBe(true);
+      expect(Object.is(plain(minus).p50, -0)).toBe(true);
+    }
+  });
+
+  it('tells apart a sample from a longer one that begins with it, both ways', () => {
+    // Source of truth: the plain percentiles of each sample (numpy's linear rule, percentiles16_50_84).
+    const short = Float64Array.from({ length: 100 }, (_, i) => i + 1);
+    const long = Float64Array.from({ length: 200 }, (_, i) => i + 1); // its first 100 values are `short`
+    const memo = new PercentileMemo();
+    memo.percentiles(short);
+    expect(memo.percentiles(long)).toEqual(plain(long));
+    expect(memo.percentiles(long).p50).toBe(100.5); // (1 + 200) / 2, the median of 1..200
+    const memo2 = new PercentileMemo();
+    memo2.percentiles(long);
+    expect(memo2.percentiles(short)).toEqual(plain(short));
+    expect(memo2.percentiles(short).p50).toBe(50.5); // (1 + 100) / 2, the median of 1..100
+  });
+
+  it('stays exact when a kept place is reused by a sample of another length', () => {
+    // Four samples of 300 fill the memo; the fifth (shorter, and below binnedPercentiles' 64 values,
+    // so computed by selection on the kept copy) and sixth (longer) take the oldest places.
+    // Source of truth: the plain percentiles of each sample.
+    const own = createRng(405); // its own stream (see DEVELOPERS.md, Mutation testing)
+    const draw = (n: number, mean: number) => Float64Array.from({ length: n }, () => mean + 0.4 * standardNormal(own));
+    const memo = new PercentileMemo();
+    for (let t = 0; t < 4; t++) memo.percentiles(draw(300, 8 + t));
+    const short = draw(50, 20);
+    const long = draw(500, -5);
+    expect(memo.percentiles(short)).toEqual(plain(short));
+    expect(memo.percentiles(long)).toEqual(plain(long));
+    expect(memo.percentiles(Float64Array.from(short))).toEqual(plain(short));
   });
 
   it('tells apart samples that differ only in the sign of a zero', () => {
