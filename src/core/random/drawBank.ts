@@ -135,14 +135,20 @@ export class ReusableDrawBank implements DrawBank {
   derived(role: string, key: DerivedKey, fill: (out: Float64Array) => void): Float64Array {
     const s = this.slot(role);
     const g = this.gen;
-    let stale: DerivedEntry | null = null;
-    for (const e of s.derived) {
-      if (e.at !== g) stale ??= e;
-      else if (e.value === key.value && e.errLo === key.errLo && e.errHi === key.errHi && e.kind === key.kind) return e.out;
+    let stale = -1;
+    for (let i = 0; i < s.derived.length; i++) {
+      const e = s.derived[i] as DerivedEntry;
+      if (e.at !== g) {
+        if (stale < 0) stale = i;
+      } else if (e.value === key.value && e.errLo === key.errLo && e.errHi === key.errHi && e.kind === key.kind) return e.out;
     }
     let e: DerivedEntry;
-    if (stale) e = stale;
-    else if (s.derived.length < DERIVED_PER_ROLE) {
+    if (stale >= 0) {
+      // An earlier object's entry, refilled in index order: the next to give way is the one after
+      // it, so that once all are this object's, the oldest goes first.
+      e = s.derived[stale] as DerivedEntry;
+      s.nextDerived = (stale + 1) % DERIVED_PER_ROLE;
+    } else if (s.derived.length < DERIVED_PER_ROLE) {
       e = { value: 0, errLo: 0, errHi: 0, kind: 0, at: -1, out: new Float64Array(this.draws) };
       s.derived.push(e);
     } else {

@@ -164,3 +164,29 @@ describe('the draw bank', () => {
     });
   });
 });
+
+describe('DrawBank.derived after a reset', () => {
+  it('lets the oldest of this object\'s arrays go first, as the contract says ("valid until four other keys")', () => {
+    const bank = new ReusableDrawBank();
+    const key = (value: number) => ({ value, errLo: 0.1, errHi: 0.1, kind: 1 });
+    let fills = 0;
+    const fill = (out: Float64Array): void => {
+      fills++;
+      out.fill(fills);
+    };
+    // The first object asks for five keys: the fifth takes the first one's place.
+    bank.reset(createRng(1), 8);
+    for (const v of [1, 2, 3, 4, 5]) bank.derived('width_halpha', key(v), fill);
+    // The second object refills the earlier object's entries with k1…k4, then asks for k5.
+    bank.reset(createRng(2), 8);
+    for (const v of [1, 2, 3, 4]) bank.derived('width_halpha', key(v), fill);
+    bank.derived('width_halpha', key(5), fill);
+    const before = fills;
+    // k2…k5 are still kept: asking again fills nothing.
+    for (const v of [2, 3, 4, 5]) bank.derived('width_halpha', key(v), fill);
+    expect(fills).toBe(before);
+    // k1, the oldest of this object's, gave way to k5.
+    bank.derived('width_halpha', key(1), fill);
+    expect(fills).toBe(before + 1);
+  });
+});
