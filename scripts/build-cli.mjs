@@ -32,15 +32,12 @@ if (!process.argv.includes('--if-stale') || stale()) {
   copyFileSync(path.join(root, 'src/catalog/population/relationWorkerBootstrap.mjs'), path.join(root, 'lib/catalog/population/relationWorkerBootstrap.mjs'));
   copyFileSync(path.join(root, 'src/catalog/cli/siteResolveHook.mjs'), path.join(root, 'lib/catalog/cli/siteResolveHook.mjs'));
   const { build } = createRequire(import.meta.url)('esbuild');
+  const bundled = { bundle: true, format: 'esm', platform: 'node', target: 'node20', logLevel: 'warning' };
   // The derive worker and the science core as one file (see src/catalog/derive/deriveWorkerEntry.ts).
   await build({
+    ...bundled,
     entryPoints: [path.join(root, 'lib/catalog/derive/deriveWorkerEntry.js')],
     outfile: path.join(root, 'lib/catalog/derive/deriveWorker.bundle.js'),
-    bundle: true,
-    format: 'esm',
-    platform: 'node',
-    target: 'node20',
-    logLevel: 'warning',
   });
   // The derive command and everything of ours it imports as one file, which main loads instead of
   // the modules one by one. Packages stay imports. The error classes main tells apart with
@@ -60,15 +57,11 @@ if (!process.argv.includes('--if-stale') || stale()) {
     },
   };
   await build({
+    ...bundled,
     entryPoints: [path.join(cliDir, 'deriveCommand.js')],
     outfile: path.join(cliDir, 'deriveCommand.bundle.js'),
-    bundle: true,
-    format: 'esm',
-    platform: 'node',
-    target: 'node20',
     packages: 'external',
     plugins: [keepSharedClasses],
-    logLevel: 'warning',
   });
   writeFileSync(stamp, new Date().toISOString() + '\n');
 }
