@@ -1,13 +1,14 @@
 /**
- * Detaches one throwaway ArrayBuffer, for a worker (Node's worker_threads or a web worker) that
- * answers by transferring buffers. V8 compiles typed-array code on the assumption that no buffer
- * has ever been detached in the isolate, and throws all of that code away the first time one is:
- * a derive worker's first transferred answer used to discard nearly every optimized function of
- * the derivation, to be compiled again (seen with --trace-deopt; 10–11 % of the CPU of a 20,000-
- * object run). Called before any of that code is compiled, it makes the first compilation the
- * lasting one. The live reading's web workers call it too, as they answer the same way after a
- * warm-up; in Chromium 156 their submits measured the same with and without it (its V8 may no
- * longer discard code on a detach), so there it is a safeguard only.
+ * Detaches one throwaway ArrayBuffer, for a worker that answers by transferring buffers. V8
+ * compiles typed-array code on the assumption that no buffer has ever been detached in the
+ * isolate, and throws all of that code away the first time one is: the derive workers' first
+ * transferred answer used to discard nearly every optimized function of the derivation, to be
+ * compiled again (seen with --trace-deopt; 10–11 % of the CPU of a 20,000-object run). Called
+ * before any of that code is compiled, it makes the first compilation the lasting one. The derive
+ * workers now copy their answers instead, which is cheaper still (see deriveWorker.ts). The live
+ * reading's web workers call it, as they answer by transfer after a warm-up; in Chromium 156
+ * their submits measured the same with and without it (its V8 may no longer discard code on a
+ * detach), so there it is a safeguard only.
  * @returns the detached buffer (zero bytes long).
  */
 export function detachOnce(): ArrayBuffer {

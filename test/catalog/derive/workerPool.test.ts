@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { createInProcessDeriver } from '../../../src/catalog/derive/inProcessDeriver.ts';
-import { createWorkerPool } from '../../../src/catalog/derive/workerPool.ts';
+import { Worker } from 'node:worker_threads';
+import { WORKER_SEMI_SPACE_MB, createWorkerPool } from '../../../src/catalog/derive/workerPool.ts';
 import { BROKEN, MISBEHAVING, STAND_IN, someInputs, testSettings } from './fixtures.ts';
 
 describe('the derive worker pool', () => {
@@ -39,6 +40,25 @@ describe('the derive worker pool', () => {
     inputs[1] = { ...inputs[1]!, id: 'THROW' };
     const got = await local.derive(inputs);
     expect(got.errors).toEqual([null, 'stand-in refuses this object', null]);
+  });
+
+  it('starts its workers with a young generation of WORKER_SEMI_SPACE_MB, not V8\'s 1 MB that grows by scavenging', async () => {
+    const pool = createWorkerPool(1, testSettings(), STAND_IN);
+    try {
+      // Any isolate made after the pool: V8 reads the size when it makes one.
+      const probe = new Worker(
+        "const { parentPort } = require('node:worker_threads'); const v8 = require('node:v8'); parentPort.postMessage(v8.getHeapSpaceStatistics().find((s) => s.space_name === 'new_space').space_size);",
+        { eval: true },
+      );
+      const bytes = await new Promise<number>((resolve, reject) => {
+        probe.once('message', resolve);
+        probe.once('error', reject);
+      });
+      await probe.terminate();
+      expect(bytes).toBeGreaterThanOrEqual(WORKER_SEMI_SPACE_MB * 1024 * 1024);
+    } finally {
+      await pool.close();
+    }
   });
 
   it('rejects every batch with a message naming the module when deriveObject cannot be loaded', async () => {
