@@ -1,4 +1,3 @@
-import { setFlagsFromString } from 'node:v8';
 import { Worker } from 'node:worker_threads';
 import type { DeriveSettings, ObjectInputs } from '../../core/derive/types.ts';
 import { DEFAULT_DERIVE_MODULE } from './batchDeriver.ts';
@@ -6,6 +5,7 @@ import type { BatchDeriver } from './batchDeriver.ts';
 import type { BatchReadings } from './deriveBatch.ts';
 import type { DeriveResultMessage, DeriveTaskMessage, DeriveWorkerData } from './deriveWorker.ts';
 import type { PackedDerived } from './packedDerived.ts';
+import { setV8ForDerive } from './v8ForDerive.ts';
 
 // '../derive/': the same file from lib/catalog/derive/ and from the bundled derive command in lib/catalog/cli/.
 const BOOTSTRAP = new URL('../derive/deriveWorkerBootstrap.mjs', import.meta.url);
@@ -23,23 +23,6 @@ interface Task {
  * beyond any batch we measured (1024 objects × 10,000 draws take a few seconds).
  */
 export const DEFAULT_BATCH_TIMEOUT_MS = 600_000;
-
-/**
- * Young generation (each of its two semi-spaces) a derive worker starts with, in MB: V8's
- * default starts at 1 MB and grows, and a worker scavenged about 57 times over 10,000 objects ×
- * 1000 draws (200 ms); starting at 16 MB (the size it grows to anyway) it is about 15 times
- * (100 ms). Each worker holds 32 MB more at most.
- */
-export const WORKER_SEMI_SPACE_MB = 16;
-
-/**
- * Sets the young generation of isolates created from now on (V8 reads the flag when an isolate
- * is made; this thread's own heap keeps its size). Node's `resourceLimits` sets only the largest
- * size, not the first. Idempotent, and harmless to other workers the process starts later.
- */
-function sizeWorkerYoungGeneration(): void {
-  setFlagsFromString(`--min-semi-space-size=${WORKER_SEMI_SPACE_MB}`);
-}
 
 /** Options of {@link createWorkerPool}. */
 export interface WorkerPoolOptions {
@@ -94,7 +77,7 @@ export function createWorkerPool(
     }
   };
 
-  sizeWorkerYoungGeneration();
+  setV8ForDerive();
   const workers = Array.from({ length: threads }, () => {
     const worker = new Worker(BOOTSTRAP, { workerData: data });
     worker.on('message', (answer: DeriveResultMessage) => {

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { createInProcessDeriver } from '../../../src/catalog/derive/inProcessDeriver.ts';
 import { Worker } from 'node:worker_threads';
-import { WORKER_SEMI_SPACE_MB, createWorkerPool } from '../../../src/catalog/derive/workerPool.ts';
+import { createWorkerPool } from '../../../src/catalog/derive/workerPool.ts';
+import { WORKER_SEMI_SPACE_MB } from '../../../src/catalog/derive/v8ForDerive.ts';
 import { BROKEN, MISBEHAVING, STAND_IN, someInputs, testSettings } from './fixtures.ts';
 
 describe('the derive worker pool', () => {
