@@ -31,6 +31,21 @@ describe('relationBand', () => {
     expectClose(band[2]!.mid, 7 + 2, { atol: 0.01, source: 'internal: α + median β · Δx' });
   });
 
+  it('takes the nearest rank below at 16, 50 and 84 %, over the pairs that both arrays have', () => {
+    // numpy 1.24.2 percentile(α + β (x − 10), [16, 50, 84], method='lower') over the ten pairs: (6.8, 7.0, 7.2) at
+    // x = 10 and (8.15, 8.625, 8.7) at x = 11.5. The two extra α samples have no β and must not count.
+    const alpha = [7.3, 6.9, 7.1, 7.0, 6.8, 7.2, 7.4, 6.7, 7.05, 6.95, 100, -100];
+    const beta = [1.0, 1.2, 0.8, 1.1, 0.9, 1.0, 1.3, 0.7, 1.05, 0.95];
+    const expected = [[6.8, 7.0, 7.2], [8.15, 8.625, 8.7]] as const;
+    relationBand(alpha, beta, [10, 11.5]).forEach((p, i) => {
+      const [lo, mid, hi] = expected[i]!;
+      const source = `computed with numpy 1.24.2 percentile(method='lower'), x = ${p.x}`;
+      expectClose(p.lo, lo, { rtol: 1e-15, source });
+      expectClose(p.mid, mid, { rtol: 1e-15, source });
+      expectClose(p.hi, hi, { rtol: 1e-15, source });
+    });
+  });
+
   it('is empty without samples', () => {
     expect(relationBand([], [], [9, 10])).toEqual([]);
   });

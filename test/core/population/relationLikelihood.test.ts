@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { bivariateNormalCdf } from '../../../src/core/population/bivariateNormalCdf.ts';
-import { criteriaMoments } from '../../../src/core/population/detectionModel.ts';
+import { criteriaMoments, detectionLinear } from '../../../src/core/population/detectionModel.ts';
 import { fastNormalCdf } from '../../../src/core/population/fastNormalCdf.ts';
 import { RELATION_PIVOT, relationLogLikelihood, type RelationDatum, type SelectionTable } from '../../../src/core/population/relationLikelihood.ts';
 import { buildSelectionTables, naiveTable } from '../../../src/core/population/selectionTables.ts';
@@ -71,6 +71,59 @@ describe('relationLogLikelihood', () => {
       const refNaive = referenceLogLikelihood(naiveData, [naiveTable(built.grids)], built.grids.mStar, a, b, s);
       expect(Math.abs(naive(a, b, s) - refNaive), `naive at (${a}, ${b}, ${s})`).toBeLessThan(1e-9);
     }
+  });
+});
+
+describe('relationLogLikelihood at the edges of its grid and of its tables', () => {
+  it('equals the node-by-node evaluation without a width cut, for objects whose window starts at the first node, and on a one-node grid', () => {
+    // Internal check against the stated formula, as above: a survey with minimum FWHM 0 (the flux criterion alone), and
+    // objects within 4 ex of the grid's first node (x = 7.05 and 7.6 on a grid from 7).
+    const survey = surveyWith(0);
+    const sim = simulateSample(cosmo, survey, recipe, TRUTH, 600, ERRORS, createRng(5));
+    const sites = sim.objects.map((o) => ({ field: 0, line: 'halpha' as const, z: o.z }));
+    const built = buildSelectionTables(cosmo, survey, { halpha: recipe }, sites, undefined, { zSlice: 0.25, mStar: [7, 12, 0.1] });
+    expect(built.tables.every((t) => t.linear?.noWidthCut === true)).toBe(true);
+    const data = sim.objects.map((o, i) => ({ x: o.x, ex: o.ex, y: o.y, ey: ERRORS.eyMeas, table: built.index[i] as number }));
+    data.push({ x: 7.05, ex: 0.25, y: 5.8, ey: 0.15, table: 0 }, { x: 7.6, ex: 0.25, y: 6.1, ey: 0.15, table: 0 });
+    const fast = relationLogLikelihood(data, built.tables, built.grids, erdf);
+    const oneNode = { mStar: Float64Array.from([9]) };
+    const oneData = [{ x: 9.1, ex: 0.25, y: 5.9, ey: 0.15, table: 0 }];
+    const oneTables = [{ ...built.tables[0]!, massPrior: Float64Array.from([1]) }];
+    const one = relationLogLikelihood(oneData, oneTables, oneNode, erdf);
+    for (const [a, b, sg] of [[6.4, 1.05, 0.5], [6.1, 0.7, 0.3], [7.0, 1.4, 0.8]] as const) {
+      const ref = referenceLogLikelihood(data, built.tables, built.grids.mStar, a, b, sg);
+      expect(Math.abs(fast(a, b, sg) - ref), `no width cut at (${a}, ${b}, ${sg}): ${fast(a, b, sg)} against ${ref}`).toBeLessThan(1e-9);
+      const refOne = referenceLogLikelihood(oneData, oneTables, oneNode.mStar, a, b, sg);
+      expect(Math.abs(one(a, b, sg) - refOne), `one node at (${a}, ${b}, ${sg}): ${one(a, b, sg)} against ${refOne}`).toBeLessThan(1e-9);
+    }
+  });
+
+  it('is −∞ for an object more than 4 ex from every grid node, and in a table where the line cannot be detected', () => {
+    // Closed form: p(x | M*) is cut to zero beyond 4σ, and P(detected) = 0 outside the spectrograph (z = 9 puts Hα
+    // at 65655 Å, beyond 53000 Å), so the likelihood is zero.
+    const survey = surveyWith(1000);
+    const built = buildSelectionTables(cosmo, survey, { halpha: recipe }, [{ field: 0, line: 'halpha', z: 5 }], undefined, { zSlice: 0.25, mStar: [7, 12, 0.1] });
+    // Each case has a detectable object beside it (y = 8 is detectable at every node), so that nothing else gives −∞.
+    const far = relationLogLikelihood([{ x: 3, ex: 0.25, y: 8, ey: 0.15, table: 0 }, { x: 10, ex: 0.25, y: 8, ey: 0.15, table: 0 }], built.tables, built.grids, erdf);
+    expect(far(6.4, 1.05, 0.5)).toBe(-Infinity);
+    const outside = { massPrior: built.tables[0]!.massPrior, linear: detectionLinear(cosmo, recipe, { limit: { kind: 'constant', fluxCgs: 3e-18 }, lamObsRangeAngstrom: [27000, 53000], minFwhmKms: 1000 }, 9), calibrationScatter: 0.3 };
+    expect(outside.linear.possible).toBe(false);
+    const none = relationLogLikelihood([{ x: 10, ex: 0.25, y: 8, ey: 0.15, table: 0 }, { x: 10, ex: 0.25, y: 8, ey: 0.15, table: 1 }], [built.tables[0]!, outside], built.grids, erdf);
+    expect(none(6.4, 1.05, 0.5)).toBe(-Infinity);
+    const inside = relationLogLikelihood([{ x: 10, ex: 0.25, y: 8, ey: 0.15, table: 0 }], built.tables, built.grids, erdf);
+    expect(Number.isFinite(inside(6.4, 1.05, 0.5))).toBe(true);
+  });
+
+  it('is −∞, not +∞, where the population\'s detection probability underflows but the object\'s own does not', () => {
+    // At α = −20, σ = 2 the relation's black holes are all far below the flux limit (the flux criterion's mean is at least
+    // 12σ under it at every node, so P(detected) is taken as 0, like every probability below Φ(−7)), while an object
+    // measured at y = 8 is detectable under its own posterior: p(x, y, detected) / P(detected) with P(detected) = 0 must
+    // not become +∞, which a sampler would run to.
+    const survey = surveyWith(1000);
+    const built = buildSelectionTables(cosmo, survey, { halpha: recipe }, [{ field: 0, line: 'halpha', z: 5 }], undefined, { zSlice: 0.25, mStar: [7, 12, 0.1] });
+    const like = relationLogLikelihood([{ x: 10, ex: 0.25, y: 8, ey: 0.15, table: 0 }], built.tables, built.grids, erdf);
+    expect(like(-20, 1, 2)).toBe(-Infinity);
+    expect(Number.isFinite(like(0, 1, 2))).toBe(true);
   });
 });
 

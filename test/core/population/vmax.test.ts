@@ -66,6 +66,40 @@ describe('vmax', () => {
     expect(vmax(cosmo, survey(), { z: 5, line: 'hbeta', fluxObsCgs: 1e-15 }, 0).belowLimit).toBe(true);
   });
 
+  it('gives no volume for an object below the line\'s window or in a field the survey does not have', () => {
+    // The Hα window of 27000–53000 Å starts at z = 27000/6564.61 − 1 = 3.113.
+    const none = { vmaxCmpc3: null, vCmpc3: null, belowLimit: true };
+    expect(vmax(cosmo, survey(), { z: 3, line: 'halpha', fluxObsCgs: 1e-15 }, 0)).toEqual(none);
+    expect(vmax(cosmo, survey(), { z: 5, line: 'halpha', fluxObsCgs: 1e-15 }, 1)).toEqual(none);
+  });
+
+  it('leaves out a field without a limit for the object\'s line', () => {
+    // Only field A observes Hα: the same V_max as the first case, astropy 5.2.1 Planck18 (see above).
+    const two = survey({
+      fields: [
+        { name: 'A', areaArcmin2: 100, limits: { halpha: { kind: 'constant', fluxCgs: LIMIT } } },
+        { name: 'B', areaArcmin2: 300, limits: { hbeta: { kind: 'constant', fluxCgs: LIMIT } } },
+      ],
+    });
+    const r = vmax(cosmo, two, { z: 5, line: 'halpha', fluxObsCgs: 1e-15 }, 0);
+    expectClose(r.vmaxCmpc3 as number, 1131221.4885504968, { rtol: 1e-8, source: 'computed with astropy 5.2.1 Planck18.comoving_volume' });
+  });
+
+  it('counts in V only the detectable volume below the object\'s redshift when the window has a gap above it', () => {
+    // A limit far above the object's flux from 36000 to 40000 Å splits the window in two intervals, the object (z = 4,
+    // 32823 Å) in the first: V = Ω (V_C(4) − V_C(27000/6564.61 − 1)) / 4π = 296308.46126776485 Mpc³ for 100 arcmin²
+    // (astropy 5.2.1 Planck18.comoving_volume).
+    const gap = survey({
+      fields: [{
+        name: 'A', areaArcmin2: 100,
+        limits: { halpha: { kind: 'table', lamObsAngstrom: [20000, 36000, 36001, 40000, 40001, 60000], fluxCgs: [LIMIT, LIMIT, 1e-10, 1e-10, LIMIT, LIMIT] } },
+      }],
+    });
+    const r = vmax(cosmo, gap, { z: 4, line: 'halpha', fluxObsCgs: 1e-15 }, 0);
+    expectClose(r.vCmpc3 as number, 296308.46126776485, { rtol: 1e-8, source: 'computed with astropy 5.2.1 Planck18.comoving_volume' });
+    expect(r.vmaxCmpc3 as number).toBeLessThan(1131221.4885504968);
+  });
+
   it('gives ⟨V/V_max⟩ = 0.5 for a population uniform in comoving volume (Schmidt 1968)', () => {
     // Schmidt 1968, ApJ 151, 393: for a non-evolving population uniform in space, V/V_max is uniform on [0, 1].
     // Seeded; 4000 selected objects give a standard error of 1/√(12·4000) = 0.0046; tolerance 3.5σ = 0.016.
