@@ -69,8 +69,11 @@ export function drawFromBank(bank: DrawBank, role: string, m: Measured, out: Flo
       out[k + 1] = x1;
       out[k + 2] = x2;
       out[k + 3] = x3;
-      const m = Math.min(x0, x1, x2, x3);
-      if (m < min) min = m;
+      // Plain comparisons: Math.min of four (with its NaN and −0 rules) cost more than the rest of the step.
+      if (x0 < min) min = x0;
+      if (x1 < min) min = x1;
+      if (x2 < min) min = x2;
+      if (x3 < min) min = x3;
     }
     for (let k = n4; k < n; k++) {
       const x = v + lo * (z[k] as number);

@@ -142,6 +142,14 @@ describe('log10InPlace', () => {
     log10InPlace(arr);
     for (let k = 0; k < xs.length; k++) expect(Object.is(arr[k], log10(xs[k] as number)), `log10(${xs[k]})`).toBe(true);
   });
+
+  it('reads each value of a view that starts inside its buffer, and leaves the values around it alone', () => {
+    // The words are read through a view of the array's own buffer: its offset must be honoured.
+    const whole = Float64Array.from([3, 1e-18, 2500, 7, 0.5, 64]);
+    const view = whole.subarray(1, 5);
+    log10InPlace(view);
+    expect([...whole]).toEqual([3, log10(1e-18), log10(2500), log10(7), log10(0.5), 64]);
+  });
 });
 
 describe('expInPlace', () => {
