@@ -5,11 +5,20 @@
 
 const SQRT1_2 = Math.SQRT1_2;
 
-// erfc by its Taylor series for |x| < 2 (through erf) and by the Laplace continued fraction
-// (Abramowitz & Stegun 1964, eq. 7.1.14) beyond, evaluated with the modified Lentz method.
+/**
+ * Where erfc leaves the Taylor series of erf for the continued fraction. 1 − erf x loses the
+ * digits erf x shares with 1, and the alternating series loses more as x grows: with the switch
+ * at x = 2 (Φ at −2.83) Φ was off by 1.5e-13 relative just below it. From 1.25 the fraction
+ * converges in at most ~160 steps, and each side keeps erfc within 5e-15 of glibc's erfc (a
+ * scan of 0.8 ≤ x ≤ 2 in steps of 0.0005; measured here, no published source).
+ */
+const ERFC_SERIES_MAX = 1.25;
+
+// erfc by its Taylor series for x < ERFC_SERIES_MAX (through erf) and by the Laplace continued
+// fraction (Abramowitz & Stegun 1964, eq. 7.1.14) beyond, evaluated with the modified Lentz method.
 function erfcPositive(x: number): number {
-  if (x < 2) {
-    // erf x = 2/√π Σ (−1)^n x^(2n+1) / (n! (2n+1)); converges fast for x < 2.
+  if (x < ERFC_SERIES_MAX) {
+    // erf x = 2/√π Σ (−1)^n x^(2n+1) / (n! (2n+1)); converges fast for small x.
     let term = x;
     let sum = x;
     const x2 = x * x;
@@ -45,7 +54,8 @@ function logErfcCfTail(x: number): number {
 }
 
 /**
- * Standard normal cumulative distribution Φ(x) = P(Z ≤ x), relative accuracy ~1e-15.
+ * Standard normal cumulative distribution Φ(x) = P(Z ≤ x), to a few 1e-15 relative (checked
+ * against mpmath and scipy in the tests; the lower tail too, down to where Φ underflows).
  * @param x - any real number.
  */
 export function normalCdf(x: number): number {
@@ -61,6 +71,6 @@ export function logNormalCdf(x: number): number {
   if (Number.isNaN(x)) return NaN;
   if (x >= 0) return Math.log1p(-0.5 * erfcPositive(x * SQRT1_2));
   const t = -x * SQRT1_2;
-  if (t < 2) return Math.log(0.5 * erfcPositive(t));
+  if (t < ERFC_SERIES_MAX) return Math.log(0.5 * erfcPositive(t));
   return Math.log(0.5) - t * t + logErfcCfTail(t);
 }

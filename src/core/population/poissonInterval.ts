@@ -1,4 +1,4 @@
-import { normalCdf } from './normalCdf.ts';
+import { logNormalCdf } from './normalCdf.ts';
 
 /** A two-sided confidence interval on the mean of a Poisson count. */
 export interface PoissonInterval {
@@ -43,14 +43,32 @@ function logPoissonCdf(n: number, lambda: number): number {
   return lnPeak + Math.log(sum);
 }
 
-// The λ at which the decreasing function g(λ) = ln P(N ≤ n | λ) equals lnTarget, by bisection.
-function solveMean(n: number, lnTarget: number): number {
+// ln P(N ≥ n | mean λ) for n ≥ 1. Below λ = n the terms from k = n on fall off (each is the last
+// times λ/(k + 1) < 1) and are summed directly, so a small tail keeps its digits; from λ = n on the
+// tail is at least about a half and 1 − P(N ≤ n − 1) loses nothing.
+function logPoissonUpperTail(n: number, lambda: number, lnFactN: number): number {
+  if (lambda === 0) return -Infinity;
+  if (lambda >= n) return Math.log1p(-Math.exp(logPoissonCdf(n - 1, lambda)));
+  let sum = 1;
+  let r = 1;
+  for (let k = n + 1; k < n + 100000; k++) {
+    r *= lambda / k;
+    sum += r;
+    if (r < 1e-17 * sum) break;
+  }
+  return -lambda + n * Math.log(lambda) - lnFactN + Math.log(sum);
+}
+
+// The λ in [0, ∞) at which the monotone function g(λ) equals lnTarget, by bisection (g decreasing
+// unless `increasing`).
+function solveMean(g: (lambda: number) => number, lnTarget: number, increasing: boolean, start: number): number {
+  const below = (lambda: number): boolean => (increasing ? g(lambda) < lnTarget : g(lambda) > lnTarget);
   let lo = 0;
-  let hi = Math.max(10, 2 * n + 20);
-  while (logPoissonCdf(n, hi) > lnTarget) hi *= 2;
+  let hi = start;
+  while (below(hi)) hi *= 2;
   for (let i = 0; i < 200 && hi - lo > 1e-14 * hi; i++) {
     const mid = 0.5 * (lo + hi);
-    if (logPoissonCdf(n, mid) > lnTarget) lo = mid;
+    if (below(mid)) lo = mid;
     else hi = mid;
   }
   return 0.5 * (lo + hi);
@@ -67,9 +85,14 @@ function solveMean(n: number, lnTarget: number): number {
 export function poissonInterval(n: number, sigmas = 1): PoissonInterval {
   if (!Number.isInteger(n) || n < 0) throw new RangeError(`poissonInterval: count must be a non-negative integer, got ${n}`);
   if (!(sigmas > 0)) throw new RangeError(`poissonInterval: sigmas must be positive, got ${sigmas}`);
-  const cl = normalCdf(sigmas);
-  const upper = solveMean(n, Math.log(1 - cl));
-  // P(N ≥ n | λ) = 1 − P(N ≤ n − 1 | λ) = 1 − CL  ⇔  P(N ≤ n − 1 | λ) = CL.
-  const lower = n === 0 ? 0 : solveMean(n - 1, Math.log(cl));
+  // Both limits leave 1 − CL = Φ(−S) outside, taken as such (not as 1 − Φ(S), which keeps only
+  // 1e-16 / Φ(−S) of its digits: 3.5e-10 relative at S = 5).
+  const lnAlpha = logNormalCdf(-sigmas);
+  const start = Math.max(10, 2 * n + 20);
+  const upper = solveMean((lambda) => logPoissonCdf(n, lambda), lnAlpha, false, start);
+  // P(N ≥ n | λ_l) = 1 − CL, solved in the upper tail itself, which is small here.
+  let lnFactN = 0;
+  for (let k = 2; k <= n; k++) lnFactN += Math.log(k);
+  const lower = n === 0 ? 0 : solveMean((lambda) => logPoissonUpperTail(n, lambda, lnFactN), lnAlpha, true, start);
   return { n, lower, upper };
 }

@@ -20,27 +20,28 @@ const ASTROPY = [
   { n: 10, lower: 6.89130556, upper: 14.26694976 },
 ];
 
-// The same limits from the Poisson–χ² identity P(N ≤ n | λ) = 1 − F_χ²(2λ; 2n + 2): λ_u = F⁻¹_χ²(CL; 2n + 2) / 2 and
-// λ_l = F⁻¹_χ²(1 − CL; 2n) / 2 with CL = Φ(S), computed with scipy 1.10.1 stats.chi2.ppf and stats.norm.cdf / norm.sf
-// (printed by repr). Tolerance 1e-11 relative (the bisection stops at 1e-14 of its bracket); lower limits at S ≥ 4 to
-// 1e-9, since the code forms ln CL from CL = Φ(S), whose rounding (1e-16) is 1e-16 / (1 − Φ(S)) relative in 1 − CL:
-// 3.5e-10 at S = 5.
-const CHI2 = [
-  { n: 1, sigmas: 1, lower: 0.17275377902344996, upper: 3.299526559115855 },
-  { n: 3, sigmas: 1, lower: 1.367295313890434, upper: 5.918185832883396 },
-  { n: 5, sigmas: 2, lower: 1.5828728006821131, upper: 11.820598955701575 },
-  { n: 20, sigmas: 1, lower: 15.56555201778588, upper: 25.54651922951146 },
-  { n: 50, sigmas: 3, lower: 31.42213108175597, upper: 75.10778740187484 },
+// The same limits to 50 digits: λ_u solves Q(n + 1, λ) = Φ(−S) and λ_l solves P(n, λ) = Φ(−S) (the regularized
+// incomplete gamma functions: P(N ≤ n | λ) = Q(n + 1, λ), P(N ≥ n | λ) = P(n, λ)), Φ(−S) = ncdf(−S), each root by
+// 400 bisections; computed with mpmath 1.2.1 (Debian python3-mpmath) at mp.dps = 50, printed by repr(float(·)).
+// (scipy's chi2.ppf(norm.cdf(S), ·) is no reference here: Φ(S) rounded to a double leaves Φ(−S) only 1e-16 / Φ(−S)
+// relative, and its upper limit for n = 0, S = 6 is 2.7e-9 off.) Tolerance 1e-13 relative: the bisection stops at
+// 1e-14 of its bracket, and the largest difference seen is 4.3e-14 (lower limits).
+const MPMATH = [
+  { n: 1, sigmas: 1, lower: 0.17275377902344988, upper: 3.299526559115855 },
+  { n: 3, sigmas: 1, lower: 1.367295313890434, upper: 5.918185832883397 },
+  { n: 5, sigmas: 2, lower: 1.5828728006821131, upper: 11.820598955701573 },
+  { n: 20, sigmas: 1, lower: 15.565552017785876, upper: 25.546519229511457 },
+  { n: 50, sigmas: 3, lower: 31.422131081755957, upper: 75.10778740187482 },
   { n: 100, sigmas: 1, lower: 90.0167451771134, upper: 111.03336094114967 },
   { n: 400, sigmas: 2, lower: 361.0081432536744, upper: 442.04146567994786 },
-  { n: 0, sigmas: 0.5, lower: 0, upper: 1.1759117615936188 },
-  { n: 7, sigmas: 0.5, lower: 5.4654065213135565, upper: 9.13312997584905 },
-  { n: 0, sigmas: 3, lower: 0, upper: 6.607726221510343 },
-  { n: 0, sigmas: 6, lower: 0, upper: 20.73676889383496 },
-  { n: 1, sigmas: 3, lower: 0.0013508099647481918, upper: 8.900290301616579 },
-  { n: 2, sigmas: 4, lower: 0.007979990636705977, upper: 15.246489472133668 },
-  { n: 1, sigmas: 5, lower: 2.8665161296376305e-7, upper: 18.009961526475156 },
-  { n: 10, sigmas: 5, lower: 1.1100562372607943, upper: 36.14721929347437 },
+  { n: 0, sigmas: 0.5, lower: 0, upper: 1.1759117615936185 },
+  { n: 7, sigmas: 0.5, lower: 5.465406521313556, upper: 9.133129975849048 },
+  { n: 0, sigmas: 3, lower: 0, upper: 6.607726221510349 },
+  { n: 0, sigmas: 6, lower: 0, upper: 20.736768949974707 },
+  { n: 1, sigmas: 3, lower: 0.0013508099647481938, upper: 8.900290301616586 },
+  { n: 2, sigmas: 4, lower: 0.007979990636705988, upper: 15.24648947213367 },
+  { n: 1, sigmas: 5, lower: 2.866516129637636e-07, upper: 18.00996152663843 },
+  { n: 10, sigmas: 5, lower: 1.1100562372607947, upper: 36.14721929368541 },
 ];
 
 describe('poissonInterval', () => {
@@ -62,13 +63,13 @@ describe('poissonInterval', () => {
     }
   });
 
-  it('agrees with the χ² closed form (scipy 1.10.1) for counts up to 400 and S from 0.5 to 6', () => {
-    for (const c of CHI2) {
+  it('agrees with the exact limits (mpmath, 50 digits) to 1e-13 for counts up to 400 and S from 0.5 to 6', () => {
+    for (const c of MPMATH) {
       const got = poissonInterval(c.n, c.sigmas);
-      const src = `closed form via χ² quantiles, computed with scipy 1.10.1 chi2.ppf, n = ${c.n}, S = ${c.sigmas}`;
-      expectClose(got.upper, c.upper, { rtol: 1e-11, source: src });
+      const src = `mpmath 1.2.1 incomplete-gamma roots at 50 digits, n = ${c.n}, S = ${c.sigmas}`;
+      expectClose(got.upper, c.upper, { rtol: 1e-13, source: src });
       if (c.n === 0) expect(got.lower).toBe(0);
-      else expectClose(got.lower, c.lower, { rtol: c.sigmas >= 4 ? 1e-9 : 1e-11, source: src });
+      else expectClose(got.lower, c.lower, { rtol: 1e-13, source: src });
     }
   });
 
