@@ -203,7 +203,7 @@ describe('ensembleSample: options, refusals and bookkeeping', () => {
 
 describe('ensembleSample: the differential-evolution proposal', () => {
   it('moves each walker by γ (x_j − x_k), two distinct walkers of the other half, with γ = 2.38/√(2 dim) (1 + 0.1 z)', async () => {
-    // ter Braak 2006 and Nelson et al. 2014 (eq. in section 3): with 4 walkers in 1-D the other half holds exactly two
+    // ter Braak 2006 (γ0 = 2.38/√(2 dim)) and Nelson et al. 2014, ApJS 210, 11 (the 10 % normal jitter): with 4 walkers in 1-D the other half holds exactly two
     // walkers a, b, so γ = |Δ| / |x_a − x_b| is recovered from each proposal. On a flat target every proposal is
     // accepted (the move is symmetric: log u < 0). Closed form: γ ~ N(γ0, (0.1 γ0)²), γ0 = 2.38/√2; 4000 values:
     // mean to 4 × 0.1 γ0/√4000, sd to ±10 %, every γ within 6 sd.
