@@ -112,6 +112,25 @@ describe('drawFromBank', () => {
     expect(new Set(out).size).toBeGreaterThan(N / 2);
   });
 
+  it('draws a one-sided error (upper error zero) only below the value', () => {
+    // Split normal (John 1982) with σhi = 0: a fraction σlo/(σlo + σhi) = 1 of the draws lies below the mode.
+    const out = drawn(24, { value: 10, errLo: 2, errHi: 0 }, false);
+    expect(Math.max(...out)).toBeLessThanOrEqual(10);
+    expect(new Set(out).size).toBeGreaterThan(N / 2);
+  });
+
+  it('redraws a draw of exactly zero: a positive quantity is strictly positive', () => {
+    // The bank's deviates put one draw of 1 + 1·z exactly at 0 and the rest above it (the smallest draw is 0, not
+    // below it); the contract of drawPositive (a value > 0) applies to it as to any draw ≤ 0.
+    const z = Float64Array.from([0.5, -1, 0.25, 2, 1]);
+    const redraw = createRng(11);
+    const bank = { n: 5, generation: 0, normals: () => z, uniforms: () => { throw new Error('uniforms'); }, redraws: () => redraw, derived: () => { throw new Error('derived'); } };
+    const out = new Float64Array(5);
+    drawFromBank(bank, 'lum_halpha', { value: 1, errLo: 1, errHi: 1 }, out, true);
+    expect([out[0], out[2], out[3], out[4]]).toEqual([1.5, 1.25, 3, 2]);
+    expect(out[1]).toBeGreaterThan(0);
+  });
+
   it('draws a positive quantity as N(1, 1) truncated at zero: every draw positive, mean 1.2876', () => {
     const out = drawn(2, { value: 1, errLo: 1, errHi: 1 }, true);
     expect(Math.min(...out)).toBeGreaterThan(0);
@@ -144,6 +163,22 @@ describe('drawFromBank', () => {
       // mean = mode + √(2/π)(σhi − σlo) (closed form); sd² = (1 − 2/π)(σhi − σlo)² + σlo σhi = 4.4535
       expectClose(mean(out), 10 + Math.sqrt(2 / Math.PI) * (hi - lo), { atol: meanTol(Math.sqrt(4.4535)), source: 'split normal mean, closed form' });
     }
+  });
+
+  it('redraws the non-positive draws of an asymmetric error (split normal) and keeps the others', () => {
+    // value 1, σlo = 1, σhi = 3: a draw falls below the value with probability 1/4 and then ≤ 0 when |z| ≥ 1, so about
+    // 0.25 × 0.3173 ≈ 8 % of the first draws are ≤ 0 (split normal, John 1982; 2(1 − Φ(1)) = 0.3173, normal tables).
+    const m = { value: 1, errLo: 1, errHi: 3 };
+    const plain = drawn(31, m, false);
+    const out = drawn(31, m, true);
+    let redrawn = 0;
+    for (let k = 0; k < N; k++) {
+      if ((plain[k] as number) > 0) expect(out[k]).toBe(plain[k]);
+      else redrawn++;
+    }
+    expect(Math.min(...out)).toBeGreaterThan(0);
+    // binomial, 4 standard errors
+    expectClose(redrawn / N, 0.25 * 0.3173, { atol: 4 * Math.sqrt((0.08 * 0.92) / N), source: 'split normal (John 1982) below-zero fraction, closed form' });
   });
 
   it('draws a measurement scaled by d as the draws of the measurement divided by d: a deflated width is paired with the measured one', () => {

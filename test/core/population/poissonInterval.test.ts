@@ -44,6 +44,20 @@ const MPMATH = [
   { n: 10, sigmas: 5, lower: 1.1100562372607947, upper: 36.14721929368541 },
 ];
 
+// Widths S far below 1, where Φ(−S) is near 1/2 and the roots lie within a unit of n: the bisection then evaluates the
+// upper limit's P(N ≤ n | λ) at means below n (the terms above the largest one matter there) and the lower limit's
+// P(N ≥ n | λ) at means above n, where a wrong tail can turn the bisection the wrong way. Computed with mpmath 1.2.1
+// (Debian python3-mpmath) at mp.dps = 50 as above, by scripts/reference/poissonLimits.py.
+const MPMATH_NARROW = [
+  { n: 1, sigmas: 0.01, lower: 0.6852001295571155, upper: 1.6911126119265336 },
+  { n: 2, sigmas: 0.01, lower: 1.6656468950877286, upper: 2.690271410931708 },
+  { n: 5, sigmas: 0.01, lower: 4.649460457391498, upper: 5.693888137313612 },
+  { n: 21, sigmas: 0.01, lower: 20.622256694018276, upper: 21.714101319342266 },
+  { n: 30, sigmas: 0.05, lower: 29.39608221516218, upper: 30.944783488080063 },
+  { n: 13, sigmas: 0.02, lower: 12.597334293284197, upper: 13.742037340262648 },
+  { n: 40, sigmas: 0.01, lower: 39.60426064640067, upper: 40.73091321343584 },
+];
+
 describe('poissonInterval', () => {
   it('gives the 1σ limits of Gehrels 1986 Tables 1 and 2 for N = 0, 1, 2 and 10', () => {
     for (const g of GEHRELS) {
@@ -70,6 +84,15 @@ describe('poissonInterval', () => {
       expectClose(got.upper, c.upper, { rtol: 1e-13, source: src });
       if (c.n === 0) expect(got.lower).toBe(0);
       else expectClose(got.lower, c.lower, { rtol: 1e-13, source: src });
+    }
+  });
+
+  it('agrees with the exact limits (mpmath, 50 digits) to 1e-13 for widths S of 0.01 to 0.05, where both roots lie within a unit of n', () => {
+    for (const c of MPMATH_NARROW) {
+      const got = poissonInterval(c.n, c.sigmas);
+      const src = `mpmath 1.2.1 incomplete-gamma roots at 50 digits (scripts/reference/poissonLimits.py), n = ${c.n}, S = ${c.sigmas}`;
+      expectClose(got.upper, c.upper, { rtol: 1e-13, source: src });
+      expectClose(got.lower, c.lower, { rtol: 1e-13, source: src });
     }
   });
 
