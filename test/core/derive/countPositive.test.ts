@@ -25,5 +25,8 @@ describe('countPositive', () => {
     expect(countPositive(Float64Array.from([-1, -1, -1, -1, -1, 0.5]), Float64Array.from([0, 0, 0, 0, 0, 0]))).toBe(1);
     expect(countPositive(Float64Array.from([0, -0, NaN, 1, NaN]), null)).toBe(1);
     expect(countPositive(Float64Array.from([1, -1, 0.5]), Float64Array.from([-1, 1.5, NaN]))).toBe(1);
+    // NaN, zero and −0 at every place of a step of four, alone and as sums (NaN > 0 is false: it adds 0, not NaN).
+    expect(countPositive(Float64Array.from([NaN, 0, -0, NaN, 3, NaN, 2, 0, 1]), null)).toBe(3);
+    expect(countPositive(Float64Array.from([1, 1, 1, 1, 1]), Float64Array.from([NaN, -1, -2, NaN, -1]))).toBe(0);
   });
 });
