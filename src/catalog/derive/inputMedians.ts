@@ -3,7 +3,7 @@ import type { ColumnPlan, PlannedColumn } from '../normalize/ColumnPlan.ts';
 import type { NormalizedRow } from '../normalize/normalizeChunk.ts';
 import { CatalogError } from '../readers/CatalogError.ts';
 import type { PackedDerived } from './packedDerived.ts';
-import { packedValue } from './packedDerived.ts';
+import { packedField } from './packedDerived.ts';
 
 /**
  * Medians a catalog of broad-line AGN must have (common practice, no source): broad-line
@@ -55,6 +55,9 @@ export class InputMedians {
   private readonly fwhm = new Map<LineId, LogMedian>();
   private readonly lumColumn = new Map<LineId, PlannedColumn>();
   private readonly fwhmColumn = new Map<LineId, PlannedColumn>();
+  /** Per line counted, what `add` reads: the width's column name and a reader of the derived luminosity (built once, not per row). */
+  private readonly widthKeys: { line: LineId; m: LogMedian; column: string }[] = [];
+  private readonly lumKeys: { line: LineId; m: LogMedian; read: (packed: PackedDerived, k: number) => number }[] = [];
 
   constructor(
     plan: ColumnPlan,
@@ -73,23 +76,25 @@ export class InputMedians {
         this.fwhm.set(line, new LogMedian());
       }
     }
+    for (const [line, m] of this.fwhm) this.widthKeys.push({ line, m, column: `fwhm_${line}` });
+    for (const [line, m] of this.lum) this.lumKeys.push({ line, m, read: packedField(`logLum.${line}`) });
   }
 
   /** Adds one row: its widths (valid or refused by the row checks) and, when derived, its line luminosities. */
   add(row: NormalizedRow, packed: PackedDerived | null, k: number): void {
-    for (const [line, m] of this.fwhm) {
-      const v = row.canonical[`fwhm_${line}`];
+    for (const { line, m, column } of this.widthKeys) {
+      const v = row.canonical[column];
       if (typeof v === 'number') m.add(Math.log10(v));
       else {
-        const problem = row.problems.find((p) => p.column === `fwhm_${line}`);
+        const problem = row.problems.find((p) => p.column === column);
         const raw = problem ? Number(problem.value) : NaN;
         if (raw > 0) m.add(Math.log10(this.fwhmColumn.get(line)!.convert(raw)));
       }
     }
     if (!packed) return;
-    for (const [line, m] of this.lum) {
+    for (const { line, m, read } of this.lumKeys) {
       if (row.inputs?.lines[line]?.fluxIsLimit) continue;
-      m.add(packedValue(packed, k, `logLum.${line}`));
+      m.add(read(packed, k));
     }
   }
 

@@ -74,13 +74,17 @@ function putPercentiles(out: Float64Array, base: number, p: Percentiles | null):
   out[base + 2] = num(p?.p84);
 }
 
+/** Offsets of the per-line and per-bound fields, looked up once: building `logLum.${line}` and looking it up per object was most of packInto's time. */
+const LUM_OFFSETS = LINES.map((l) => PACKED_OFFSET[`logLum.${l}`]);
+const LIMIT_OFFSETS = LIMIT_KEYS.map((q) => PACKED_OFFSET[`isLimit.${q}`]);
+
 /** Writes `d` as record `i` of `packed`. */
 export function packInto(packed: PackedDerived, i: number, d: DerivedObject): void {
   const o = packed.numbers;
   const b = i * PACKED_WIDTH;
   o[b + PACKED_OFFSET.ageGyr] = num(d.ageGyr);
   o[b + PACKED_OFFSET.dlMpc] = num(d.dlMpc);
-  for (const l of LINES) o[b + PACKED_OFFSET[`logLum.${l}`]] = num(d.logLum[l]);
+  for (let j = 0; j < LINES.length; j++) o[b + (LUM_OFFSETS[j] as number)] = num(d.logLum[LINES[j] as LineId]);
   o[b + PACKED_OFFSET.logL5100] = num(d.logL5100);
   o[b + PACKED_OFFSET.logMbh] = num(d.logMbh);
   o[b + PACKED_OFFSET.logLbol] = num(d.logLbol);
@@ -97,7 +101,7 @@ export function packInto(packed: PackedDerived, i: number, d: DerivedObject): vo
   putPercentiles(o, b + PACKED_OFFSET['pct.logEddRatio.p16'], d.pct.logEddRatio);
   putPercentiles(o, b + PACKED_OFFSET['pct.logMseed.p16'], d.pct.logMseed);
   putPercentiles(o, b + PACKED_OFFSET['pct.deltaLogMbhLocal.p16'], d.pct.deltaLogMbhLocal);
-  for (const q of LIMIT_KEYS) o[b + PACKED_OFFSET[`isLimit.${q}`]] = d.isLimit[q] ? 1 : 0;
+  for (let j = 0; j < LIMIT_KEYS.length; j++) o[b + (LIMIT_OFFSETS[j] as number)] = d.isLimit[LIMIT_KEYS[j] as keyof LimitMarks] ? 1 : 0;
   packed.mbhMethod[i] = d.mbhMethod;
   packed.lbolMethod[i] = d.lbolMethod;
   packed.flags[i] = d.flags.join(',');
