@@ -31,6 +31,12 @@ def limits(n, s):
 
 
 print('mpmath', mp.__version__)
+# The table MPMATH: counts up to 400 and S from 0.5 to 6.
+for n, s in [(1, 1), (3, 1), (5, 2), (20, 1), (50, 3), (100, 1), (400, 2), (0, 0.5), (7, 0.5), (0, 3), (0, 6), (1, 3),
+             (2, 4), (1, 5), (10, 5)]:
+    lo, up = limits(n, s)
+    print(f'  {{ n: {n}, sigmas: {s}, lower: {lo!r}, upper: {up!r} }},')
+# The table MPMATH_NARROW:
 # Widths S far below 1 (Phi(-S) near 1/2): the bisection then meets means below n for the upper limit and above n
 # for the lower one, where a wrong tail sum can change its direction.
 for n, s in [(1, 0.01), (2, 0.01), (5, 0.01), (21, 0.01), (30, 0.05), (13, 0.02), (40, 0.01)]:

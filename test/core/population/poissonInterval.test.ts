@@ -22,7 +22,8 @@ const ASTROPY = [
 
 // The same limits to 50 digits: λ_u solves Q(n + 1, λ) = Φ(−S) and λ_l solves P(n, λ) = Φ(−S) (the regularized
 // incomplete gamma functions: P(N ≤ n | λ) = Q(n + 1, λ), P(N ≥ n | λ) = P(n, λ)), Φ(−S) = ncdf(−S), each root by
-// 400 bisections; computed with mpmath 1.2.1 (Debian python3-mpmath) at mp.dps = 50, printed by repr(float(·)).
+// 400 bisections; computed with mpmath 1.2.1 (Debian python3-mpmath) at mp.dps = 50, printed by repr(float(·))
+// (scripts/reference/poissonLimits.py prints them).
 // (scipy's chi2.ppf(norm.cdf(S), ·) is no reference here: Φ(S) rounded to a double leaves Φ(−S) only 1e-16 / Φ(−S)
 // relative, and its upper limit for n = 0, S = 6 is 2.7e-9 off.) Tolerance 1e-13 relative: the bisection stops at
 // 1e-14 of its bracket, and the largest difference seen is 4.3e-14 (lower limits).
