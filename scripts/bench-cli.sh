@@ -4,11 +4,12 @@
 #  2. deriving a 20,000-object catalog with 1000 draws (four readings, the default, and one reading,
 #     the notebook's work), beside the numpy + astropy notebook way in ../shared/bench (same
 #     catalog, same draws), alternating twice.
-# Needs /usr/bin/python3 with numpy and astropy. Usage: scripts/bench-cli.sh [rows] [draws]
+# Needs /usr/bin/python3 with numpy and astropy. Usage: scripts/bench-cli.sh [rows] [draws] [rounds]
+# (rounds: 2 unless given; on a noisy host run more and read the medians printed at the end).
 set -euo pipefail
 root="$(cd "$(dirname "$0")/.." && pwd)"
 bench="$root/../shared/bench"
-rows="${1:-20000}"; draws="${2:-1000}"
+rows="${1:-20000}"; draws="${2:-1000}"; rounds="${3:-2}"
 work="$(mktemp -d)"; trap 'rm -rf "$work"' EXIT
 node "$root/scripts/build-cli.mjs" --if-stale
 
@@ -27,10 +28,14 @@ printf 'CPU seconds: --help %s; node -e "" %s\n' "$(for i in 1 2 3 4 5; do cpu n
 # The notebook does the work of one reading (the standard one); the default derivation does the
 # four built-in readings. Both are timed, each beside the notebook.
 printf 'readings: { use: [standard] }\n' > "$work/one.yaml"
-for round in 1 2; do
+r4=(); r1=()
+for round in $(seq 1 "$rounds"); do
   d=$(secs node "$root/bin/dawn-census.js" derive "$work/syn.csv" -o "$work/syn.parquet" --draws "$draws" --quiet)
   p=$(secs /usr/bin/python3 "$bench/numpy_baseline.py" "$work/syn.csv" "$work/np.npz" "$draws")
   d1=$(secs node "$root/bin/dawn-census.js" derive "$work/syn.csv" -c "$work/one.yaml" -o "$work/one.parquet" --draws "$draws" --quiet)
   printf 'round %d: %d objects x %d draws: derive (four readings) %.1f s, ratio %.2fx; derive (one reading, the same work) %.1f s, ratio %.2fx; numpy notebook %.1f s\n' \
     "$round" "$rows" "$draws" "$d" "$(echo "$p / $d" | bc -l)" "$d1" "$(echo "$p / $d1" | bc -l)" "$p"
+  r4+=("$(echo "$p / $d" | bc -l)"); r1+=("$(echo "$p / $d1" | bc -l)")
 done
+printf 'median ratio over %d rounds: four readings %.2fx, one reading %.2fx\n' "$rounds" \
+  "$(printf '%s\n' "${r4[@]}" | median)" "$(printf '%s\n' "${r1[@]}" | median)"
