@@ -22,13 +22,14 @@ class Xoshiro128ss implements Rng {
     return this.nextUint32() * INV_2_32;
   }
 
-  fillUint32(out: Uint32Array): void {
+  fillUint32(out: Uint32Array, count: number = out.length): void {
     // The same steps as nextUint32, with the state in locals for the whole run.
     let s0 = this.s0;
     let s1 = this.s1;
     let s2 = this.s2;
     let s3 = this.s3;
-    for (let k = 0; k < out.length; k++) {
+    const n = Math.min(count, out.length);
+    for (let k = 0; k < n; k++) {
       const m = Math.imul(s1, 5);
       out[k] = Math.imul((m << 7) | (m >>> 25), 9);
       const t = s1 << 9;

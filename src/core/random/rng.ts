@@ -11,8 +11,9 @@ export interface Rng {
    */
   nextUint32(): number;
   /**
-   * Optional: fills `out` with the next `out.length` words of the stream, exactly as that many
-   * `nextUint32()` calls would (a bulk path for generators that have one).
+   * Optional: fills `out[0..count)` (count defaults to `out.length`) with the next `count` words of
+   * the stream, exactly as that many `nextUint32()` calls would (a bulk path for generators that
+   * have one).
    */
-  fillUint32?(out: Uint32Array): void;
+  fillUint32?(out: Uint32Array, count?: number): void;
 }

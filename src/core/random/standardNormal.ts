@@ -57,21 +57,32 @@ const CHUNK = 512;
 /** Stands in for a generator between fills. */
 const NO_SOURCE: Rng = { next: () => 0, nextUint32: () => 0 };
 
-/** Serves a generator's words from a buffer filled in bulk: the same sequence as the generator's own. */
+/** Words a refill asks for when it is not told how many are wanted (the edge path reading on). */
+const EDGE_REFILL = 16;
+
+/**
+ * Serves a generator's words from a buffer filled in bulk: the same sequence as the generator's
+ * own. Each refill takes only as many words as asked for (at most CHUNK), so that a short fill
+ * does not make a generator produce hundreds of words nobody reads.
+ */
 class BufferedWords implements Rng {
   readonly buf = new Uint32Array(CHUNK);
-  pos = CHUNK;
+  /** Words of `buf` filled by the last refill, and the next one to serve. */
+  len = 0;
+  pos = 0;
   source: Rng = NO_SOURCE;
 
-  refill(): void {
+  /** Replaces the buffer's words by the next `count` words of the source (1 ≤ count ≤ CHUNK). */
+  refill(count: number): void {
     const src = this.source;
-    if (src.fillUint32) src.fillUint32(this.buf);
-    else for (let k = 0; k < CHUNK; k++) this.buf[k] = src.nextUint32();
+    if (src.fillUint32) src.fillUint32(this.buf, count);
+    else for (let k = 0; k < count; k++) this.buf[k] = src.nextUint32();
+    this.len = count;
     this.pos = 0;
   }
 
   nextUint32(): number {
-    if (this.pos === CHUNK) this.refill();
+    if (this.pos === this.len) this.refill(EDGE_REFILL);
     return this.buf[this.pos++] as number;
   }
 
@@ -80,29 +91,43 @@ class BufferedWords implements Rng {
   }
 }
 
+/**
+ * Words to take for `left` more deviates: one each, one in 32 over for the edge path (about one
+ * deviate in eighty goes there and takes one word or a few more), and two to spare; at most CHUNK.
+ * Too few costs one more short refill, never a different deviate.
+ */
+function wordsFor(left: number): number {
+  return Math.min(CHUNK, left + (left >>> 5) + 2);
+}
+
 const words = new BufferedWords();
 
 /**
  * Fills `out` with standard normal deviates: exactly `out[k] = standardNormal(rng)` for k = 0, 1, …,
- * but with the generator's words taken in bulk. It takes up to 511 words more than it uses, so
- * `rng` must not be used afterwards (the draw bank gives each role a generator of its own).
+ * but with the generator's words taken in bulk. It takes a few words more than it uses (about one
+ * in 32 over, see wordsFor), so `rng` must not be used afterwards (the draw bank gives each role a
+ * generator of its own).
  */
 export function fillStandardNormals(rng: Rng, out: Float64Array): void {
   const w = words;
   w.source = rng;
-  w.pos = CHUNK;
+  w.len = 0;
+  w.pos = 0;
   const buf = w.buf;
   const n = out.length;
-  // The read position in a local, handed to `w` only around the rare edge path (which reads on).
-  let pos = CHUNK;
+  // The read position and the words filled in locals, handed to `w` only around the rare edge
+  // path (which reads on, and may refill).
+  let pos = 0;
+  let len = 0;
   let k = 0;
   // Two deviates per step while two words are at hand and both take the common path (about 97 %
   // of pairs): the arrays are checked once per pair. A word that needs the edge path ends the
   // step at that word, so the words are taken exactly as one by one.
   while (k < n) {
-    if (pos === CHUNK) {
-      w.refill();
+    if (pos === len) {
+      w.refill(wordsFor(n - k));
       pos = 0;
+      len = w.len;
     }
     const j0 = buf[pos] as number;
     const i0 = j0 & (N - 1);
@@ -111,6 +136,7 @@ export function fillStandardNormals(rng: Rng, out: Float64Array): void {
       w.pos = pos + 1;
       edgeInto(w, i0, j0 >>> 7, out, k);
       pos = w.pos;
+      len = w.len;
       k++;
       continue;
     }
@@ -118,7 +144,7 @@ export function fillStandardNormals(rng: Rng, out: Float64Array): void {
     pos++;
     k++;
     // The second of the pair, when it is in this buffer and wanted.
-    if (k === n || pos === CHUNK) continue;
+    if (k === n || pos === len) continue;
     const j1 = buf[pos] as number;
     const i1 = j1 & (N - 1);
     const u1 = ((j1 >>> 7) + 0.5) * (2 / 33554432) - 1;
@@ -127,6 +153,7 @@ export function fillStandardNormals(rng: Rng, out: Float64Array): void {
       w.pos = pos + 1;
       edgeInto(w, i1, j1 >>> 7, out, k);
       pos = w.pos - 1;
+      len = w.len;
     }
     pos++;
     k++;

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { createRng, fillNormal, standardNormal } from '../../../src/core/random/index.ts';
 import { fillStandardNormals } from '../../../src/core/random/standardNormal.ts';
+import type { Rng } from '../../../src/core/random/rng.ts';
 import { normalCdf } from './normalCdf.ts';
 
 describe('standardNormal', () => {
@@ -119,5 +120,85 @@ describe('the generator\'s bulk words', () => {
     a.fillUint32!(bulk);
     for (let k = 0; k < 1000; k++) expect(bulk[k]).toBe(b.nextUint32());
     expect(a.nextUint32()).toBe(b.nextUint32());
+  });
+});
+
+describe('the generator\'s bulk words, counted', () => {
+  it('fill only the first `count` words and leave the stream right after them', () => {
+    const a = createRng(9);
+    const b = createRng(9);
+    const bulk = new Uint32Array(8).fill(7);
+    a.fillUint32!(bulk, 5);
+    for (let k = 0; k < 5; k++) expect(bulk[k]).toBe(b.nextUint32());
+    expect(Array.from(bulk.subarray(5))).toEqual([7, 7, 7]);
+    expect(a.nextUint32()).toBe(b.nextUint32());
+    // A count beyond the array fills the array, no more.
+    const c = createRng(10);
+    const d = createRng(10);
+    const two = new Uint32Array(2);
+    c.fillUint32!(two, 50);
+    expect(Array.from(two)).toEqual([d.nextUint32(), d.nextUint32()]);
+    expect(c.nextUint32()).toBe(d.nextUint32());
+  });
+});
+
+/** A generator that counts the words taken from it, and records the size of each bulk request. */
+function counted(seed: number): { rng: Required<Rng>; taken: () => number; requests: number[] } {
+  const inner = createRng(seed);
+  let taken = 0;
+  const requests: number[] = [];
+  const rng: Required<Rng> = {
+    next: () => {
+      taken++;
+      return inner.next();
+    },
+    nextUint32: () => {
+      taken++;
+      return inner.nextUint32();
+    },
+    fillUint32: (out: Uint32Array, count: number = out.length) => {
+      const m = Math.min(count, out.length);
+      requests.push(m);
+      taken += m;
+      inner.fillUint32!(out, m);
+    },
+  };
+  return { rng, taken: () => taken, requests };
+}
+
+describe('fillStandardNormals, words taken', () => {
+  it('takes hardly more words than the deviates use, for short and long fills', () => {
+    for (const n of [1, 2, 7, 31, 32, 33, 100, 200, 511, 512, 513, 1000, 1025, 5000]) {
+      for (const seed of [1, 2, 3]) {
+        // Words the deviates use: standardNormal call by call on a counting generator.
+        const ref = counted(seed);
+        const want = Array.from({ length: n }, () => standardNormal(ref.rng));
+        const used = ref.taken();
+        const bulk = counted(seed);
+        const got = new Float64Array(n);
+        fillStandardNormals(bulk.rng, got);
+        expect(Array.from(got)).toEqual(want);
+        expect(bulk.taken()).toBeGreaterThanOrEqual(used);
+        // One in 32 over plus two, and one short refill of 16 for an edge path at a buffer's end:
+        // a fill of one deviate took 512 words before refills were sized.
+        expect(bulk.taken() - used).toBeLessThanOrEqual((n >>> 5) + 2 + 16);
+      }
+    }
+  });
+
+  it('reads on through a refill in the middle of the edge path, with the same deviates', () => {
+    // Short fills over many seeds: the edge path (about one deviate in eighty) sometimes starts on
+    // the last word of a refill and must take its next words from a refill of its own (16 words).
+    let edgeRefills = 0;
+    for (let seed = 0; seed < 400; seed++) {
+      const ref = createRng(seed);
+      const want = Array.from({ length: 40 }, () => standardNormal(ref));
+      const bulk = counted(seed);
+      const got = new Float64Array(40);
+      fillStandardNormals(bulk.rng, got);
+      expect(Array.from(got)).toEqual(want);
+      edgeRefills += bulk.requests.filter((r, i) => i > 0 && r === 16).length;
+    }
+    expect(edgeRefills).toBeGreaterThan(0);
   });
 });
