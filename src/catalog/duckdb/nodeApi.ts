@@ -16,3 +16,15 @@ export function duckdb(): typeof import('@duckdb/node-api') {
   loaded ??= require('@duckdb/node-api') as typeof import('@duckdb/node-api');
   return loaded;
 }
+
+let bindings: typeof import('@duckdb/node-bindings') | null = null;
+
+/**
+ * @duckdb/node-bindings, DuckDB's C API for Node, on which @duckdb/node-api is built (loaded at the
+ * first call). Resolved from @duckdb/node-api's own folder, so that it is the exact version that
+ * package pins, wherever the package manager put it.
+ */
+export function duckdbBindings(): typeof import('@duckdb/node-bindings') {
+  bindings ??= createRequire(require.resolve('@duckdb/node-api/package.json'))('@duckdb/node-bindings') as typeof import('@duckdb/node-bindings');
+  return bindings;
+}

@@ -1,7 +1,8 @@
 import { mkdir } from 'node:fs/promises';
 import path from 'node:path';
-import { duckdb } from '../duckdb/nodeApi.ts';
+import { duckdb, duckdbBindings } from '../duckdb/nodeApi.ts';
 import type { DuckDBAppender, DuckDBConnection, DuckDBType } from '@duckdb/node-api';
+import type { DataChunk, Vector } from '@duckdb/node-bindings';
 import { sqlIdentifier, sqlString } from './sqlLiteral.ts';
 
 
@@ -133,31 +134,23 @@ export async function openParquetWriter(
   const con = connection;
   const duckType = duckTypes();
   const types = columns.map((c) => duckType[c.kind]);
-  const convert = columns.map((c) => CONVERT[c.kind]);
   const chunk = DuckDBDataChunk.create(types, VECTOR_ROWS);
-  let vectors = columns.map((_, i) => chunk.getColumnVector(i) as unknown as WritableVector);
+  const rows = new ChunkColumns(columns, chunk.chunk);
   let inChunk = 0;
   let rowCount = 0;
   let committed = false;
   const textColumns = columns.flatMap((c, i) => (c.kind === 'string' ? [i] : []));
   const textLength = new Array<number>(textColumns.length).fill(0);
 
-  // Rows are gathered column-wise into a DuckDB data chunk (numbers go into typed arrays on the
-  // JS side, copied in one call per column), which is far cheaper than one native call per value.
   const flushChunk = (): void => {
     if (inChunk === 0) return;
-    for (const v of vectors) v.flush();
+    rows.copyOut(inChunk);
     if (inChunk < VECTOR_ROWS) chunk.rowCount = inChunk;
     app.appendDataChunk(chunk);
-    // The appender keeps what it is given in its own buffer (outside DuckDB's memory limit) until
-    // it holds 100 data chunks, i.e. 204,800 rows: hundreds of MB for a wide catalog. Flushing
-    // each chunk hands the rows to the table at once, where the memory limit holds them.
     app.flushSync();
-    // One chunk, reused: its native memory is invisible to the JS garbage collector, so fresh
-    // chunks would pile up unreleased.
     chunk.reset();
     chunk.rowCount = VECTOR_ROWS;
-    vectors = columns.map((_, i) => chunk.getColumnVector(i) as unknown as WritableVector);
+    rows.restart();
     inChunk = 0;
   };
 
@@ -180,7 +173,7 @@ export async function openParquetWriter(
     },
     appendRow(values) {
       if (committed) throw new Error('appendRow after commit');
-      for (let i = 0; i < vectors.length; i++) vectors[i]!.setItem(inChunk, convert[i]!(values[i]));
+      rows.put(inChunk, values);
       for (let k = 0; k < textColumns.length; k++) {
         const v = values[textColumns[k]!];
         if (v === null || v === undefined) continue;
@@ -238,30 +231,104 @@ export function codePoints(text: string): number {
 /** Rows of one DuckDB data chunk (DuckDB's standard vector size). */
 const VECTOR_ROWS = 2048;
 
-/** The part of a DuckDB vector the writer uses. */
-interface WritableVector {
-  setItem(index: number, value: unknown): void;
-  flush(): void;
-}
-
 /** DuckDB's type of each storage kind. */
 function duckTypes(): Record<ValueKind, DuckDBType> {
   const { BIGINT, BOOLEAN, DOUBLE, VARCHAR } = duckdb();
   return { float: DOUBLE, int: BIGINT, bool: BOOLEAN, string: VARCHAR };
 }
 
-const CONVERT: Record<ValueKind, (v: CellValue) => number | bigint | boolean | string | null> = {
-  float: (v) => {
-    if (v === null || v === undefined) return null;
-    const x = typeof v === 'number' ? v : Number(v);
-    return Number.isNaN(x) ? null : x;
-  },
-  int: (v) => {
-    if (typeof v === 'bigint') return v;
-    if (typeof v === 'number') return Number.isInteger(v) ? BigInt(v) : null;
-    if (typeof v === 'boolean') return v ? 1n : 0n;
-    return null;
-  },
-  bool: (v) => (v === null || v === undefined ? null : typeof v === 'boolean' ? v : Boolean(v)),
-  string: (v) => (v === null || v === undefined ? null : typeof v === 'string' ? v : String(v)),
-};
+const KIND_CODE: Record<ValueKind, number> = { float: 0, int: 1, bool: 2, string: 3 };
+
+/**
+ * The rows of one DuckDB data chunk, column by column, kept in JavaScript arrays and copied into
+ * the chunk's vectors once it is full (text goes straight to its vector: DuckDB keeps its own
+ * copy). What @duckdb/node-api's vector classes do per value, without their cost: they set a
+ * value's validity with BigInt arithmetic (a heap allocation per value once a column had a null),
+ * which was most of the main thread's garbage in a derive run. A value becomes NULL as node-api's
+ * conversions make it: null or undefined in every column, NaN in a float column, a non-integer
+ * number in an int column.
+ */
+class ChunkColumns {
+  private readonly kinds: Int32Array;
+  private readonly floats: (Float64Array | null)[];
+  private readonly ints: (BigInt64Array | null)[];
+  private readonly bools: (Uint8Array | null)[];
+  /** Validity of each column's rows: bit r of word r >> 5 (DuckDB's uint64 words, little-endian). */
+  private readonly valid: Uint32Array[];
+  /** Columns with a null in the current chunk (their validity is copied). */
+  private readonly hasNull: Uint8Array;
+  private vectors: Vector[];
+  private readonly rawChunk: DataChunk;
+
+  constructor(columns: readonly ParquetColumn[], rawChunk: DataChunk) {
+    const n = columns.length;
+    this.rawChunk = rawChunk;
+    this.kinds = Int32Array.from(columns, (c) => KIND_CODE[c.kind]);
+    this.floats = columns.map((c) => (c.kind === 'float' ? new Float64Array(VECTOR_ROWS) : null));
+    this.ints = columns.map((c) => (c.kind === 'int' ? new BigInt64Array(VECTOR_ROWS) : null));
+    this.bools = columns.map((c) => (c.kind === 'bool' ? new Uint8Array(VECTOR_ROWS) : null));
+    this.valid = Array.from({ length: n }, () => new Uint32Array(VECTOR_ROWS / 32).fill(0xffffffff));
+    this.hasNull = new Uint8Array(n);
+    this.vectors = [];
+    this.restart();
+  }
+
+  /** After the chunk was reset: its vectors, and every row valid. */
+  restart(): void {
+    const b = duckdbBindings();
+    this.vectors = Array.from(this.kinds, (_, i) => b.data_chunk_get_vector(this.rawChunk, i));
+    for (let i = 0; i < this.kinds.length; i++) {
+      if (this.hasNull[i]) (this.valid[i] as Uint32Array).fill(0xffffffff);
+      this.hasNull[i] = 0;
+    }
+  }
+
+  /** Row `r` of the chunk: `values[i]` for column i. */
+  put(r: number, values: ArrayLike<CellValue>): void {
+    const kinds = this.kinds;
+    for (let i = 0; i < kinds.length; i++) {
+      const v = values[i];
+      switch (kinds[i]) {
+        case 0: {
+          const x = v === null || v === undefined ? NaN : typeof v === 'number' ? v : Number(v);
+          if (x === x) (this.floats[i] as Float64Array)[r] = x;
+          else this.setNull(i, r);
+          break;
+        }
+        case 1: {
+          const x = typeof v === 'bigint' ? v : typeof v === 'number' ? (Number.isInteger(v) ? BigInt(v) : null) : typeof v === 'boolean' ? (v ? 1n : 0n) : null;
+          if (x !== null) (this.ints[i] as BigInt64Array)[r] = x;
+          else this.setNull(i, r);
+          break;
+        }
+        case 2:
+          if (v === null || v === undefined) this.setNull(i, r);
+          else (this.bools[i] as Uint8Array)[r] = (typeof v === 'boolean' ? v : Boolean(v)) ? 1 : 0;
+          break;
+        default:
+          if (v === null || v === undefined) this.setNull(i, r);
+          else duckdbBindings().vector_assign_string_element(this.vectors[i] as Vector, r, typeof v === 'string' ? v : String(v));
+      }
+    }
+  }
+
+  private setNull(i: number, r: number): void {
+    const w = this.valid[i] as Uint32Array;
+    w[r >>> 5] = (w[r >>> 5] as number) & ~(1 << (r & 31));
+    this.hasNull[i] = 1;
+  }
+
+  /** Copies the first `count` rows of every column into the chunk's vectors. */
+  copyOut(count: number): void {
+    const b = duckdbBindings();
+    for (let i = 0; i < this.kinds.length; i++) {
+      const vector = this.vectors[i] as Vector;
+      const data = this.floats[i] ?? this.ints[i] ?? this.bools[i];
+      if (data) b.copy_data_to_vector(vector, 0, data.buffer as ArrayBuffer, 0, count * data.BYTES_PER_ELEMENT);
+      if (this.hasNull[i]) {
+        b.vector_ensure_validity_writable(vector);
+        b.copy_data_to_vector_validity(vector, 0, (this.valid[i] as Uint32Array).buffer as ArrayBuffer, 0, VECTOR_ROWS / 8);
+      }
+    }
+  }
+}

@@ -81,6 +81,58 @@ describe('openParquetWriter', () => {
     expect(a.equals(b)).toBe(true);
   });
 
+  it('converts values as DuckDB\'s node-api does: numbers, text, bigints and booleans across kinds', async () => {
+    const file = path.join(dir, 'kinds.parquet');
+    await writeRows(
+      file,
+      [
+        [7, 5n, '2.5', 1, -0],
+        ['x', true, Infinity, 0, -Infinity],
+        ['y', 2.5, 'abc', 'yes', 1e-320],
+        ['z', false, 3n, '', Number.MAX_VALUE],
+      ],
+      {},
+    );
+    const rows = await query(`SELECT * FROM '${file}'`);
+    expect(rows).toEqual([
+      { id: '7', row: 5n, x: 2.5, ok: true, 'odd "name", with comma': -0 },
+      { id: 'x', row: 1n, x: Infinity, ok: false, 'odd "name", with comma': -Infinity },
+      // A non-integer number is no BIGINT (null); text that is no number is NaN, so null.
+      { id: 'y', row: null, x: null, ok: true, 'odd "name", with comma': 1e-320 },
+      { id: 'z', row: 0n, x: 3, ok: false, 'odd "name", with comma': Number.MAX_VALUE },
+    ]);
+    expect(Object.is(rows[0]!['odd "name", with comma'], -0)).toBe(true);
+  });
+
+  it('keeps each chunk\'s nulls to itself: a chunk without nulls after one with many, and back', async () => {
+    // DuckDB takes rows 2048 at a time (one data chunk): rows 0–2047 have nulls in every column,
+    // rows 2048–4095 none, rows 4096–5000 nulls in one column only.
+    const n = 5001;
+    const file = path.join(dir, 'chunks.parquet');
+    const w = await openParquetWriter(file, COLUMNS, { scratchDir: path.join(dir, 'scratch-chunks') });
+    const isNull = (i: number, col: number): boolean => (i < 2048 ? (i + col) % 3 === 0 : i >= 4096 && col === 2 && i % 7 === 0);
+    const buf: CellValue[] = new Array(COLUMNS.length);
+    for (let i = 0; i < n; i++) {
+      buf[0] = isNull(i, 0) ? null : `o${i}`;
+      buf[1] = isNull(i, 1) ? null : i;
+      buf[2] = isNull(i, 2) ? Number.NaN : i / 4;
+      buf[3] = isNull(i, 3) ? undefined : i % 2 === 1;
+      buf[4] = isNull(i, 4) ? null : -i;
+      w.appendRow(buf);
+    }
+    await w.finish({});
+    const got = await query(`SELECT * FROM '${file}'`);
+    expect(got).toHaveLength(n);
+    const want = (i: number): Record<string, unknown> => ({
+      id: isNull(i, 0) ? null : `o${i}`,
+      row: isNull(i, 1) ? null : BigInt(i),
+      x: isNull(i, 2) ? null : i / 4,
+      ok: isNull(i, 3) ? null : i % 2 === 1,
+      'odd "name", with comma': isNull(i, 4) ? null : -i,
+    });
+    for (let i = 0; i < n; i++) if (JSON.stringify(got[i], (_, v) => (typeof v === 'bigint' ? `${v}n` : v)) !== JSON.stringify(want(i), (_, v) => (typeof v === 'bigint' ? `${v}n` : v))) expect([i, got[i]]).toEqual([i, want(i)]);
+  });
+
   it('keeps every row, in order, past one row group under a small memory limit', async () => {
     // 130,000 rows: more than one DuckDB row group (122,880 rows), so the transaction writes a
     // complete row group to the scratch file before COMMIT; 16MB is far below the rows' size.
