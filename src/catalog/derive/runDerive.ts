@@ -150,6 +150,7 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
   let report: RejectionReport | null = null;
   let deriver: BatchDeriver | null = null;
   let opening: Promise<void> | null = null;
+  let stopping: Promise<void> | null = null;
   try {
     // The workers first: each loads and warms up its modules while this thread opens the catalog
     // and the Parquet writers (a few hundred milliseconds that were spent before they started).
@@ -278,7 +279,9 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
     opts.signal?.throwIfAborted();
     medians.check(opts.config.implausibleMediansIntended === true);
 
-    await deriver.close();
+    // Every answer is in: the workers stop while the files are finished (awaited before the commit).
+    stopping = deriver.close();
+    stopping.catch(() => undefined);
     deriver = null;
     await report.close();
     report = null;
@@ -300,7 +303,8 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
       [READINGS_METADATA_KEY]: JSON.stringify(readingsMeta),
       ...parquetStandardKeys(readingsTableDoc(toolVersion()), rw.textLengths()),
     };
-    await rw.commit();
+    // Both scratch tables take their last rows at once (one DuckDB each); the catalog's is written after the summary.
+    for (const c of await Promise.allSettled([rw.commit(), catalogWriter.commit()])) if (c.status === 'rejected') throw c.reason;
     readingsMeta.summary = await summarizeReadingRows((sql) => rw.queryRows(sql), batchReadings.list.map((r) => r.id));
     const metadata = buildCatalogMetadata({
       config: opts.config,
@@ -327,6 +331,7 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
     const exports = exportTargets.map((t) => ({ format: t.format, path: set.stagedExtra(t.path) }));
     await exportCatalog(set.staged('catalog'), doc, exports);
     await writeFile(set.staged('meta'), `${JSON.stringify(metadata, null, 2)}\n`);
+    await stopping;
     // Files may have appeared at the output paths during the run: the same rules apply to them.
     await checkOutputTargets(opts.catalogPath, paths, opts.force ?? false, exportTargets);
     await set.commit();
@@ -342,6 +347,7 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
     };
   } catch (error) {
     await deriver?.close().catch(() => undefined);
+    await stopping?.catch(() => undefined);
     await report?.abandon();
     // A writer still opening is closed once it is open.
     await (opening as Promise<void> | null)?.catch(() => undefined);
