@@ -61,6 +61,13 @@ export async function openCsv(path: string, format: 'csv' | 'tsv', commentPrefix
 }
 
 /**
+ * Characters of text tokenized between two looks for complete chunks (see `chunks`). A slice may
+ * end anywhere, inside a field, a quoted line break, a CRLF or a surrogate pair: the tokenizer
+ * carries its state across pieces.
+ */
+export const TOKENIZE_SLICE_CHARS = 64 * 1024;
+
+/**
  * A {@link TableSource} over delimited text whose structure was already checked: `chunks()`
  * re-tokenizes the file, skips `skipRecords` header records and converts each cell to its
  * column's kind.
@@ -94,8 +101,13 @@ export function delimitedSource(
         builder.rowDone();
       });
       for await (const text of readTextChunks(path, path, limits)) {
-        tok.push(text);
-        yield* builder.takeReady();
+        // A read (1 MiB) is tokenized a slice at a time, and the chunks it completes go out
+        // between slices: the first rows reach the caller (a derive run's workers, waiting) once
+        // they are read, not once the whole read is tokenized (40–60 ms of a 20,000-row file).
+        for (let at = 0; at < text.length; at += TOKENIZE_SLICE_CHARS) {
+          tok.push(text.length <= TOKENIZE_SLICE_CHARS ? text : text.slice(at, at + TOKENIZE_SLICE_CHARS));
+          yield* builder.takeReady();
+        }
       }
       tok.end();
       yield* builder.finish();

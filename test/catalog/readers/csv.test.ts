@@ -3,6 +3,7 @@ import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { openTable } from '../../../src/catalog/readers/openTable.ts';
 import { TEXT_READ_BYTES } from '../../../src/catalog/readers/textChunks.ts';
+import { TOKENIZE_SLICE_CHARS } from '../../../src/catalog/readers/csv.ts';
 import { makeTmpDir, readAll } from './readerTestKit.ts';
 
 const { dir, cleanup } = makeTmpDir('csv');
@@ -74,6 +75,48 @@ describe('the CSV reader', () => {
     const fill = 'x'.repeat(TEXT_READ_BYTES - prefix.length - 2);
     const { columns } = await read(`${prefix}${fill}😀tail\n`);
     expect(columns[0]![0]).toBe(`${fill}😀tail`);
+  });
+
+  it('reads rows whole where a tokenizing slice ends inside a quoted line break, a CRLF or a surrogate pair', async () => {
+    // The reader tokenizes each read TOKENIZE_SLICE_CHARS characters at a time; place one of
+    // each awkward cut exactly on the first three slice ends, and read in chunks of 7 rows.
+    const L = TOKENIZE_SLICE_CHARS;
+    let text = 'id,text\r\n';
+    const want: [number, string][] = [];
+    let id = 0;
+    const row = (t: string, raw = t): void => {
+      want.push([++id, t]);
+      text += `${id},${raw}\r\n`;
+    };
+    /** Filler rows until `text` is exactly `length` characters long. */
+    const fillTo = (length: number): void => {
+      while (length - text.length > 120) row('y'.repeat(90));
+      const head = `${id + 1},`.length + 2;
+      row('z'.repeat(length - text.length - head));
+      expect(text.length).toBe(length);
+    };
+    // Fill to near the cut first, then with one row to the exact place (the row after it has id + 2).
+    // 1. Inside a quoted field, between the CR and the LF of its line break.
+    fillTo(L - 100);
+    fillTo(L - `${id + 2},"ab\r`.length);
+    row('ab\r\ncd', '"ab\r\ncd"');
+    // 2. Between the CR and the LF that end a record.
+    fillTo(2 * L - 100);
+    fillTo(2 * L - `${id + 2},end`.length - 1);
+    row('end');
+    // 3. Between the two halves of a surrogate pair, in an unquoted field.
+    fillTo(3 * L - 100);
+    fillTo(3 * L - `${id + 2},x`.length - 1);
+    row('x😀y');
+    fillTo(3 * L + 500);
+    expect(text.slice(L - 1, L + 1)).toBe('\r\n');
+    expect(text.slice(2 * L - 1, 2 * L + 1)).toBe('\r\n');
+    expect(text.charCodeAt(3 * L - 1)).toBe(0xd83d);
+    for (const chunkRows of [7, 100_000]) {
+      const { columns } = await read(text, 'csv', chunkRows);
+      expect(columns[0]).toEqual(want.map((w) => w[0]));
+      expect(columns[1]).toEqual(want.map((w) => w[1]));
+    }
   });
 
   it('treats empty and whitespace-only cells, and quoted empty strings, as null and trims unquoted cells', async () => {
