@@ -13,7 +13,7 @@ rows="${1:-20000}"; draws="${2:-1000}"; rounds="${3:-2}"
 work="$(mktemp -d)"; trap 'rm -rf "$work"' EXIT
 node "$root/scripts/build-cli.mjs" --if-stale
 
-median() { sort -n | awk '{a[NR]=$1} END {print a[int((NR+1)/2)]}'; }
+median() { sort -n | awk '{a[NR]=$1} END {print (NR % 2) ? a[(NR+1)/2] : (a[NR/2] + a[NR/2+1]) / 2}'; }
 secs() { local t0 t1; t0=$(date +%s.%N); "$@" >/dev/null 2>&1; t1=$(date +%s.%N); echo "$t1 - $t0" | bc -l; }
 
 echo "load average: $(cut -d' ' -f1-3 /proc/loadavg); cores: $(nproc)"
