@@ -142,12 +142,19 @@ export async function openParquetWriter(
   const textColumns = columns.flatMap((c, i) => (c.kind === 'string' ? [i] : []));
   const textLength = new Array<number>(textColumns.length).fill(0);
 
+  // Rows are gathered column-wise for a DuckDB data chunk (numbers in typed arrays on the JS side,
+  // copied in one call per column; see ChunkColumns), far cheaper than one native call per value.
   const flushChunk = (): void => {
     if (inChunk === 0) return;
     rows.copyOut(inChunk);
     if (inChunk < VECTOR_ROWS) chunk.rowCount = inChunk;
     app.appendDataChunk(chunk);
+    // The appender keeps what it is given in its own buffer (outside DuckDB's memory limit) until
+    // it holds 100 data chunks, i.e. 204,800 rows: hundreds of MB for a wide catalog. Flushing
+    // each chunk hands the rows to the table at once, where the memory limit holds them.
     app.flushSync();
+    // One chunk, reused: its native memory is invisible to the JS garbage collector, so fresh
+    // chunks would pile up unreleased.
     chunk.reset();
     chunk.rowCount = VECTOR_ROWS;
     rows.restart();
