@@ -30,8 +30,8 @@ export const WORKER_SEMI_SPACE_MB = 16;
  *   more than the wait, and the background threads competed with the workers for the two cores.
  *   V8 reads it when it makes an isolate: the workers compile in line, this thread as before.
  *   Per-thread CPU from /proc (2026-12-03, 20,000 objects × 1000 draws, one reading, alternating):
- *   V8's background threads 0.3 s against 0.9–1.0 s, the whole run 4.4–4.8 CPU s against
- *   5.0–5.4, workers unchanged within noise.
+ *   V8's background threads 0.3 s against 0.9–1.0 s, the whole run 4.7–4.8 CPU s against
+ *   5.0–5.4 (two pairs), workers unchanged within noise.
  *
  * Process-wide, as V8 flags are; a program that embeds runDerive gets them too.
  */

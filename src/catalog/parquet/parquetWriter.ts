@@ -266,6 +266,7 @@ class ChunkColumns {
   private readonly hasNull: Uint8Array;
   private vectors: Vector[];
   private readonly rawChunk: DataChunk;
+  private readonly bindings = duckdbBindings();
 
   constructor(columns: readonly ParquetColumn[], rawChunk: DataChunk) {
     const n = columns.length;
@@ -282,7 +283,7 @@ class ChunkColumns {
 
   /** After the chunk was reset: its vectors, and every row valid. */
   restart(): void {
-    const b = duckdbBindings();
+    const b = this.bindings;
     this.vectors = Array.from(this.kinds, (_, i) => b.data_chunk_get_vector(this.rawChunk, i));
     for (let i = 0; i < this.kinds.length; i++) {
       if (this.hasNull[i]) (this.valid[i] as Uint32Array).fill(0xffffffff);
@@ -314,7 +315,7 @@ class ChunkColumns {
           break;
         default:
           if (v === null || v === undefined) this.setNull(i, r);
-          else duckdbBindings().vector_assign_string_element(this.vectors[i] as Vector, r, typeof v === 'string' ? v : String(v));
+          else this.bindings.vector_assign_string_element(this.vectors[i] as Vector, r, typeof v === 'string' ? v : String(v));
       }
     }
   }
@@ -327,7 +328,7 @@ class ChunkColumns {
 
   /** Copies the first `count` rows of every column into the chunk's vectors. */
   copyOut(count: number): void {
-    const b = duckdbBindings();
+    const b = this.bindings;
     for (let i = 0; i < this.kinds.length; i++) {
       const vector = this.vectors[i] as Vector;
       const data = this.floats[i] ?? this.ints[i] ?? this.bools[i];
