@@ -86,7 +86,22 @@ args['expm1'] = (
     + [rng.uniform(-38.8, -1.04) for _ in range(60)]
     + [709.7, 709.78, 7.09782712893383973096e2, 0.3465735902799726, 0.34657359027997264, 0.3465735912322998, 13.5, 13.86, 14.2, 38.8, 39.6, 40, -1.4, 0.6931471805599453 + 1e-9, 1.0397207708399179 - 1e-9, -0.6931471805599453]
 )
-fns = {'log': f_log, 'log10': f_log10, 'log1p': f_log1p, 'exp': f_exp, 'expm1': f_expm1}
+# log10InPlace (src/core/math/log10.ts): both ends of each of its 128 intervals of the significand,
+# at exponents from -1022 to 1023, and draws of the kind it takes (widths, fluxes, values near 1).
+# Its own generator, so the cases above stay as they were.
+rng_table = random.Random(20261203)
+table = []
+for i in range(128):
+    for e in (-1022, -300, -60, -1, 0, 1, 9, 60, 1023):
+        start = (1 + i / 128) * 2.0**e
+        end = (1 + (i + 1) / 128) * 2.0**e
+        table += [start, math.nextafter(end, 0), start * (1 + rng_table.random() / 128)]
+table += [rng_table.uniform(300, 9000) for _ in range(400)]
+table += [1e-18 * rng_table.uniform(0.1, 30) for _ in range(400)]
+table += [1 + rng_table.uniform(-1, 1) * 2.0**-rng_table.randint(1, 52) for _ in range(400)]
+table += [math.exp(rng_table.uniform(-700, 700)) for _ in range(400)]
+args['log10_table'] = [x for x in table if math.isfinite(x) and x > 0]
+fns = {'log': f_log, 'log10': f_log10, 'log1p': f_log1p, 'exp': f_exp, 'expm1': f_expm1, 'log10_table': f_log10}
 out = {
     'source': 'Python 3.11 decimal module at 80 digits (exp, ln, log10 correctly rounded), rounded once to a double; residual = (true - double) / ulp(double)',
     'cases': {name: [[x, *ref(fns[name](x))] for x in xs] for name, xs in args.items()},
