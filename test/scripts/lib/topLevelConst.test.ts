@@ -1,6 +1,5 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-// @ts-expect-error a plain .mjs module of the build (no type declarations)
 import { topLevelConst } from '../../../scripts/lib/topLevelConst.mjs';
 
 type Result = { code: string; changed: number; kept: string[] };
