@@ -3,6 +3,7 @@ import type { DeriveSettings, ObjectInputs } from '../../core/derive/types.ts';
 import { deriveBatch } from './deriveBatch.ts';
 import type { BatchReadings, DeriveObjectFn } from './deriveBatch.ts';
 import type { PackedDerived } from './packedDerived.ts';
+import { getCosmology } from '../../core/cosmology/getCosmology.ts';
 
 /** What the pool hands each worker at start-up (`workerData`). */
 export interface DeriveWorkerData {
@@ -34,6 +35,7 @@ export type DeriveResultMessage = { seq: number; packed: PackedDerived } | { seq
  * objects × 1000 draws, alternating: 6.1–6.3 against 6.6–6.9 CPU s (transfer after detachOnce).
  */
 export function serveDeriveWorker(port: MessagePort, data: DeriveWorkerData, deriveObject: DeriveObjectFn): void {
+  prepareCosmology(data.settings);
   port.on('message', (task: DeriveTaskMessage) => {
     let answer: DeriveResultMessage;
     try {
@@ -43,4 +45,18 @@ export function serveDeriveWorker(port: MessagePort, data: DeriveWorkerData, der
     }
     port.postMessage(answer);
   });
+}
+
+/**
+ * Builds the run's cosmology tables (see cosmologyTables.ts) before the first batch: a worker is
+ * ready before the main thread has read and checked its first chunk, and the tables were tens of
+ * milliseconds of every worker's first batch. Batches are answered only after this returns.
+ * A cosmology that cannot be built is left for the first batch to report, as before.
+ */
+export function prepareCosmology(settings: DeriveSettings): void {
+  try {
+    getCosmology(settings.cosmology).ageGyr(settings.zSeed);
+  } catch {
+    // Reported by every object that needs it, as without this step.
+  }
 }

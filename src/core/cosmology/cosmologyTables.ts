@@ -1,6 +1,6 @@
 import type { Expansion } from './expansion.ts';
 import { cubicHermite } from './cubicHermite.ts';
-import { kronrod15 } from './gaussKronrod.ts';
+import { KRONROD15_POINTS, kronrod15Abscissae, kronrod15FromValues } from './gaussKronrod.ts';
 import { ageInHubbleTimes } from './hubbleIntegrals.ts';
 import { exp, expm1, log, log1p } from '../math/index.ts';
 
@@ -52,11 +52,23 @@ export function buildCosmologyTables(expansion: Expansion, name: string): Cosmol
     return 1 / e;
   };
   const lookbackStep = new Float64Array(n);
+  // Both integrals of an interval take 1/E at the same 15 nodes: evaluated once (E(z) with massive
+  // neutrinos is most of the tables' cost, and each derive worker builds them before its first object).
+  const nodes = new Float64Array(KRONROD15_POINTS);
+  const invEAt = new Float64Array(KRONROD15_POINTS);
+  const comovingAt = new Float64Array(KRONROD15_POINTS);
   for (let i = 0; i < n; i++) {
     const u0 = i * du;
     const u1 = u0 + du;
-    comoving[i + 1] = (comoving[i] as number) + kronrod15((u) => exp(u) * invE(u), u0, u1).value;
-    const step = kronrod15(invE, u0, u1).value;
+    kronrod15Abscissae(u0, u1, nodes);
+    for (let k = 0; k < KRONROD15_POINTS; k++) {
+      const u = nodes[k] as number;
+      const ie = invE(u);
+      invEAt[k] = ie;
+      comovingAt[k] = exp(u) * ie;
+    }
+    comoving[i + 1] = (comoving[i] as number) + kronrod15FromValues(comovingAt, u0, u1).value;
+    const step = kronrod15FromValues(invEAt, u0, u1).value;
     lookbackStep[i] = step;
     lookback[i + 1] = (lookback[i] as number) + step;
   }
