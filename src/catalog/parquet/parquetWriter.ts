@@ -40,7 +40,7 @@ export interface ParquetWriter {
    */
   queryRows(sql: string): Promise<Record<string, unknown>[]>;
   /**
-   * Writes every appended row, in insertion order, to `parquetPath` (zstd, single-threaded so
+   * Writes every appended row, in insertion order, to `parquetPath` (zstd level 1, single-threaded so
    * that the bytes depend only on the rows and the metadata), with `kvMetadata` as Parquet
    * key/value metadata, then closes the scratch database.
    */
@@ -204,7 +204,9 @@ export async function openParquetWriter(
           .map(([k, v]) => `${sqlString(k)}: ${sqlString(v)}`)
           .join(', ');
         const kvClause = kv ? `, KV_METADATA {${kv}}` : '';
-        await con.run(`COPY rows TO ${sqlString(parquetPath)} (FORMAT parquet, COMPRESSION zstd${kvClause})`);
+        // zstd at level 1 rather than DuckDB's 3: measured on a 20,000-row catalog of 46 columns,
+        // 40 against 53–68 ms of the run's last, single-threaded step, for a file 0.9 % larger.
+        await con.run(`COPY rows TO ${sqlString(parquetPath)} (FORMAT parquet, COMPRESSION zstd, COMPRESSION_LEVEL 1${kvClause})`);
       } finally {
         close();
       }

@@ -45,6 +45,13 @@ async function query(sql: string): Promise<Record<string, unknown>[]> {
 }
 
 describe('openParquetWriter', () => {
+  it('compresses every column chunk with zstd', async () => {
+    const file = path.join(dir, 'z.parquet');
+    await writeRows(file, Array.from({ length: 300 }, (_, i) => [`id${i}`, i, i / 7, i % 2 === 0, -i]), {});
+    const codecs = await query(`SELECT DISTINCT compression FROM parquet_metadata('${file}')`);
+    expect(codecs).toEqual([{ compression: 'ZSTD' }]);
+  });
+
   it('writes the rows in insertion order with their kinds, nulls for null, undefined and NaN', async () => {
     const file = path.join(dir, 'a.parquet');
     await writeRows(
