@@ -3,13 +3,14 @@
 #  1. `dawn-census --help` start-up (median of 7), beside `node -e ''` on the same machine;
 #  2. deriving a 20,000-object catalog with 1000 draws (four readings, the default, and one reading,
 #     the notebook's work), beside the numpy + astropy notebook way in ../shared/bench (same
-#     catalog, same draws), alternating twice.
+#     catalog, same draws), alternating, five rounds unless told otherwise.
 # Needs /usr/bin/python3 with numpy and astropy. Usage: scripts/bench-cli.sh [rows] [draws] [rounds]
-# (rounds: 2 unless given; on a noisy host run more and read the medians printed at the end).
+# (rounds: 5 unless given. The host's speed drifts by up to ±30 % within minutes, so one round says
+# little; read the medians printed at the end, and run more rounds on a noisy host).
 set -euo pipefail
 root="$(cd "$(dirname "$0")/.." && pwd)"
 bench="$root/../shared/bench"
-rows="${1:-20000}"; draws="${2:-1000}"; rounds="${3:-2}"
+rows="${1:-20000}"; draws="${2:-1000}"; rounds="${3:-5}"
 work="$(mktemp -d)"; trap 'rm -rf "$work"' EXIT
 node "$root/scripts/build-cli.mjs" --if-stale
 
