@@ -77,8 +77,12 @@ export function kronrod15(f: (x: number) => number, a: number, b: number): { val
 
 /**
  * Adaptive Gauss–Kronrod (7/15) integral of a smooth f over [a, b], bisecting until each
- * piece's Kronrod–Gauss difference is below `rtol` × |running total| (or 1e-300). Meant for
- * integrands without singularities inside [a, b]; throws if f returns a non-finite value.
+ * piece's Kronrod–Gauss difference is below `rtol` × |the first 15-point estimate over [a, b]|
+ * (or 1e-300), or the piece is `maxDepth` bisections deep. Meant for integrands without
+ * singularities inside [a, b] (the cosmology's and the survey volume's are smooth); throws if f
+ * returns a non-finite value. A peak narrower than the first rule's nodes are apart leaves that
+ * estimate near zero, and every piece is then bisected to `maxDepth`: the result is still right,
+ * but slow (a Gaussian of σ = 0.01 over [−1, 1.3]: about 3×10⁸ evaluations of f).
  */
 export function integrateAdaptive(f: (x: number) => number, a: number, b: number, rtol = 1e-13, maxDepth = 40): number {
   // An empty interval would evaluate f at its single point (possibly a 0/0 end) times h = 0.
