@@ -8,12 +8,13 @@
  */
 import { autocompletion, closeBrackets, closeBracketsKeymap, completionKeymap, type Completion } from '@codemirror/autocomplete';
 import { defaultKeymap, history, historyKeymap, indentWithTab, temporarilySetTabFocusMode } from '@codemirror/commands';
-import { PostgreSQL, sql } from '@codemirror/lang-sql';
+import { PostgreSQL, schemaCompletionSource, sql } from '@codemirror/lang-sql';
 import { bracketMatching, HighlightStyle, syntaxHighlighting } from '@codemirror/language';
 import { lintGutter, setDiagnostics } from '@codemirror/lint';
 import { EditorState, Prec } from '@codemirror/state';
 import { EditorView, keymap } from '@codemirror/view';
 import { tags } from '@lezer/highlight';
+import { anchorAtWord } from './anchorAtWord.ts';
 
 /** A catalog column as the completion list shows it. */
 export interface ColumnInfo {
@@ -57,12 +58,15 @@ export function columnCompletions(columns: readonly ColumnInfo[]): Completion[] 
 
 /** Replaces `textarea` (kept, hidden, for pages read without JavaScript) with the editor. */
 export function createSqlEditor(textarea: HTMLTextAreaElement, options: { columns: readonly ColumnInfo[]; table: string; run: () => void; onChange?: () => void }): SqlEditor {
-  const language = sql({
+  // The language with its keyword completion; the columns' completion is added below, anchored
+  // at the word being typed (see anchorAtWord).
+  const language = sql({ dialect: PostgreSQL, upperCaseKeywords: true });
+  const columnSource = schemaCompletionSource({
     dialect: PostgreSQL,
-    upperCaseKeywords: true,
     schema: { [options.table]: columnCompletions(options.columns) },
     defaultTable: options.table,
   });
+  const columns = language.language.data.of({ autocomplete: anchorAtWord(columnSource) });
   const runKeys = Prec.highest(
     keymap.of([
       { key: 'Mod-Enter', run: () => (options.run(), true) },
@@ -81,6 +85,7 @@ export function createSqlEditor(textarea: HTMLTextAreaElement, options: { column
         lintGutter(),
         keymap.of([...closeBracketsKeymap, ...defaultKeymap, ...historyKeymap, ...completionKeymap, indentWithTab]),
         language,
+        columns,
         syntaxHighlighting(highlight),
         EditorView.lineWrapping,
         theme,
