@@ -112,6 +112,35 @@ describe('visitor SQL', () => {
       await site.close();
     }
   });
+
+  it('on a phone shows a column\'s meaning below the completion list, covering none of its options', async () => {
+    const site = await openSite(browser, inject('siteUrl'));
+    try {
+      const { page } = site;
+      await page.setViewportSize({ width: 390, height: 844 });
+      await page.goto(new URL('query/', inject('siteUrl')).href);
+      await setSql(page, 'SELECT log_');
+      await page.keyboard.press('Control+Space');
+      const info = page.locator('.cm-completionInfo');
+      await info.waitFor({ timeout: 5_000 });
+      await expect(info.textContent()).resolves.toMatch(/\w/);
+      const list = await page.locator('.cm-tooltip-autocomplete').boundingBox();
+      const box = await info.boundingBox();
+      if (!list || !box) throw new Error('the completion list or its meaning panel has no box');
+      // Wholly below or wholly above the list, and on the screen.
+      expect(box.y >= list.y + list.height || box.y + box.height <= list.y, JSON.stringify({ list, box })).toBe(true);
+      expect(box.x).toBeGreaterThanOrEqual(0);
+      expect(box.x + box.width).toBeLessThanOrEqual(390);
+      // Moving through the list keeps it clear of the options.
+      await page.keyboard.press('ArrowDown');
+      await page.keyboard.press('ArrowDown');
+      await page.waitForTimeout(200);
+      const moved = await info.boundingBox();
+      expect(moved && (moved.y >= list.y + list.height || moved.y + moved.height <= list.y)).toBe(true);
+    } finally {
+      await site.close();
+    }
+  });
 });
 
 describe('every page', () => {

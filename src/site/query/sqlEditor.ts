@@ -1,6 +1,7 @@
 /**
  * The SQL editor of the workspace, on CodeMirror 6: SQL highlighting in the site's colours,
- * completion of SQL keywords and of the census columns (each with its unit and meaning),
+ * completion of SQL keywords and of the census columns (each with its unit and meaning, the
+ * meaning clear of the list on a narrow screen: see infoClearOfList),
  * the place of an error marked in the text, undo history, bracket matching.
  *
  * Keys: Ctrl/Cmd-Enter runs the query; Tab indents; Escape then Tab leaves the editor (so
@@ -15,6 +16,7 @@ import { EditorState, Prec } from '@codemirror/state';
 import { EditorView, keymap } from '@codemirror/view';
 import { tags } from '@lezer/highlight';
 import { anchorAtWord } from './anchorAtWord.ts';
+import { CLEAR_OF_LIST_CLASS, infoClearOfList } from './infoClearOfList.ts';
 
 /** A catalog column as the completion list shows it. */
 export interface ColumnInfo {
@@ -49,6 +51,8 @@ const theme = EditorView.theme({
   '.cm-scroller': { maxHeight: '22rem', overflow: 'auto' },
   '.cm-tooltip-autocomplete .cm-completionDetail': { fontStyle: 'normal', color: '#6b6b6b', marginLeft: '0.6em' },
   '.cm-completionInfo': { maxWidth: '22rem', fontFamily: 'var(--sans, sans-serif)', fontSize: '0.85rem' },
+  // On a narrow screen the meaning sits just below (or above) the list: a gap tells the two apart.
+  [`.cm-completionInfo.${CLEAR_OF_LIST_CLASS}`]: { marginTop: '2px', boxShadow: '0 2px 6px rgba(0, 0, 0, 0.15)' },
 });
 
 /** Completion entries for the catalog's columns: name, unit as the detail, meaning as the info. */
@@ -81,7 +85,7 @@ export function createSqlEditor(textarea: HTMLTextAreaElement, options: { column
         history(),
         closeBrackets(),
         bracketMatching(),
-        autocompletion({ icons: false }),
+        autocompletion({ icons: false, positionInfo: infoClearOfList }),
         lintGutter(),
         keymap.of([...closeBracketsKeymap, ...defaultKeymap, ...historyKeymap, ...completionKeymap, indentWithTab]),
         language,
