@@ -102,6 +102,19 @@ describe('readings', () => {
       const { page } = site;
       await page.goto(new URL('object/CDW-00009/', inject('siteUrl')).href);
       expect(await page.locator('[data-object-readings] [data-reading-value]').evaluateAll((rows) => rows.map((r) => (r as HTMLElement).dataset.readingValue))).toEqual(READINGS);
+      // On a phone the table scrolls sideways and each flag code stays on one line (a code broken
+      // letter by letter made a row hundreds of pixels tall).
+      await page.setViewportSize({ width: 390, height: 844 });
+      const codes = await page.locator('[data-object-readings] td code').evaluateAll((els) =>
+        els.map((e) => ({ text: e.textContent ?? '', lines: e.getClientRects().length, height: e.getBoundingClientRect().height, row: (e.closest('tr') as HTMLElement).getBoundingClientRect().height })),
+      );
+      expect(codes.length).toBeGreaterThan(0);
+      for (const c of codes) expect(c.lines, c.text).toBe(1);
+      const lineHeight = Math.max(...codes.map((c) => c.height));
+      const flagsPerRow = await page.locator('[data-object-readings] tbody tr').evaluateAll((rows) => rows.map((r) => r.querySelectorAll('td code').length));
+      // A row is no taller than its flags stacked one per line, plus its padding.
+      const rows = await page.locator('[data-object-readings] tbody tr').evaluateAll((rs) => rs.map((r) => r.getBoundingClientRect().height));
+      rows.forEach((h, i) => expect(h).toBeLessThanOrEqual(Math.max(3, flagsPerRow[i]!) * lineHeight * 1.6 + 24));
     } finally {
       await site.close();
     }
