@@ -165,6 +165,14 @@ describe('rough edges a newcomer hit', () => {
         await page.waitForTimeout(path === '' || path.startsWith('object/') ? 2500 : 500);
         const [scroll, client] = await page.evaluate(() => [document.documentElement.scrollWidth, document.documentElement.clientWidth]);
         expect(scroll, `page /${path} is ${scroll} px wide`).toBeLessThanOrEqual(client);
+        // The same with every fold open (the BibTeX block once ran off the screen), and no flag or
+        // column name in a table broken over lines (a column squeezed to a few letters a line).
+        await page.evaluate(() => document.querySelectorAll('details').forEach((d) => (d.open = true)));
+        await page.waitForTimeout(200);
+        const [openScroll] = await page.evaluate(() => [document.documentElement.scrollWidth]);
+        expect(openScroll, `page /${path} with its folds open is ${openScroll} px wide`).toBeLessThanOrEqual(client);
+        const broken = await page.evaluate(() => [...document.querySelectorAll('td code, th code')].filter((c) => c.getClientRects().length > 1).map((c) => c.textContent));
+        expect(broken, `page /${path}: codes broken over lines in a table`).toEqual([]);
       }
     } finally {
       await context.close();

@@ -137,6 +137,20 @@ describe('visitor SQL', () => {
       await page.waitForTimeout(200);
       const moved = await info.boundingBox();
       expect(moved && (moved.y >= list.y + list.height || moved.y + moved.height <= list.y)).toBe(true);
+      // The column reference, stacked on a phone (name and unit, the meaning under them), still filters.
+      await page.keyboard.press('Escape');
+      await page.locator('.columns-details summary').click();
+      await page.locator('[data-column-filter]').fill('redshift');
+      const shown = await page.locator('[data-column-ref] tbody tr').evaluateAll((rows) =>
+        rows.filter((r) => r.getBoundingClientRect().height > 0).map((r) => ({ search: (r as HTMLElement).dataset.search ?? '', top: r.querySelector('code')!.getBoundingClientRect().top, meaning: r.querySelector('td:last-child')!.getBoundingClientRect().top })),
+      );
+      const total = await page.locator('[data-column-ref] tbody tr').count();
+      expect(shown.length).toBeGreaterThan(0);
+      expect(shown.length).toBeLessThan(total);
+      for (const r of shown) {
+        expect(r.search).toContain('redshift');
+        expect(r.meaning).toBeGreaterThan(r.top);
+      }
     } finally {
       await site.close();
     }
