@@ -173,6 +173,22 @@ describe('rough edges a newcomer hit', () => {
         expect(openScroll, `page /${path} with its folds open is ${openScroll} px wide`).toBeLessThanOrEqual(client);
         const broken = await page.evaluate(() => [...document.querySelectorAll('td code, th code')].filter((c) => c.getClientRects().length > 1).map((c) => c.textContent));
         expect(broken, `page /${path}: codes broken over lines in a table`).toEqual([]);
+        // Nothing past the page's right margin either (a form's fieldsets once ran 6 px beyond it): every
+        // box ends inside main's content box, unless a scrolling or positioned box holds it.
+        const past = await page.evaluate(() => {
+          const main = document.querySelector('main')!;
+          const limit = main.getBoundingClientRect().right - parseFloat(getComputedStyle(main).paddingRight) + 1;
+          const out: string[] = [];
+          for (const e of main.querySelectorAll('*')) {
+            const r = e.getBoundingClientRect();
+            if (r.width === 0 || r.right <= limit || /absolute|fixed/.test(getComputedStyle(e).position)) continue;
+            let a = e.parentElement;
+            while (a && a !== main && getComputedStyle(a).overflowX === 'visible' && !/absolute|fixed/.test(getComputedStyle(a).position)) a = a.parentElement;
+            if (a === main) out.push(`${e.tagName.toLowerCase()} ends at ${Math.round(r.right)} px, the margin at ${Math.round(limit)}`);
+          }
+          return out.slice(0, 5);
+        });
+        expect(past, `page /${path}`).toEqual([]);
       }
     } finally {
       await context.close();
