@@ -166,12 +166,13 @@ describe('rough edges a newcomer hit', () => {
         const [scroll, client] = await page.evaluate(() => [document.documentElement.scrollWidth, document.documentElement.clientWidth]);
         expect(scroll, `page /${path} is ${scroll} px wide`).toBeLessThanOrEqual(client);
         // The same with every fold open (the BibTeX block once ran off the screen), and no flag or
-        // column name in a table broken over lines (a column squeezed to a few letters a line).
+        // column name in a table broken over lines (a column squeezed to a few letters a line); the
+        // column name under a quantity's name is a label and may wrap.
         await page.evaluate(() => document.querySelectorAll('details').forEach((d) => (d.open = true)));
         await page.waitForTimeout(200);
         const [openScroll] = await page.evaluate(() => [document.documentElement.scrollWidth]);
         expect(openScroll, `page /${path} with its folds open is ${openScroll} px wide`).toBeLessThanOrEqual(client);
-        const broken = await page.evaluate(() => [...document.querySelectorAll('td code, th code')].filter((c) => c.getClientRects().length > 1).map((c) => c.textContent));
+        const broken = await page.evaluate(() => [...document.querySelectorAll('td code, th code:not(.col-under)')].filter((c) => c.getClientRects().length > 1).map((c) => c.textContent));
         expect(broken, `page /${path}: codes broken over lines in a table`).toEqual([]);
         // Nothing past the page's right margin either (a form's fieldsets once ran 6 px beyond it): every
         // box ends inside main's content box, unless a scrolling or positioned box holds it.
@@ -189,6 +190,36 @@ describe('rough edges a newcomer hit', () => {
           return out.slice(0, 5);
         });
         expect(past, `page /${path}`).toEqual([]);
+      }
+    } finally {
+      await context.close();
+    }
+  });
+
+  it('fits an object page\'s value tables into their columns from 600 px up, in one column and in two', async () => {
+    // In the two-column layout the tables had 520–620 px and their units ran out of sight; the column
+    // name now goes under the quantity's name there, as on a phone.
+    const url = inject('siteUrl');
+    const [{ id }] = (await nodeQuery(inject('demoParquet'), `SELECT id FROM census WHERE log_mbh IS NOT NULL ORDER BY id LIMIT 1`)) as [{ id: string }];
+    const { objectSlug } = await import('../../src/site/objectSlug.ts');
+    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    try {
+      const page = await context.newPage();
+      await page.goto(new URL(`object/${objectSlug(id)}/`, url).href);
+      for (const width of [1600, 1280, 1200, 1199, 1000, 761, 600]) {
+        await page.setViewportSize({ width, height: 900 });
+        const wraps = await page.locator('table.values').evaluateAll((tables) =>
+          tables.map((t) => {
+            const wrap = t.closest('.table-wrap') as HTMLElement;
+            return { scroll: wrap.scrollWidth, client: wrap.clientWidth, underShown: getComputedStyle(t.querySelector('.col-under')!).display !== 'none' };
+          }),
+        );
+        expect(wraps.length).toBeGreaterThanOrEqual(2);
+        for (const w of wraps) expect(w.scroll, `at ${width} px: ${JSON.stringify(wraps)}`).toBeLessThanOrEqual(w.client);
+        // Where the name has a column of its own it is not shown twice.
+        const twoColumns = await page.evaluate(() => getComputedStyle(document.querySelector('.two-col')!).gridTemplateColumns.split(' ').length === 2);
+        expect(twoColumns).toBe(width >= 1200);
+        for (const w of wraps) expect(w.underShown).toBe(width >= 1200 || width <= 760);
       }
     } finally {
       await context.close();
