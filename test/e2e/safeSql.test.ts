@@ -151,6 +151,15 @@ describe('visitor SQL', () => {
         expect(r.search).toContain('redshift');
         expect(r.meaning).toBeGreaterThan(r.top);
       }
+      // In the side column of a wider screen the list stacks too (by the width of its box), and never
+      // needs sideways scrolling; on a full-width column it is a table again.
+      await page.locator('[data-column-filter]').fill('');
+      for (const width of [1000, 1280, 800]) {
+        await page.setViewportSize({ width, height: 900 });
+        const ref = await page.locator('.column-ref').evaluate((e) => ({ scroll: e.scrollWidth, client: e.clientWidth, stacked: getComputedStyle(e.querySelector('tbody tr')!).display === 'flex' }));
+        expect(ref.scroll, `${width} px`).toBeLessThanOrEqual(ref.client);
+        expect(ref.stacked, `${width} px`).toBe(width !== 800);
+      }
     } finally {
       await site.close();
     }
