@@ -101,9 +101,7 @@ export async function deriveCommand(
       ...extra,
       onProgress: (p) => reporter.progress(p),
       onRowProblem: (p) => reporter.problem(p),
-      onNotice: (text) => {
-        if (!args.quiet) err.write(`dawn-census: ${terminalText(text)}\n`);
-      },
+      onNotice: (text) => reporter.notice(text),
     });
   } finally {
     reporter.finish(displayPath(outputPaths(plan.outputPath).rejections));

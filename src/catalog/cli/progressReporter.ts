@@ -11,6 +11,8 @@ export const PROBLEMS_SHOWN = 20;
 export interface ProgressReporter {
   progress(p: DeriveProgress): void;
   problem(entry: RejectionEntry): void;
+  /** Prints a sentence of the run's on a line of its own (`dawn-census: …`), clearing the progress line first. */
+  notice(text: string): void;
   /** Clears the progress line and prints how many problems were not shown. */
   finish(reportPath: string): void;
 }
@@ -92,6 +94,11 @@ export function createProgressReporter(err: TextOut, opts: ProgressOptions): Pro
       if (opts.quiet || problems > PROBLEMS_SHOWN) return;
       clearLine();
       err.write(`${terminalText(`${opts.label}: ${entry.message}`)}\n`);
+    },
+    notice(text) {
+      if (opts.quiet) return;
+      clearLine();
+      err.write(`dawn-census: ${terminalText(text)}\n`);
     },
     finish(reportPath) {
       clearLine();

@@ -101,6 +101,12 @@ export class InputMedians {
   /** Throws CatalogError at the first implausible median, unless `intended`. */
   check(intended: boolean): void {
     if (intended) return;
+    const problem = this.problem();
+    if (problem) throw new CatalogError(problem);
+  }
+
+  /** The message of the first implausible median of the rows added so far, or null. */
+  problem(): string | null {
     for (const [line, m] of this.lum) {
       const med = m.median();
       const [lo, hi] = PLAUSIBLE_MEDIAN.logLumErgS;
@@ -113,9 +119,9 @@ export class InputMedians {
         : med < lo
           ? 'the values look like log10 of the luminosity (log(erg/s))'
           : `the luminosities look like they are in units of 1e${-shift} erg s-1`;
-      throw new CatalogError(
+      return (
         `${this.label}: column ${col.label}, read in ${col.unitLabel}: the median broad-line luminosity is ${fmt(med)} erg/s, ` +
-          `outside 1e${lo}–1e${hi}: ${likely}; set columns.${col.name}.unit in the config, or implausible_medians_intended: true if the values are right`,
+        `outside 1e${lo}–1e${hi}: ${likely}; set columns.${col.name}.unit in the config, or implausible_medians_intended: true if the values are right`
       );
     }
     for (const [line, m] of this.fwhm) {
@@ -130,10 +136,11 @@ export class InputMedians {
             ? 'the widths look like cm/s'
             : 'the widths look like m/s'
           : 'the widths look like they are in 1000 km/s or in Å';
-      throw new CatalogError(
+      return (
         `${this.label}: column ${col.label}, read in ${col.unitLabel}: the median FWHM is ${fmt(med)} km/s, outside ${lo}–${hi} km/s: ` +
-          `${likely}; set columns.${col.name}.unit in the config, or implausible_medians_intended: true if the values are right`,
+        `${likely}; set columns.${col.name}.unit in the config, or implausible_medians_intended: true if the values are right`
       );
     }
+    return null;
   }
 }

@@ -81,7 +81,17 @@ export interface DeriveRunOptions {
   onNotice?: (text: string) => void;
   /** A worker batch not answered within this many milliseconds ends the run (default: see workerPool). */
   batchTimeoutMs?: number;
+  /** Rows after which the input medians are looked at early (default {@link EARLY_MEDIAN_ROWS}). */
+  earlyMedianRows?: number;
 }
+
+/**
+ * Rows after which derive looks at the input medians (the check that stops a run whose fluxes or
+ * widths are in the wrong unit) and, if they are already implausible, says so at once as a notice,
+ * when at least as many rows are still to come: a wrong unit in a large catalog is then seen in
+ * seconds, not at the end. The run still decides on the whole catalog's medians at the end.
+ */
+export const EARLY_MEDIAN_ROWS = 10_000;
 
 /** Progress of a run. */
 export interface DeriveProgress {
@@ -198,6 +208,9 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
     const label = displayPath(src.path);
     const duplicates = new DuplicateIds(label, plan.seenIds);
     const medians = new InputMedians(plan, label);
+    const intended = opts.config.implausibleMediansIntended === true;
+    const earlyRows = opts.earlyMedianRows ?? EARLY_MEDIAN_ROWS;
+    let earlyLooked = false;
     const counts = { rows: 0, derived: 0, flagged: 0, problems: 0 };
     const values: CellValue[] = new Array<CellValue>(columns.length);
     const queue: PendingChunk[] = [];
@@ -246,6 +259,18 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
         });
       }
       counts.rows += chunk.rows.length;
+      if (!earlyLooked && counts.rows >= earlyRows) {
+        earlyLooked = true;
+        const problem = intended ? null : medians.problem();
+        const rowsLeft = rowsTotal === undefined ? Infinity : rowsTotal - counts.rows;
+        if (problem && rowsLeft >= earlyRows) {
+          const n = (x: number): string => x.toLocaleString('en-US');
+          opts.onNotice?.(
+            `${problem} (from the first ${n(counts.rows)}${rowsTotal === undefined ? '' : ` of ${n(rowsTotal)}`} rows). ` +
+              'The run goes on, and stops at the end with this message if the whole catalog gives it too; Ctrl-C stops it now.',
+          );
+        }
+      }
       await report!.flushed();
       opts.onProgress?.({ rowsDone: counts.rows, ...(rowsTotal !== undefined ? { rowsTotal } : {}), elapsedMs: performance.now() - started });
     };
@@ -277,7 +302,7 @@ export async function runDerive(opts: DeriveRunOptions): Promise<DeriveSummary> 
       await writeChunk(queue.shift()!);
     }
     opts.signal?.throwIfAborted();
-    medians.check(opts.config.implausibleMediansIntended === true);
+    medians.check(intended);
 
     // Every answer is in: the workers stop while the files are finished (awaited before the commit).
     stopping = deriver.close();

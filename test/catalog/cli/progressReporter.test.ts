@@ -44,11 +44,26 @@ describe('the progress reporter', () => {
     expect(chunks[PROBLEMS_SHOWN]).toBe('… and 5 more row problems (all are in cat.rejections.csv)\n');
   });
 
+  it('prints a notice on a line of its own, clearing the progress line on a terminal first, with control characters escaped', () => {
+    const { chunks, out } = sink(true);
+    let t = 0;
+    const r = createProgressReporter(out, { label: 'cat.csv', quiet: false, now: () => t });
+    t = 1000;
+    r.progress({ rowsDone: 250, rowsTotal: 1000, elapsedMs: 1000 });
+    r.notice('the widths look like m/s\x1b[31m');
+    expect(chunks.slice(1)).toEqual(['\r\x1b[K', 'dawn-census: the widths look like m/s\\x1B[31m\n']);
+    // Nothing to clear when no progress line is shown.
+    const plain = sink(false);
+    createProgressReporter(plain.out, { label: 'cat.csv', quiet: false }).notice('a note');
+    expect(plain.chunks).toEqual(['dawn-census: a note\n']);
+  });
+
   it('prints nothing when quiet', () => {
     const { chunks, out } = sink(true);
     const r = createProgressReporter(out, { label: 'cat.csv', quiet: true });
     r.progress({ rowsDone: 1000, rowsTotal: 1000, elapsedMs: 10 });
     for (let i = 1; i <= 30; i++) r.problem(problem(i));
+    r.notice('a note');
     r.finish('cat.rejections.csv');
     expect(chunks).toEqual([]);
   });

@@ -152,3 +152,54 @@ describe('runDerive', () => {
     expect(await readdir(dir)).toEqual(['clash.csv']);
   });
 });
+
+describe('runDerive, the early look at the input medians', () => {
+  /** `rows` rows whose widths are `fwhm` (in m/s when 2e6: 1000 times the plausible km/s). */
+  function catalog(rows: number, fwhm: number): string {
+    const lines = ['id,z,fwhm_halpha,fwhm_halpha_err'];
+    for (let i = 0; i < rows; i++) lines.push(`E-${i},${(5 + (i % 30) / 10).toFixed(1)},${fwhm + 10 * (i % 7)},${fwhm / 10}`);
+    return lines.join('\n');
+  }
+  async function run(rows: number, fwhm: number, intended = false): Promise<{ notices: string[]; error: unknown }> {
+    const input = path.join(dir, `cat-${rows}-${fwhm}.csv`);
+    await writeFile(input, catalog(rows, fwhm));
+    const notices: string[] = [];
+    let error: unknown = null;
+    try {
+      await runDerive({
+        catalogPath: input,
+        config: { ...config(16), implausibleMediansIntended: intended },
+        outputPath: path.join(dir, `out-${rows}-${fwhm}-${intended}`, 'cat.parquet'),
+        threads: 1,
+        deriveModule: STAND_IN,
+        chunkRows: 50,
+        earlyMedianRows: 100,
+        onNotice: (t) => notices.push(t),
+      });
+    } catch (e) {
+      error = e;
+    }
+    return { notices, error };
+  }
+
+  it('says after the first rows what will stop the run at the end, with the same message', async () => {
+    const { notices, error } = await run(300, 2e6);
+    expect(error).toBeInstanceOf(CatalogError);
+    const final = (error as Error).message;
+    expect(final).toMatch(/column fwhm_halpha, read in km\/s: the median FWHM is .* km\/s, outside 300–20000 km\/s: the widths look like m\/s/);
+    expect(notices).toHaveLength(1);
+    expect(notices[0]).toBe(`${final} (from the first 100 of 300 rows). The run goes on, and stops at the end with this message if the whole catalog gives it too; Ctrl-C stops it now.`);
+  });
+
+  it('says nothing early when too few rows are left to be worth it, when the medians are plausible, or when they are intended', async () => {
+    const short = await run(150, 2e6);
+    expect(short.error).toBeInstanceOf(CatalogError);
+    expect(short.notices).toEqual([]);
+    const fine = await run(300, 2000);
+    expect(fine.error).toBeNull();
+    expect(fine.notices).toEqual([]);
+    const intended = await run(300, 2e6, true);
+    expect(intended.error).toBeNull();
+    expect(intended.notices).toEqual([]);
+  });
+});
