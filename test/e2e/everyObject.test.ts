@@ -6,7 +6,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { launchBrowser } from './browser.ts';
-import { nodeQuery, openSite } from './sitePage.ts';
+import { nodeQuery, openSite, runSql } from './sitePage.ts';
 
 const summaryTotal = (page: Page) =>
   page.waitForFunction(() => document.querySelector('[data-object-list]')?.getAttribute('aria-busy') === null && document.querySelector('[data-list-summary]')?.getAttribute('data-total'), undefined, { timeout: 60_000 }).then(async () => Number(await page.locator('[data-list-summary]').getAttribute('data-total')));
@@ -193,6 +193,53 @@ describe('rough edges a newcomer hit', () => {
       }
     } finally {
       await context.close();
+    }
+  });
+
+  it('keeps a row of the object list and of a query\'s result one line tall on a phone, however many flags it has', async () => {
+    // Wrapped in a column a third of the screen wide, five flags made a row 120 px tall, its numbers
+    // on the first line and the flags off to the side; now the flags stay on one line and the table scrolls.
+    const url = inject('siteUrl');
+    const [most] = (await nodeQuery(inject('demoParquet'), `SELECT id, flags FROM census ORDER BY length(flags) DESC, id LIMIT 1`)) as [{ id: string; flags: string }];
+    expect(most.flags.split(',').length).toBeGreaterThanOrEqual(4);
+    // Lines of text in each row's flags cell, and in its tallest cell.
+    const measure = (page: Page, table: string) =>
+      page.evaluate((sel) => {
+        const lines = (e: Element): number => {
+          const r = document.createRange();
+          r.selectNodeContents(e);
+          return new Set([...r.getClientRects()].map((b) => Math.round(b.top))).size;
+        };
+        return [...document.querySelectorAll<HTMLTableRowElement>(`${sel} tbody tr`)].map((tr) => ({
+          flagLines: [...tr.querySelectorAll('td.flags-cell')].map(lines),
+          mostLines: Math.max(...[...tr.cells].map(lines)),
+        }));
+      }, table);
+    const site = await openSite(browser, url);
+    try {
+      const { page } = site;
+      await page.setViewportSize({ width: 390, height: 844 });
+      await page.goto(new URL('objects/', url).href);
+      await page.locator('#list-q').fill(most.id);
+      await page.waitForFunction((id) => [...document.querySelectorAll('[data-object-list] tbody tr')].some((r) => r.textContent?.includes(id)), most.id);
+      const list = await measure(page, '[data-object-list] table');
+      expect(list.length).toBeGreaterThan(0);
+      for (const r of list) {
+        expect(r.flagLines, `object list: ${JSON.stringify(list)}`).toEqual([1]);
+        expect(r.mostLines, `object list: ${JSON.stringify(list)}`).toBe(1);
+      }
+
+      await page.goto(new URL('query/', url).href);
+      await runSql(page, `SELECT id, z, log_mbh, flags FROM census ORDER BY length(flags) DESC, id LIMIT 20`);
+      const result = await measure(page, '[data-result-table] table');
+      expect(result).toHaveLength(20);
+      for (const r of result) {
+        expect(r.flagLines, `query result: ${JSON.stringify(result)}`).toEqual([1]);
+        expect(r.mostLines, `query result: ${JSON.stringify(result)}`).toBe(1);
+      }
+      expect(site.errors).toEqual([]);
+    } finally {
+      await site.close();
     }
   });
 

@@ -120,6 +120,7 @@ export class ResultTable {
     const tbody = document.createElement('tbody');
     const numeric = rs.types.map(isNumericType);
     const idCol = rs.names.findIndex((n) => n.toLowerCase() === 'id');
+    const flagsCol = rs.names.findIndex((n) => n.toLowerCase() === 'flags');
     // a bound is written with '<' or '>' when the result holds its _is_limit column or the flags
     const limitSources = rs.names.map((name) => {
       const marker = LIMIT_COLUMN[name] ?? (name === 'log_edd_ratio' ? 'log_edd_ratio_is_limit' : undefined);
@@ -148,6 +149,7 @@ export class ResultTable {
             ? limitMark(rs.names[c]!, { ...(src.m >= 0 ? { [src.marker]: rs.columns[src.m]![r] } : {}), ...(src.f >= 0 ? { flags: rs.columns[src.f]![r] } : {}) })
             : '';
           td.textContent = `${mark ? `${mark} ` : ''}${formatValue(rs.names[c]!, v)}`;
+          if (c === flagsCol) td.classList.add('flags-cell');
           if (v === null || v === undefined) td.classList.add('null');
         }
         tr.append(td);
