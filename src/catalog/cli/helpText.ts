@@ -2,6 +2,7 @@
 export const MAIN_HELP = `dawn-census — derive black-hole properties for a catalog of broad-line AGN candidates
 
 Usage:
+  dawn-census init [<catalog>] [-o <config>]   write a config to start from, its columns mapped
   dawn-census derive <catalog> [options]   derive a catalog into Parquet with provenance
   dawn-census site build -c <config> [--out <dir>]   build the static site of a derived catalog
   dawn-census site preview [-c <config>] [--out <dir>] [--port <n>]   serve a built site locally
@@ -9,7 +10,7 @@ Usage:
   dawn-census --help | -h                  this help
   dawn-census --version | -V               the version
 
-Run "dawn-census derive --help" for the options of derive.
+Run "dawn-census <command> --help" for a command's options (init, derive, site, population).
 `;
 
 /** `dawn-census derive --help`. */

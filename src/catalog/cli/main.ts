@@ -17,7 +17,7 @@ import { terminalText } from '../../shared/text/terminalText.ts';
 export type MainOptions = Pick<DeriveRunOptions, 'deriveModule' | 'chunkRows' | 'batchTimeoutMs'>;
 
 /**
- * The `dawn-census` command: `derive`, `--help`, `--version`. Returns the exit status
+ * The `dawn-census` command: `init`, `derive`, `site`, `population`, `--help`, `--version`. Returns the exit status
  * (see EXIT): 0 done, 1 unexpected failure, 2 catalog or config unusable, 64 wrong usage.
  * Never throws: every error becomes one line on stderr, its control characters shown as escapes
  * (a catalog value or file name cannot recolour the terminal or add lines).
@@ -38,6 +38,16 @@ export async function main(argv: readonly string[], io: CliIo = processIo(), opt
       return EXIT.ok;
     }
     if (command === 'site') return await siteMain(rest, io);
+    if (command === 'init') {
+      const { INIT_HELP, initCommand, parseInitArgs } = await import('./initCommand.ts');
+      const iargs = parseInitArgs(rest);
+      if (iargs.help) {
+        io.stdout.write(INIT_HELP);
+        return EXIT.ok;
+      }
+      await initCommand(iargs, io.stderr);
+      return EXIT.ok;
+    }
     if (command === 'population') {
       const pargs = parsePopulationArgs(rest);
       if (pargs.help) {
