@@ -30,6 +30,14 @@ test ! -e node_modules/tsx/package.json || echo "pack: note: tsx is present (pul
 
 npx --no-install dawn-census --version
 cp "$root/data-demo/catalog.csv" catalog.csv
+# A starting config from the catalog alone: it loads, names the installed schema, and derives.
+printf 'Name,z_spec,FWHM_Ha,e_FWHM_Ha,F_Ha,F_Ha_err\nA-1,5.1,2100,200,3.1e-17,3e-18\nA-2,6.2,1800,150,2.2e-17,2e-18\nA-3,7.3,2500,300,1.5e-17,2e-18\n' > mine.csv
+npx --no-install dawn-census init mine.csv -o started.config.yaml
+schema="$(sed -n 's/^# yaml-language-server: \$schema=//p' started.config.yaml)"
+test -f "$schema" || { echo "pack: init's schema path $schema does not exist" >&2; exit 1; }
+npx --no-install dawn-census derive -c started.config.yaml -o started.parquet --draws 10 --quiet
+test -f started.parquet
+echo "pack: init wrote a config from a catalog with other column names, naming the installed schema ($schema), and derive ran with it"
 sed 's#^site: { base: / }#site: { base: /census/ }#' "$root/data-demo/census.config.yaml" > census.config.yaml
 grep -q '^site: { base: /census/ }' census.config.yaml
 npx --no-install dawn-census derive -c census.config.yaml --draws 100 --quiet
