@@ -4,6 +4,8 @@ import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { loadConfig } from '../config/loadConfig.ts';
 import { ConfigError } from '../config/ConfigError.ts';
+import { publicationGaps } from '../config/publicationGaps.ts';
+import { terminalText } from '../../shared/text/terminalText.ts';
 import { defaultOutputPath } from '../derive/outputPaths.ts';
 import { serveStatic } from '../serve/staticServer.ts';
 import type { TextOut } from './cliIo.ts';
@@ -82,6 +84,8 @@ export async function siteBuild(args: SiteArgs, log: TextOut): Promise<{ out: st
   if (!existsSync(catalog)) throw new ConfigError(`${label}: the catalog ${catalog} does not exist yet: run dawn-census derive -c ${args.config} first`);
   const out = path.resolve(args.out);
   const base = normalBase(config.site.base);
+  const gaps = publicationGaps(config, label);
+  if (gaps) log.write(`${terminalText(gaps)}\n`);
   // Astro's build reads the catalog, base and output folder from these (see astro.config.mjs).
   const saved = { CENSUS_CATALOG: process.env.CENSUS_CATALOG, CENSUS_BASE: process.env.CENSUS_BASE, CENSUS_OUT_DIR: process.env.CENSUS_OUT_DIR };
   Object.assign(process.env, { CENSUS_CATALOG: catalog, CENSUS_BASE: base, CENSUS_OUT_DIR: out });
