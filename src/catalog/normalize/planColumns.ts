@@ -65,7 +65,8 @@ export function planColumns(source: TableSource, config: CensusConfig): ColumnPl
     if (found.has(req)) continue;
     const near = closestNames(req, names);
     fail(
-      `no ${req} column (looked for "${req}" in any case; map another column with columns.${req}.source in the config)` +
+      `no ${req} column (looked for "${req}" in any case; map another column with columns.${req}.source in ` +
+        (config.configPath ? 'the config)' : `a config: dawn-census init ${label} writes one, with the columns it recognises mapped)`) +
         (near.length ? `; close matches: ${near.join(', ')}` : ''),
     );
   }

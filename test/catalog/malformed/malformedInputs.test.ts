@@ -254,13 +254,13 @@ const catalogCases: CatalogCase[] = [
     what: 'a catalog without an id column',
     files: { 'noid.csv': csv('name,z,fwhm_halpha', 'A,5,2000') },
     catalog: 'noid.csv',
-    message: 'noid.csv: no id column (looked for "id" in any case; map another column with columns.id.source in the config)',
+    message: 'noid.csv: no id column (looked for "id" in any case; map another column with columns.id.source in a config: dawn-census init noid.csv writes one, with the columns it recognises mapped)',
   },
   {
     what: 'a catalog without a z column',
     files: { 'noz.csv': csv('id,redshift_z,fwhm_halpha', 'A,5,2000') },
     catalog: 'noz.csv',
-    message: 'noz.csv: no z column (looked for "z" in any case; map another column with columns.z.source in the config)',
+    message: 'noz.csv: no z column (looked for "z" in any case; map another column with columns.z.source in a config: dawn-census init noz.csv writes one, with the columns it recognises mapped)',
   },
   {
     what: 'duplicate ids',

@@ -110,14 +110,17 @@ describe('planColumns', () => {
     expect(plan.canonical[2]?.def.ucd).toBe('spect.line.width');
   });
 
-  it('fails when there is no id column', () => {
+  it('fails when there is no id column, naming init when no config was given', () => {
     expect(failure([f('z'), s('name')])).toBe(
+      'catalog.csv: no id column (looked for "id" in any case; map another column with columns.id.source in a config: dawn-census init catalog.csv writes one, with the columns it recognises mapped)',
+    );
+    expect(failure([f('z'), s('name')], withColumns({}))).toBe(
       'catalog.csv: no id column (looked for "id" in any case; map another column with columns.id.source in the config)',
     );
   });
 
   it('fails when there is no z column, suggesting close names', () => {
-    expect(failure([s('id'), f('zz')])).toBe(
+    expect(failure([s('id'), f('zz')], withColumns({}))).toBe(
       'catalog.csv: no z column (looked for "z" in any case; map another column with columns.z.source in the config); close matches: zz',
     );
   });
