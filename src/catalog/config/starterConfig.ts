@@ -6,6 +6,9 @@ import { escapeControls } from '../../shared/text/escapeControls.ts';
 import type { ColumnGuesses } from './guessColumns.ts';
 import { BOLOMETRIC_IDS, CALIBRATION_IDS_BY_LINE, COSMOLOGY_IDS, DUST_CURVE_IDS, HBETA_WITHOUT_CONTINUUM_IDS, LOCAL_RELATION_IDS } from './knownIds.ts';
 
+/** Pass-through columns named in the starter config's comment; a wide catalog's others are counted. */
+export const PASSTHROUGH_LISTED = 40;
+
 /** Kinds of canonical column whose unit a starter config mentions when the file gives none. */
 const UNIT_NOTE_KINDS: ReadonlySet<string> = new Set(['velocity', 'flux', 'luminosity']);
 
@@ -149,6 +152,10 @@ function columnsBlock(cat: StarterInput['catalog']): string[] {
     const col = CANONICAL_BY_NAME.get(b.canonical)!;
     if (note) out.push(mappingLine('  # ', `${b.canonical}: { unit: ${JSON.stringify(col.unitText)} }`, `no unit in the file: read as ${col.unitText}; set yours if not`));
   }
-  if (g.passthrough.length > 0) out.push(`# Passed through unchanged: ${g.passthrough.map(inComment).join(', ')}.`);
+  if (g.passthrough.length > 0) {
+    const shown = g.passthrough.slice(0, PASSTHROUGH_LISTED).map(inComment).join(', ');
+    const more = g.passthrough.length - PASSTHROUGH_LISTED;
+    out.push(`# Passed through unchanged: ${shown}${more > 0 ? `, and ${more} more` : ''}.`);
+  }
   return out;
 }

@@ -3,7 +3,7 @@ import { parse } from 'yaml';
 import { guessColumns } from '../../../src/catalog/config/guessColumns.ts';
 import { parseConfig } from '../../../src/catalog/config/loadConfig.ts';
 import { defaultSettings } from '../../../src/catalog/config/defaultConfig.ts';
-import { starterConfig, type StarterInput } from '../../../src/catalog/config/starterConfig.ts';
+import { PASSTHROUGH_LISTED, starterConfig, type StarterInput } from '../../../src/catalog/config/starterConfig.ts';
 import { checkUnit } from '../../../src/catalog/config/checkUnit.ts';
 import { CANONICAL_BY_NAME } from '../../../src/catalog/normalize/canonicalColumns.ts';
 
@@ -63,6 +63,15 @@ describe('starterConfig', () => {
       const t = starterConfig({ ...BASE, catalog: { path: 'c.csv', format: 'csv', columns: [{ name }], guesses: { byName: [], guesses: [{ canonical, source: name, by: 'name' }], ambiguous: [], passthrough: [] } } });
       expect((parse(t) as { columns: Record<string, { source: unknown }> }).columns[canonical]!.source).toBe(name);
     }
+  });
+
+  it('names the first pass-through columns of a wide catalog and counts the rest', () => {
+    const wide = Array.from({ length: PASSTHROUGH_LISTED + 3 }, (_, i) => ({ name: `c${i}` }));
+    const text = withCatalog([{ name: 'id' }, { name: 'z' }, ...wide]);
+    const line = text.split('\n').find((l) => l.startsWith('# Passed through unchanged:'))!;
+    expect(line).toContain(`c0, c1,`);
+    expect(line).toContain(`c${PASSTHROUGH_LISTED - 1}, and 3 more.`);
+    expect(line).not.toContain(`c${PASSTHROUGH_LISTED},`);
   });
 
   it('writes no line with blanks at its end', () => {
