@@ -1,12 +1,13 @@
 import { existsSync } from 'node:fs';
+import { readFile } from 'node:fs/promises';
 import { register } from 'node:module';
 import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { loadConfig } from '../config/loadConfig.ts';
 import { ConfigError } from '../config/ConfigError.ts';
-import { publicationGaps } from '../config/publicationGaps.ts';
+import { PUBLICATION_FIELDS, publicationNotes, type PublicationText } from '../config/publicationGaps.ts';
 import { terminalText } from '../../shared/text/terminalText.ts';
-import { defaultOutputPath } from '../derive/outputPaths.ts';
+import { defaultOutputPath, outputPaths } from '../derive/outputPaths.ts';
 import { serveStatic } from '../serve/staticServer.ts';
 import type { TextOut } from './cliIo.ts';
 import { UsageError } from './UsageError.ts';
@@ -84,8 +85,9 @@ export async function siteBuild(args: SiteArgs, log: TextOut): Promise<{ out: st
   if (!existsSync(catalog)) throw new ConfigError(`${label}: the catalog ${catalog} does not exist yet: run dawn-census derive -c ${args.config} first`);
   const out = path.resolve(args.out);
   const base = normalBase(config.site.base);
-  const gaps = publicationGaps(config, label);
-  if (gaps) log.write(`${terminalText(gaps)}\n`);
+  const metaPath = outputPaths(catalog).meta;
+  const recorded = await readRecordedPublication(metaPath);
+  for (const note of publicationNotes(recorded, config, { config: label, meta: path.basename(metaPath) })) log.write(`${terminalText(note)}\n`);
   // Astro's build reads the catalog, base and output folder from these (see astro.config.mjs).
   const saved = { CENSUS_CATALOG: process.env.CENSUS_CATALOG, CENSUS_BASE: process.env.CENSUS_BASE, CENSUS_OUT_DIR: process.env.CENSUS_OUT_DIR };
   Object.assign(process.env, { CENSUS_CATALOG: catalog, CENSUS_BASE: base, CENSUS_OUT_DIR: out });
@@ -103,6 +105,18 @@ export async function siteBuild(args: SiteArgs, log: TextOut): Promise<{ out: st
   }
   log.write('');
   return { out, base };
+}
+
+/** The publication fields recorded in a catalog's `.meta.json` (none when it cannot be read: the site build then says more). */
+async function readRecordedPublication(metaPath: string): Promise<PublicationText> {
+  try {
+    const meta = JSON.parse(await readFile(metaPath, 'utf8')) as Record<string, unknown>;
+    const out: PublicationText = {};
+    for (const k of PUBLICATION_FIELDS) if (typeof meta[k] === 'string') out[k] = meta[k] as string;
+    return out;
+  } catch {
+    return {};
+  }
 }
 
 /** Serves a built site folder at its base (Range requests included) until the process is stopped. */
