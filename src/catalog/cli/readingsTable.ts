@@ -29,7 +29,7 @@ export function readingsTable(summaries: readonly ReadingSummary[], lightSeedMsu
   const widths = header.map((h, c) => Math.max(h.length, ...rows.map((r) => (r[c] as string).length)));
   const line = (cells: string[]) => `  ${cells.map((x, c) => x.padEnd(widths[c] as number)).join('   ')}`.trimEnd();
   return [
-    'Under each reading (super-Eddington: P(λ_Edd > 1) > 0.84; fractions of the objects that have the quantity):',
+    'Under each reading (super-Eddington: P(λ_Edd > 1) > 0.84; fractions of the objects that have the quantity, upper-limit masses left out):',
     line(header),
     ...rows.map(line),
     '  Single-epoch virial masses carry 0.3–0.5 dex systematic uncertainty, and the calibrations are local ones extrapolated.',

@@ -29,11 +29,13 @@ export interface ReadingSummary {
   objects: number;
   /** P(λ_Edd > 1) > 0.84, among objects with an Eddington ratio. */
   superEddington: SummaryFraction;
-  /** log M_BH more than 1 dex above the local relation (nominal), among objects with a host measurement. */
+  /** log M_BH more than 1 dex above the local relation (nominal), among objects with a host measurement and a measured (not upper-limit) mass. */
   overMassive: SummaryFraction;
-  /** λ > 1 needed to grow from the light seed, among objects with a required λ. */
+  /** λ > 1 needed to grow from the light seed, among objects with a required λ from a measured (not upper-limit) mass. */
   needsSuperEddingtonLight: SummaryFraction;
+  /** Median log M_BH of the measured masses (upper limits left out). */
   medianLogMbh: number | null;
+  /** Median log λ_Edd of the measured ratios (bounds left out). */
   medianLogEddRatio: number | null;
 }
 
@@ -43,22 +45,32 @@ function wilson(k: string, n: string, sign: '-' | '+'): string {
   return `(${k} + ${z2 / 2} ${sign} ${SUMMARY_INTERVAL_Z} * sqrt(${k} * (${n} - ${k}) / NULLIF(${n}, 0) + ${z2 / 4})) / NULLIF(${n} + ${z2}, ${z2})`;
 }
 
+/**
+ * Per fraction: its key, the column an object must have, the condition it counts, and whether a
+ * bound is left out. A quantity resting on an upper-limit mass (the offset, the required λ) is a
+ * bound, not a measurement: "more than 1 dex above" or "needs λ > 1" does not follow from a bound
+ * that is, so those fractions count measured masses only. P(λ_Edd > 1) is already empty for a bound.
+ */
 const FRACTIONS = [
-  ['super', 'p_super_eddington', 'p_super_eddington > 0.84'],
-  ['over', 'delta_log_mbh_local', 'delta_log_mbh_local > 1'],
-  ['light', 'lambda_req_light', 'lambda_req_light > 1'],
+  ['super', 'p_super_eddington', 'p_super_eddington > 0.84', 'TRUE'],
+  ['over', 'delta_log_mbh_local', 'delta_log_mbh_local > 1', 'NOT mbh_bound'],
+  ['light', 'lambda_req_light', 'lambda_req_light > 1', 'NOT mbh_bound'],
 ] as const;
+
+/** SQL: true when the row's flags (comma-separated) include `flag`. */
+const hasFlag = (flag: string): string => `list_contains(string_split(coalesce(flags, ''), ','), '${flag}')`;
 
 /**
  * The summary query over a table with the readings columns (`reading`, `log_mbh`,
- * `log_edd_ratio`, `p_super_eddington`, `delta_log_mbh_local`, `lambda_req_light`). One row per
+ * `log_edd_ratio`, `p_super_eddington`, `delta_log_mbh_local`, `lambda_req_light`, `flags`).
+ * Bounds are left out of the fractions that would read them as measurements, and of the medians. One row per
  * reading, ordered by reading id; columns as read by {@link summaryFromRow}.
  * @param table - the table or file expression to read (e.g. `readings`, `read_parquet('…')`).
  */
 export function readingSummarySql(table: string): string {
-  const counts = FRACTIONS.flatMap(([key, col, cond]) => [
-    `count(${col})::DOUBLE AS n_${key}`,
-    `(count(*) FILTER (WHERE ${cond}))::DOUBLE AS k_${key}`,
+  const counts = FRACTIONS.flatMap(([key, col, cond, measured]) => [
+    `(count(${col}) FILTER (WHERE ${measured}))::DOUBLE AS n_${key}`,
+    `(count(*) FILTER (WHERE ${cond} AND ${measured}))::DOUBLE AS k_${key}`,
   ]).join(',\n    ');
   const fractions = FRACTIONS.flatMap(([key]) => [
     `n_${key}`,
@@ -67,13 +79,17 @@ export function readingSummarySql(table: string): string {
     `${wilson(`k_${key}`, `n_${key}`, '-')} AS lo_${key}`,
     `${wilson(`k_${key}`, `n_${key}`, '+')} AS hi_${key}`,
   ]).join(',\n  ');
-  return `WITH c AS (
+  return `WITH t AS (
+  SELECT *, ${hasFlag('mbh_upper_limit')} AS mbh_bound,
+    (${hasFlag('edd_ratio_upper_limit')} OR ${hasFlag('edd_ratio_lower_limit')}) AS edd_bound
+  FROM ${table}
+), c AS (
   SELECT reading,
     count(*)::DOUBLE AS objects,
     ${counts},
-    quantile_cont(log_mbh, 0.5) AS median_log_mbh,
-    quantile_cont(log_edd_ratio, 0.5) AS median_log_edd_ratio
-  FROM ${table}
+    quantile_cont(log_mbh, 0.5) FILTER (WHERE NOT mbh_bound) AS median_log_mbh,
+    quantile_cont(log_edd_ratio, 0.5) FILTER (WHERE NOT edd_bound) AS median_log_edd_ratio
+  FROM t
   GROUP BY reading
 )
 SELECT reading, objects,

@@ -23,19 +23,24 @@ function median(values: number[]): number | null {
   return s[lo]! + (s[Math.ceil(pos)]! - s[lo]!) * (pos - lo);
 }
 
-/** The summary of `rows` under the reading `reading`. */
+/** True when the row's flags (comma-separated) include `flag`. */
+const hasFlag = (r: RederivedRow, flag: string): boolean => r.flags.split(',').some((f) => f.trim() === flag);
+const massBound = (r: RederivedRow): boolean => hasFlag(r, 'mbh_upper_limit');
+const eddBound = (r: RederivedRow): boolean => hasFlag(r, 'edd_ratio_upper_limit') || hasFlag(r, 'edd_ratio_lower_limit');
+
+/** The summary of `rows` under the reading `reading`; bounds are left out as the SQL summary leaves them out. */
 export function summarizeRows(reading: string, rows: readonly RederivedRow[]): ReadingSummary {
-  const frac = (get: (r: RederivedRow) => number | null, cond: (x: number) => boolean) => {
-    const have = rows.map(get).filter((x): x is number => x !== null);
+  const frac = (get: (r: RederivedRow) => number | null, cond: (x: number) => boolean, measured: (r: RederivedRow) => boolean = () => true) => {
+    const have = rows.filter(measured).map(get).filter((x): x is number => x !== null);
     return wilsonFraction(have.filter(cond).length, have.length);
   };
   return {
     reading,
     objects: rows.length,
     superEddington: frac((r) => r.p_super_eddington, (x) => x > 0.84),
-    overMassive: frac((r) => r.delta_log_mbh_local, (x) => x > 1),
-    needsSuperEddingtonLight: frac((r) => r.lambda_req_light, (x) => x > 1),
-    medianLogMbh: median(rows.map((r) => r.log_mbh).filter((x): x is number => x !== null)),
-    medianLogEddRatio: median(rows.map((r) => r.log_edd_ratio).filter((x): x is number => x !== null)),
+    overMassive: frac((r) => r.delta_log_mbh_local, (x) => x > 1, (r) => !massBound(r)),
+    needsSuperEddingtonLight: frac((r) => r.lambda_req_light, (x) => x > 1, (r) => !massBound(r)),
+    medianLogMbh: median(rows.filter((r) => !massBound(r)).map((r) => r.log_mbh).filter((x): x is number => x !== null)),
+    medianLogEddRatio: median(rows.filter((r) => !eddBound(r)).map((r) => r.log_edd_ratio).filter((x): x is number => x !== null)),
   };
 }

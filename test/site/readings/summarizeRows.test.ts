@@ -3,11 +3,11 @@ import { summarizeRows, wilsonFraction } from '../../../src/site/readings/summar
 import type { RederivedRow } from '../../../src/site/readings/rederiveBatch.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 
-const row = (i: number, p: number | null, delta: number | null, lam: number | null, mbh: number | null): RederivedRow => ({
+const row = (i: number, p: number | null, delta: number | null, lam: number | null, mbh: number | null, flags = ''): RederivedRow => ({
   id: `o${i}`, log_mbh: mbh, log_mbh_p16: null, log_mbh_p50: null, log_mbh_p84: null, mbh_method: null,
   log_lbol: null, log_lbol_p16: null, log_lbol_p84: null, lbol_method: null,
   log_edd_ratio: mbh === null ? null : -mbh, log_edd_ratio_p16: null, log_edd_ratio_p84: null,
-  p_super_eddington: p, delta_log_mbh_local: delta, p_above_local: null, log_mseed: null, lambda_req_light: lam, lambda_req_heavy: null, flags: '',
+  p_super_eddington: p, delta_log_mbh_local: delta, p_above_local: null, log_mseed: null, lambda_req_light: lam, lambda_req_heavy: null, flags,
 });
 
 describe('summarizeRows', () => {
@@ -30,5 +30,20 @@ describe('summarizeRows', () => {
     expect(s.needsSuperEddingtonLight).toMatchObject({ k: 1, n: 3 });
     expect(s.medianLogMbh).toBe(7);
     expect(summarizeRows('y', rows.slice(0, 2)).medianLogMbh).toBe(6.5);
+  });
+
+  it('leaves bounds out as the SQL summary does: an upper-limit mass from the offset, the light-seed λ and the median mass', () => {
+    const rows = [
+      row(0, 0.9, 1.5, 2, 6),
+      row(1, null, 1.5, 2, 9, 'edd_ratio_lower_limit,lbol_upper_limit,mbh_upper_limit'),
+      row(2, null, 0.5, 0.5, 7, 'edd_ratio_upper_limit'),
+    ];
+    const s = summarizeRows('x', rows);
+    // Row 1's offset of 1.5 dex rests on an upper-limit mass: not counted (with it, 2 of 3).
+    expect(s.overMassive).toMatchObject({ k: 1, n: 2 });
+    expect(s.needsSuperEddingtonLight).toMatchObject({ k: 1, n: 2 });
+    expect(s.medianLogMbh).toBe(6.5);
+    // log λ_Edd = −log M here: only row 0's is not a bound.
+    expect(s.medianLogEddRatio).toBe(-6);
   });
 });
