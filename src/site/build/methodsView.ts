@@ -37,7 +37,7 @@ export interface MethodsView {
   cosmology: { id: string; name?: string; params: NamedValue[]; reference?: string };
   calibrations: CalibrationView[];
   linePriority: string[];
-  bolometric: { id: string; params: NamedValue[]; reference?: string; routes: { label: string; text: string; reference?: string }[] };
+  bolometric: { id: string; params: NamedValue[]; reference?: string; routes: { label: string; text: string; reference?: string; corrections: string[] }[] };
   eddington: NamedValue[];
   growth: { params: NamedValue[]; formula?: string; reference?: string };
   local: { id: string; label?: string; formula?: string; reference?: string; params: NamedValue[] };
@@ -110,6 +110,32 @@ export const BOLOMETRIC_METHODS: Record<string, { text: string; reference: strin
   },
 };
 
+/** The fixed corrections a route's records hold, by band, e.g. 'BC5100 = 10.33'. */
+function routeCorrections(r: unknown): string[] {
+  const recs = isRec(r) && Array.isArray(r.records) ? r.records : [];
+  return recs.filter((x): x is Rec => isRec(x) && typeof x.bc === 'number' && typeof x.band === 'string').map((x) => `BC${String(x.band).replace(/^l/, '')} = ${readerValue(x.bc)}`);
+}
+
+/**
+ * How an object's L_bol was made, for its page: what the route does and the reference the
+ * catalog's build recorded for it, with the fixed correction this catalog used (e.g. BC5100 =
+ * 10.33, Richards et al. 2006), not the tool's default. Falls back to the tool's own words for a
+ * route the sidecar does not record.
+ */
+export function lbolRouteDescription(view: MethodsView, label: string): { text: string; reference?: string } | undefined {
+  const route = view.bolometric.routes.find((r) => r.label === label);
+  const known = BOLOMETRIC_METHODS[label];
+  if (!route && !known) return undefined;
+  const text = (known?.text ?? label).replace(/\.$/, '');
+  const corrections = route?.corrections ?? [];
+  // "… a fixed bolometric correction BC5100" names its value in place; other corrections go after.
+  const inPlace = corrections.find((c) => text.endsWith(c.split(' = ')[0]!));
+  // A value the words already give (the fixed BC3000 and BC1350) is not repeated.
+  const rest = corrections.filter((c) => c !== inPlace && !text.includes(`(${c.split(' = ')[1]})`));
+  const named = inPlace ? `${text.slice(0, text.length - inPlace.split(' = ')[0]!.length)}${inPlace}` : text;
+  return { text: rest.length ? `${named} (${rest.join(', ')})` : named, reference: route?.reference ?? known?.reference };
+}
+
 /** The local relation's record: from the sidecar when it recorded one, else the tool's own record of that id. */
 function localRecord(id: string, recorded: Rec): Rec {
   if (str(recorded.reference)) return recorded;
@@ -175,6 +201,7 @@ export function methodsView(meta: SiteMeta): MethodsView {
             label,
             text: BOLOMETRIC_METHODS[label]?.text ?? label,
             reference: isRec(r) ? str(r.reference) : undefined,
+            corrections: routeCorrections(r),
           }))
         : [],
     },

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { calibrationFormula, localFormula, methodsView } from '../../../src/site/build/methodsView.ts';
+import { calibrationFormula, lbolRouteDescription, localFormula, methodsView } from '../../../src/site/build/methodsView.ts';
 import { normalizeMeta } from '../../../src/site/build/siteMeta.ts';
 import type { SiteMeta } from '../../../src/site/build/siteMeta.ts';
 
@@ -86,5 +86,39 @@ describe('methodsView bolometric routes', () => {
       ['bc3000', 'Shen et al. 2011, ApJS 194, 45'],
     ]);
     expect(m.bolometric.routes[1]!.text).toMatch(/3000 Å continuum/);
+  });
+
+  it("describes an object's route with the correction and reference this catalog recorded, not the tool's default", () => {
+    // As the demo's sidecar records them (BC5100 = 10.33 from Richards et al. 2006, the Hα papers' choice).
+    const richards = { id: 'richards06_bc5100', band: 'l5100', bc: 10.33, reference: 'Richards et al. 2006, ApJS 166, 470 (mean quasar SED), as adopted by Matthee et al. 2024, ApJ 963, 129' };
+    const m = methodsView({
+      raw: {
+        settings: {
+          settings: { bolometric: 'halpha_gh05_bc5100', bc5100: 10.33 },
+          bolometric: {
+            method: 'halpha_gh05_bc5100',
+            routes: {
+              halpha_gh05_bc5100: { records: [{ id: 'gh05_eq1', norm: 5.25e42 }, richards], reference: `Greene & Ho 2005, ApJ 630, 122, eq. 1; ${richards.reference}` },
+              bc5100: { records: [richards], reference: richards.reference },
+            },
+          },
+        },
+      },
+      columns: {},
+    } as unknown as SiteMeta);
+    const ha = lbolRouteDescription(m, 'halpha_gh05_bc5100')!;
+    expect(ha.text).toMatch(/multiplied by a fixed bolometric correction BC5100 = 10\.33$/);
+    expect(ha.reference).toBe(`Greene & Ho 2005, ApJ 630, 122, eq. 1; ${richards.reference}`);
+    expect(ha.reference).not.toMatch(/9\.26|Shen/);
+    expect(lbolRouteDescription(m, 'bc5100')).toEqual({ text: 'The measured 5100 Å continuum multiplied by a fixed bolometric correction BC5100 = 10.33', reference: richards.reference });
+    // A value the words already give is not repeated.
+    const m3 = methodsView({
+      raw: { settings: { settings: { bolometric: 'bc3000' }, bolometric: { method: 'bc3000', routes: { bc3000: { records: [{ id: 'shen11_bc3000', band: 'l3000', bc: 5.15 }], reference: 'Shen et al. 2011, ApJS 194, 45' } } } } },
+      columns: {},
+    } as unknown as SiteMeta);
+    expect(lbolRouteDescription(m3, 'bc3000')!.text).toBe('The measured 3000 Å continuum multiplied by a fixed bolometric correction (5.15)');
+    // A route the sidecar does not record keeps the tool's words; an unknown label has none.
+    expect(lbolRouteDescription(m, 'bc3000')?.text).toMatch(/3000 Å continuum/);
+    expect(lbolRouteDescription(m, 'nonsense')).toBeUndefined();
   });
 });
