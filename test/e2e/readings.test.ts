@@ -120,6 +120,31 @@ describe('readings', () => {
     }
   });
 
+  it('shows a bound under every reading with its sign and no interval, as the main table does', async () => {
+    // A referee found an upper-limit mass shown there as a bare number (6.28, with λ and the offset likewise).
+    const [lim] = (await nodeQuery(inject('demoParquet'), `SELECT id FROM census WHERE contains(coalesce(flags, ''), 'mbh_upper_limit') AND log_mbh IS NOT NULL ORDER BY id LIMIT 1`)) as [{ id: string }];
+    const site = await openSite(browser, inject('siteUrl'));
+    try {
+      const { page } = site;
+      const { objectSlug } = await import('../../src/site/objectSlug.ts');
+      await page.goto(new URL(`object/${objectSlug(lim.id)}/`, inject('siteUrl')).href);
+      const standard = await page.locator('[data-object-readings] tr[data-reading-value="standard"] td').evaluateAll((tds) => tds.map((t) => (t.textContent ?? '').trim()));
+      expect(standard[0], `log M_BH cell: ${standard[0]}`).toMatch(/^< \d+\.\d\d$/);
+      expect(standard[1]).toMatch(/^< /);
+      expect(standard[2]).toMatch(/^[<>] /);
+      expect(standard[3]).toBe('—');
+      expect(standard[4]).toMatch(/^< /);
+      // A measured object's cells carry no sign, and its mass its 16–84 % interval.
+      const [meas] = (await nodeQuery(inject('demoParquet'), `SELECT id FROM census WHERE NOT contains(coalesce(flags, ''), '_limit') AND log_mbh_p16 IS NOT NULL AND log_edd_ratio IS NOT NULL ORDER BY id LIMIT 1`)) as [{ id: string }];
+      await page.goto(new URL(`object/${objectSlug(meas.id)}/`, inject('siteUrl')).href);
+      const measured = await page.locator('[data-object-readings] tr[data-reading-value="standard"] td').evaluateAll((tds) => tds.map((t) => (t.textContent ?? '').trim()));
+      expect(measured[0]).toMatch(/^\d+\.\d\d \d+\.\d\d – \d+\.\d\d$/);
+      expect(measured.slice(1, 3).some((c) => /^[<>]/.test(c))).toBe(false);
+    } finally {
+      await site.close();
+    }
+  });
+
   it('derives a custom reading live from its URL, with the CLI\'s numbers for the same reading and seed', async () => {
     // L_bol/L5100 = 5 and nothing else is the small_bolometric reading: the browser's rows must be the CLI's.
     const site = await openSite(browser, inject('siteUrl'));
