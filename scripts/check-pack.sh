@@ -45,6 +45,18 @@ npx --no-install dawn-census site build -c census.config.yaml --out site
 test -f site/index.html
 grep -q 'href="/census/' site/index.html || { echo "pack: the built site ignores site.base" >&2; exit 1; }
 echo "pack: installed tarball derived the demo catalog and built its site under /census/"
+# A site build replaces its whole folder: the folder of the config is refused and left as it was,
+# and a second build replaces the first one's folder.
+before="$(ls -A | sort | tr '\n' ' ')"
+status=0; npx --no-install dawn-census site build -c census.config.yaml --out . 2> refused.log || status=$?
+grep -q 'holds census.config.yaml' refused.log || { cat refused.log >&2; echo "pack: site build --out . was not refused" >&2; exit 1; }
+[ "$status" = 64 ] || { echo "pack: site build --out . exited $status, not 64" >&2; exit 1; }
+after="$(ls -A | grep -v '^refused.log$' | sort | tr '\n' ' ')"
+[ "$before" = "$after" ] || { echo "pack: site build --out . changed the folder: $before -> $after" >&2; exit 1; }
+npx --no-install dawn-census site build -c census.config.yaml --out site > rebuild.log 2>&1 || { cat rebuild.log >&2; echo "pack: a second site build into the same folder failed" >&2; exit 1; }
+test -f site/index.html && test -f site/.dawn-census-site.json
+if ls -d site.tmp-dawn-census-* site.old-dawn-census-* >/dev/null 2>&1; then echo "pack: the site build left a staging folder" >&2; exit 1; fi
+echo "pack: site build refuses the config's folder (exit 64, nothing changed) and replaces its own earlier site"
 
 # A data folder with no node_modules above it, the tool run from where it is installed (as after a
 # global install or with npx): the site build must still find the site's dependencies.

@@ -60,7 +60,10 @@ export const SITE_HELP = `Usage: dawn-census site build -c census.config.yaml [-
 
 build    builds the static site for the catalog the config derives (its output, else
          <input name>.census.parquet beside the input) into --out (default dist), for the
-         base path in the config's site.base. Run dawn-census derive first.
+         base path in the config's site.base. Run dawn-census derive first. The build
+         replaces the whole --out folder, so it must be new, empty or a site built before;
+         a folder holding anything else (or the config or the catalog) is refused. The site
+         is built beside it and moved into place only when the build succeeds.
 preview  serves the built folder at that base path, with HTTP range requests, until Ctrl-C.
 
 Publish the folder on any static host that answers HTTP range requests (the query page reads

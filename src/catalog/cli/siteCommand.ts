@@ -1,5 +1,5 @@
 import { existsSync } from 'node:fs';
-import { readFile } from 'node:fs/promises';
+import { readFile, rm } from 'node:fs/promises';
 import { register } from 'node:module';
 import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
@@ -8,6 +8,7 @@ import { ConfigError } from '../config/ConfigError.ts';
 import { PUBLICATION_FIELDS, publicationNotes, type PublicationText } from '../config/publicationGaps.ts';
 import { terminalText } from '../../shared/text/terminalText.ts';
 import { defaultOutputPath, outputPaths } from '../derive/outputPaths.ts';
+import { checkSiteOut, commitSite, siteStaging } from '../outputs/siteOutput.ts';
 import { serveStatic } from '../serve/staticServer.ts';
 import type { TextOut } from './cliIo.ts';
 import { UsageError } from './UsageError.ts';
@@ -84,18 +85,23 @@ export async function siteBuild(args: SiteArgs, log: TextOut): Promise<{ out: st
   if (!catalog) throw new ConfigError(`${label}: neither output nor input.path says which catalog to publish`);
   if (!existsSync(catalog)) throw new ConfigError(`${label}: the catalog ${catalog} does not exist yet: run dawn-census derive -c ${args.config} first`);
   const out = path.resolve(args.out);
+  // The build replaces its whole folder: only a new, empty or earlier site folder may be it.
+  await checkSiteOut(out, [args.config, catalog, ...(config.input ? [config.input.path] : [])], args.out);
+  const staging = siteStaging(out);
   const base = normalBase(config.site.base);
   const metaPath = outputPaths(catalog).meta;
   const recorded = await readRecordedPublication(metaPath);
   for (const note of publicationNotes(recorded, config, { config: label, meta: path.basename(metaPath) })) log.write(`${terminalText(note)}\n`);
   // Astro's build reads the catalog, base and output folder from these (see astro.config.mjs).
   const saved = { CENSUS_CATALOG: process.env.CENSUS_CATALOG, CENSUS_BASE: process.env.CENSUS_BASE, CENSUS_OUT_DIR: process.env.CENSUS_OUT_DIR };
-  Object.assign(process.env, { CENSUS_CATALOG: catalog, CENSUS_BASE: base, CENSUS_OUT_DIR: out });
+  Object.assign(process.env, { CENSUS_CATALOG: catalog, CENSUS_BASE: base, CENSUS_OUT_DIR: staging });
   try {
     registerSiteResolveHook();
     const { build } = await import('astro');
     await build({ root: PACKAGE_ROOT, logLevel: 'warn' });
+    await commitSite(staging, out, { catalog: path.basename(catalog), base });
   } catch (e) {
+    await rm(staging, { recursive: true, force: true });
     throw new Error(`the site build failed: ${(e as Error).message.split('\n')[0]}`);
   } finally {
     for (const [k, v] of Object.entries(saved)) {
