@@ -21,7 +21,13 @@ const bibEscape = (s: string): string => s.replace(/[\\{}]/g, (c) => `\\${c}`).r
 
 /** A BibTeX `@misc` entry for the catalog; `url` is where the site is published, when known. */
 export function bibtexOf(c: CitableCatalog, year: number, url?: string): string {
-  const authors = c.publication?.authors?.map((a) => `{${bibEscape(a.name)}}`).join(' and ') ?? (c.group ? `{${bibEscape(c.group)}}` : '{Anonymous}');
+  // One braced value: persons joined by "and" (BibTeX splits them into first and last names; a
+  // name that itself holds the word "and" is braced so it stays one name); a group doubly braced,
+  // so that it is one name and not split into first and last.
+  const person = (name: string): string => (/\band\b/i.test(name) ? `{${bibEscape(name)}}` : bibEscape(name));
+  const authors = c.publication?.authors?.length
+    ? `{${c.publication.authors.map((a) => person(a.name)).join(' and ')}}`
+    : `{{${bibEscape(c.group ?? 'Anonymous')}}}`;
   const key = (c.publication?.authors?.[0]?.name.split(/\s+/).pop() ?? c.group ?? 'catalog').replace(/[^A-Za-z0-9]/g, '') + year;
   const fields: [string, string | undefined][] = [
     ['author', authors],
