@@ -44,7 +44,9 @@ Options:
 Writes, beside the output <name>.parquet:
   <name>.meta.json        settings, references, input and config SHA-256, counts, columns
   <name>.rejections.csv   every problem found in a row (header only when there is none)
-All three files are replaced together, and only when the run succeeds. An existing file is
+  <name>.readings.parquet every object under every reading of the broad lines
+and the ECSV, VOTable or FITS copies asked for. All are replaced together, and only when the
+run succeeds. An existing file is
 replaced only when dawn-census wrote it (else add --force).
 
 Rows with problems stay in the output, flagged "invalid_input" with empty derived values.
@@ -64,7 +66,8 @@ build    builds the static site for the catalog the config derives (its output, 
          replaces the whole --out folder, so it must be new, empty or a site built before;
          a folder holding anything else (or the config or the catalog) is refused. The site
          is built beside it and moved into place only when the build succeeds.
-preview  serves the built folder at that base path, with HTTP range requests, until Ctrl-C.
+preview  serves the built folder at the base path it was built for, with HTTP range
+         requests, until Ctrl-C.
 
 Publish the folder on any static host that answers HTTP range requests (the query page reads
 the Parquet file in pieces).

@@ -8,8 +8,8 @@ import { ConfigError } from '../config/ConfigError.ts';
 import { PUBLICATION_FIELDS, publicationNotes, type PublicationText } from '../config/publicationGaps.ts';
 import { terminalText } from '../../shared/text/terminalText.ts';
 import { defaultOutputPath, outputPaths } from '../derive/outputPaths.ts';
-import { checkSiteOut, commitSite, siteStaging } from '../outputs/siteOutput.ts';
-import { serveStatic } from '../serve/staticServer.ts';
+import { checkSiteOut, commitSite, SITE_MARKER, siteStaging } from '../outputs/siteOutput.ts';
+import { PortUnavailable, serveStatic } from '../serve/staticServer.ts';
 import type { TextOut } from './cliIo.ts';
 import { UsageError } from './UsageError.ts';
 
@@ -129,8 +129,19 @@ async function readRecordedPublication(metaPath: string): Promise<PublicationTex
 export async function sitePreview(args: SiteArgs, log: TextOut): Promise<{ url: string; close: () => Promise<void> }> {
   const out = path.resolve(args.out);
   if (!existsSync(path.join(out, 'index.html'))) throw new UsageError(`${args.out} holds no built site: run dawn-census site build -c <config> --out ${args.out} first`);
-  const base = args.config ? normalBase((await loadConfig(args.config)).site.base) : '/';
-  const server = await serveStatic(out, base, args.port);
+  // The base the site was built for (its marker records it); else the config's; else the root.
+  const built = await readFile(path.join(out, SITE_MARKER), 'utf8').then(
+    (t) => (JSON.parse(t) as { base?: unknown }).base,
+    () => undefined,
+  );
+  const base = typeof built === 'string' ? normalBase(built) : args.config ? normalBase((await loadConfig(args.config)).site.base) : '/';
+  let server;
+  try {
+    server = await serveStatic(out, base, args.port);
+  } catch (e) {
+    if (e instanceof PortUnavailable) throw new UsageError(e.message);
+    throw e;
+  }
   log.write(`Serving ${out} at ${server.url} (Ctrl-C stops it)\n`);
   return { url: server.url, close: () => server.close() };
 }

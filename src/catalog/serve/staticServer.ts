@@ -36,6 +36,11 @@ export interface StaticServer {
 }
 
 /** Serves `root` under `base` (which starts and ends with '/') on 127.0.0.1:`port` (0 = any free port). */
+/** The preview's port cannot be had (in use, or refused): the CLI prints it in one line (exit 64). */
+export class PortUnavailable extends Error {
+  override name = 'PortUnavailable';
+}
+
 export async function serveStatic(root: string, base = '/', port = 0): Promise<StaticServer> {
   const log: { path: string; bytes: number }[] = [];
   const server = createServer(async (req, res) => {
@@ -117,7 +122,17 @@ export async function serveStatic(root: string, base = '/', port = 0): Promise<S
       res.writeHead(500, { 'content-type': 'text/plain' }).end(String(err));
     }
   });
-  await new Promise<void>((resolve) => server.listen(port, '127.0.0.1', resolve));
+  // A port in use (or not ours to take) is a one-line error, not an unhandled 'error' event.
+  await new Promise<void>((resolve, reject) => {
+    const failed = (err: NodeJS.ErrnoException): void => {
+      reject(new PortUnavailable(err.code === 'EADDRINUSE' ? `port ${port} is in use: choose another with --port (0 takes a free one)` : `cannot listen on port ${port} (${err.code ?? err.message}): choose another with --port`));
+    };
+    server.once('error', failed);
+    server.listen(port, '127.0.0.1', () => {
+      server.off('error', failed);
+      resolve();
+    });
+  });
   const addr = server.address();
   const actualPort = typeof addr === 'object' && addr ? addr.port : port;
   return {
