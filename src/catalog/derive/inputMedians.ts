@@ -105,8 +105,15 @@ export class InputMedians {
     if (problem) throw new CatalogError(problem);
   }
 
-  /** The message of the first implausible median of the rows added so far, or null. */
+  /**
+   * The message naming every column whose median is implausible in the rows added so far (one
+   * line), or null. Every such column is named at once, so that one run shows them all. A flux in
+   * a scaled unit is not given one answer: the scale that would put its median at a typical
+   * 1e42.5 erg/s is only a hint, and a factor of ten off is 0.47 dex in mass, so the message asks
+   * for the unit the file uses.
+   */
   problem(): string | null {
+    const found: { name: string; text: string }[] = [];
     for (const [line, m] of this.lum) {
       const med = m.median();
       const [lo, hi] = PLAUSIBLE_MEDIAN.logLumErgS;
@@ -115,14 +122,11 @@ export class InputMedians {
       const isFlux = col.name.startsWith('flux_');
       const shift = Math.round(med - 42.5);
       const likely = isFlux
-        ? `the fluxes look like they are in units of 1e${-shift} erg s-1 cm-2`
+        ? `the fluxes look like they are in a scaled unit, about 1e${-shift} erg s-1 cm-2 if their median luminosity is a typical 1e42.5 erg/s: give the unit your file uses (often 1e-17 to 1e-20 erg s-1 cm-2)`
         : med < lo
           ? 'the values look like log10 of the luminosity (log(erg/s))'
-          : `the luminosities look like they are in units of 1e${-shift} erg s-1`;
-      return (
-        `${this.label}: column ${col.label}, read in ${col.unitLabel}: the median broad-line luminosity is ${fmt(med)} erg/s, ` +
-        `outside 1e${lo}–1e${hi}: ${likely}; set columns.${col.name}.unit in the config, or implausible_medians_intended: true if the values are right`
-      );
+          : `the luminosities look like they are in a scaled unit, about 1e${-shift} erg s-1 if their median is a typical 1e42.5 erg/s: give the unit your file uses`;
+      found.push({ name: col.name, text: `column ${col.label}, read in ${col.unitLabel}: the median broad-line luminosity is ${fmt(med)} erg/s, outside 1e${lo}–1e${hi}: ${likely}` });
     }
     for (const [line, m] of this.fwhm) {
       const med = m.median();
@@ -136,11 +140,10 @@ export class InputMedians {
             ? 'the widths look like cm/s'
             : 'the widths look like m/s'
           : 'the widths look like they are in 1000 km/s or in Å';
-      return (
-        `${this.label}: column ${col.label}, read in ${col.unitLabel}: the median FWHM is ${fmt(med)} km/s, outside ${lo}–${hi} km/s: ` +
-        `${likely}; set columns.${col.name}.unit in the config, or implausible_medians_intended: true if the values are right`
-      );
+      found.push({ name: col.name, text: `column ${col.label}, read in ${col.unitLabel}: the median FWHM is ${fmt(med)} km/s, outside ${lo}–${hi} km/s: ${likely}` });
     }
-    return null;
+    if (found.length === 0) return null;
+    const fix = found.length === 1 ? `set columns.${found[0]!.name}.unit in the config` : `set the unit of each in the config (${found.map((f) => `columns.${f.name}.unit`).join(', ')})`;
+    return `${this.label}: ${found.map((f) => f.text).join('; ')}; ${fix}, or implausible_medians_intended: true if the values are right`;
   }
 }

@@ -45,7 +45,9 @@ describe('the catalog-level plausibility check', () => {
     expect(msg).not.toContain('\n');
     expect(msg).toMatch(/column flux_halpha/);
     expect(msg).toMatch(/median broad-line luminosity is \d\.\de\+60 erg\/s/);
-    expect(msg).toMatch(/units of 1e-18 erg s-1 cm-2/);
+    // The scale a typical median luminosity would imply is a hint, not an answer (a group's 1e-18 fluxes of faint objects read as about 1e-19).
+    expect(msg).toMatch(/about 1e-18 erg s-1 cm-2 if their median luminosity is a typical 1e42\.5 erg\/s: give the unit your file uses/);
+    expect(msg).toMatch(/set columns\.flux_halpha\.unit in the config/);
     expect(await readdir(path.join(dir, 'out')).catch(() => [])).toEqual([]);
   });
 
@@ -53,6 +55,15 @@ describe('the catalog-level plausibility check', () => {
     const e = await derive(csv(3e-18, 2.5e6));
     expect(e).toBeInstanceOf(CatalogError);
     expect((e as Error).message).toMatch(/column fwhm_halpha.*median FWHM is 2\.\de\+6 km\/s.*look like m\/s/);
+  });
+
+  it('names every implausible column in its one line, so that one run shows them all', async () => {
+    // Fluxes in 1e-18 units and widths in 1000 km/s at once: it named the flux only, and the next run the width.
+    const e = await derive(csv(3, 2.5));
+    expect(e).toBeInstanceOf(CatalogError);
+    const msg = (e as Error).message;
+    expect(msg).not.toContain('\n');
+    expect(msg).toMatch(/column flux_halpha, .*; column fwhm_halpha, .*look like they are in 1000 km\/s or in Å; set the unit of each in the config \(columns\.flux_halpha\.unit, columns\.fwhm_halpha\.unit\), or implausible_medians_intended: true/);
   });
 
   it('derives the same catalog when the config says the values are intended', async () => {
