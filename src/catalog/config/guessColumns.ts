@@ -107,6 +107,8 @@ function canonicalOfUcd(ucd: string | undefined): string | null {
 function baseOfWords(words: readonly string[]): string | null {
   const whole = WHOLE_NAME_OF.get(words.join(''));
   if (whole) return whole;
+  // An identifier of some kind (`ID_obj`, `MSA_ID`): several such columns are left to the user.
+  if (words.includes('id') && words.length <= 3) return 'id';
   if (words.includes('log')) return null; // a logarithm of a line or continuum luminosity is not what the canonical columns hold
   const continuum = CONTINUUM.exec(words.join(''));
   if (continuum) return `lam_l_${continuum[1]}`;

@@ -38,6 +38,8 @@ describe('canonicalOfName', () => {
     ['z_spec', 'z'],
     ['Name', 'id'],
     ['source_id', 'id'],
+    ['ID_obj', 'id'],
+    ['MSA_ID', 'id'],
     ['RAJ2000', 'ra'],
     ['DEJ2000', 'dec'],
     ['logMstar', 'log_mstar'],
@@ -114,6 +116,11 @@ describe('guessColumns', () => {
     ]);
     expect(g.guesses).toEqual([]);
     expect(g.passthrough).toEqual([]);
+  });
+
+  it('leaves two identifier-like columns to the user', () => {
+    const g = guessColumns([{ name: 'ID_obj' }, { name: 'MSA_ID' }, { name: 'z' }]);
+    expect(g.ambiguous).toEqual([{ canonical: 'id', candidates: ['ID_obj', 'MSA_ID'] }]);
   });
 
   it('prefers a UCD that names the main identifier or the redshift to a name', () => {
