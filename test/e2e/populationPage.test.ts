@@ -32,7 +32,7 @@ describe('population page', () => {
       await page.goto(inject('siteUrl'));
       await page.locator('nav a', { hasText: 'Population' }).click();
       await page.waitForURL('**/population/');
-      await expect(page.locator('[data-population-sentence]').textContent()).resolves.toMatch(/^After selection, (.+ local relation .+\d\.\dσ|.+ \d+\.\dσ (above|below) the local relation )/);
+      await expect(page.locator('[data-population-sentence]').textContent()).resolves.toMatch(/^Corrected for selection, (.+ local relation .+\d\.\dσ|.+ \d+\.\d\d dex \(\d+\.\dσ\) (above|below) the local relation ).*; that σ is statistical only: the 0\.3–0\.5 dex systematic uncertainty/);
       await expect(page.locator('[data-fit-numbers] tbody tr').count()).resolves.toBe(10);
       await waitForSurveyCharts(page);
       for (const key of CHARTS) await expect(page.locator(`[data-survey-chart="${key}"] svg`).count(), key).resolves.toBeGreaterThan(0);
@@ -50,7 +50,7 @@ describe('population page', () => {
         const res = await page.request.get(href);
         expect(res.status(), href).toBe(200);
         const body = await res.body();
-        if (href.endsWith('.json')) expect(JSON.parse(body.toString('utf8')).relation.sentence).toMatch(/^After selection/);
+        if (href.endsWith('.json')) expect(JSON.parse(body.toString('utf8')).relation.sentence).toMatch(/^Corrected for selection/);
         // Parquet files begin with the magic "PAR1" (Apache Parquet format specification)
         else expect(body.subarray(0, 4).toString('latin1'), href).toBe('PAR1');
       }

@@ -16,7 +16,7 @@ const written = {
     intrinsic: { alpha: q(6.5, 6.7, 6.9), beta: q(0.9, 1.1, 1.3), sigma: q(0.4, 0.5, 0.6) },
     naive: { alpha: q(7.3, 7.4, 7.5), beta: q(0.3, 0.4, 0.5), sigma: q(0.2, 0.3, 0.4) },
     selectionBiasDex: 0.8, detectableFraction: 0.01, localRelation: 'rv15_agn', offsetFromLocal: q(-0.2, 0.1, 0.4), offsetSigmas: 0.33,
-    sentence: 'After selection, the sample is consistent with the local relation within 0.3σ.',
+    sentence: 'Corrected for selection, the sample is consistent with the local relation within 0.3σ.',
   },
   assumptions: { eddingtonRatio: { meanLog: -0.6, sigmaLog: 0.4 }, sampler: { walkers: 16, steps: 800, burn: 300 } },
 };
