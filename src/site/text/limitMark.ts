@@ -26,12 +26,22 @@ const UPPER_FLAG: Readonly<Record<string, string>> = {
 /**
  * '<' where a derived column of `row` is an upper limit, '>' where it is a lower limit, ''
  * where it is a measurement: from the `_is_limit` columns, the Eddington ratio's direction
- * from its flags, and for older catalogs the flags alone. A bound is shown with its sign and
+ * from its flags, and for older catalogs the flags alone; a line luminosity (and an L5100 made
+ * from it) from the input's `flux_<line>_is_limit`. A bound is shown with its sign and
  * never with a 16–84 % interval.
  * @param column - a derived column name, e.g. 'log_mbh'.
  * @param row - the catalog row (column name → value).
  */
 export function limitMark(column: string, row: Readonly<Record<string, unknown>>): '<' | '>' | '' {
+  // A broad line's luminosity from an upper-limit flux is an upper limit; so is the L5100 made
+  // from it when no continuum was measured (derived from Hα when there is Hα, else from Hβ).
+  const lum = /^log_lum_(halpha|hbeta|mgii|civ)$/.exec(column);
+  if (lum) return row[`flux_${lum[1]}_is_limit`] === true ? '<' : '';
+  if (column === 'log_l5100') {
+    if (row.lam_l_5100 !== null && row.lam_l_5100 !== undefined) return '';
+    const from = row.log_lum_halpha !== null && row.log_lum_halpha !== undefined ? 'halpha' : 'hbeta';
+    return row[`flux_${from}_is_limit`] === true ? '<' : '';
+  }
   const flags = splitFlags(row.flags);
   if (column === 'log_edd_ratio') {
     if (flags.includes('edd_ratio_lower_limit')) return '>';
