@@ -21,8 +21,10 @@ export type CatalogRow = Record<string, CellValue>;
 
 export interface CatalogSummary {
   objects: number;
-  /** Objects with a derived black-hole mass. */
+  /** Objects with a measured black-hole mass (upper limits not counted). */
   derived: number;
+  /** Objects whose black-hole mass is an upper limit. */
+  massLimits: number;
   /** Objects with at least one flag. */
   flagged: number;
   /** Objects with at least one flag that changes how a number should be read (src/site/text/readingFlags.ts). */
@@ -92,9 +94,16 @@ export async function readCatalog(files: CatalogFiles = catalogFiles()): Promise
       return o;
     });
     const has = (c: string) => names.includes(c);
+    // An upper-limit mass: its _is_limit column, or for a catalog written before those its flag.
+    const massBound = has('log_mbh_is_limit')
+      ? 'coalesce(log_mbh_is_limit, false)'
+      : has('flags')
+        ? "list_contains(string_split(coalesce(flags, ''), ','), 'mbh_upper_limit')"
+        : 'false';
     const s = await con.runAndReadAll(
       `SELECT count(*)::DOUBLE AS objects,
-        ${has('log_mbh') ? 'count(log_mbh)::DOUBLE' : '0::DOUBLE'} AS derived,
+        ${has('log_mbh') ? `(count(log_mbh) FILTER (WHERE NOT ${massBound}))::DOUBLE` : '0::DOUBLE'} AS derived,
+        ${has('log_mbh') ? `(count(log_mbh) FILTER (WHERE ${massBound}))::DOUBLE` : '0::DOUBLE'} AS mass_limits,
         ${has('flags') ? "count(*) FILTER (WHERE coalesce(trim(flags), '') <> '')::DOUBLE" : '0::DOUBLE'} AS flagged,
         ${has('flags') ? `count(*) FILTER (WHERE list_has_any(list_transform(string_split(coalesce(flags, ''), ','), f -> trim(f)), [${READING_FLAGS.map(quote).join(', ')}]))::DOUBLE` : '0::DOUBLE'} AS caveated,
         ${has('z') ? 'min(z)' : 'NULL::DOUBLE'} AS z_min, ${has('z') ? 'max(z)' : 'NULL::DOUBLE'} AS z_max
@@ -112,6 +121,7 @@ export async function readCatalog(files: CatalogFiles = catalogFiles()): Promise
     const summary: CatalogSummary = {
       objects: Number(o!.objects),
       derived: Number(o!.derived),
+      massLimits: Number(o!.mass_limits),
       flagged: Number(o!.flagged),
       caveated: Number(o!.caveated),
       zMin: o!.z_min ?? null,
