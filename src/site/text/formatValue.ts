@@ -60,6 +60,9 @@ function numberFor(c: string, value: number): string {
   if (c === 'dl_mpc' || c.endsWith('_mpc')) return formatFixed(value, 0);
   if (/^fwhm_/.test(c) || c === 'sigma_star' || c.startsWith('sigma_star_')) return formatFixed(value, 0);
   if (/^(flux|lum|lam_l)_/.test(c)) return formatScientific(value, 2);
+  // A probability that rounds to 0 or 1 but is neither says so: 2 draws in 2000 are not "0.00".
+  if (c.startsWith('p_') && value > 0 && value < 0.005) return '< 0.01';
+  if (c.startsWith('p_') && value < 1 && value > 0.995) return '> 0.99';
   if (isLog(c) || c.startsWith('p_') || c === 'local_offset_sigma' || c === 'age_gyr' || c === 'mu' || c === 'av' || c.startsWith('av_') || c.startsWith('balmer_decrement')) return formatFixed(value, 2);
   return formatGeneral(value);
 }

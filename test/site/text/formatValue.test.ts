@@ -10,6 +10,16 @@ describe('formatValue', () => {
     expect(formatValue('median_log_edd_ratio', -0.6183)).toBe('−0.62');
     expect(formatValue('p84', -0.00255)).toBe('0.00');
   });
+  it('says a probability is below 0.01 or above 0.99 rather than round it to 0.00 or 1.00', () => {
+    // 2 draws in 2000 showed as "0.00" on an object page.
+    expect(formatValue('p_super_eddington', 0.001)).toBe('< 0.01');
+    expect(formatValue('p_above_local', 0.9995)).toBe('> 0.99');
+    expect(formatValue('p_super_eddington', 0)).toBe('0.00');
+    expect(formatValue('p_super_eddington', 1)).toBe('1.00');
+    expect(formatValue('p_super_eddington', 0.005)).toBe('0.01');
+    expect(formatValue('p_above_local', 0.42)).toBe('0.42');
+  });
+
   it('prints redshifts to 0.001 and coordinates to 1e-5 degrees', () => {
     expect(formatValue('z', 6.12345)).toBe('6.123');
     expect(formatValue('ra', 150.1234567)).toBe('150.12346');
