@@ -99,6 +99,11 @@ describe('population page', () => {
       expect(text).toContain('without a description of its survey');
       expect(text).toContain('dawn-census population -c census.config.yaml');
       await expect(page.locator('[data-survey-chart]').count()).resolves.toBe(0);
+      // Visitors are told there are none; the how-to is folded away for the authors, and no page links here.
+      await expect(page.locator('[data-population-missing] details.for-authors').getAttribute('open')).resolves.toBeNull();
+      await expect(page.locator('nav[aria-label="Site"] a[href$="population/"]').count()).resolves.toBe(0);
+      await page.goto(new URL('', inject('hostileUrl')).href);
+      await expect(page.locator('nav[aria-label="Site"] a[href$="population/"]').count()).resolves.toBe(0);
       const res = await page.request.get(new URL('data/catalog.population.json', inject('hostileUrl')).href);
       expect(res.status()).toBe(404);
       expect(site.errors).toEqual([]);
