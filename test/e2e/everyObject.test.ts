@@ -224,6 +224,15 @@ describe('rough edges a newcomer hit', () => {
       await page.waitForFunction((id) => [...document.querySelectorAll('[data-object-list] tbody tr')].some((r) => r.textContent?.includes(id)), most.id);
       const list = await measure(page, '[data-object-list] table');
       expect(list.length).toBeGreaterThan(0);
+      // Its upper-limit mass is shown as a bound, as on its own page (the list showed a bare number).
+      const massCell = await page.evaluate((id) => {
+        const table = document.querySelector('[data-object-list] table')!;
+        const col = [...table.querySelectorAll('thead th')].findIndex((th) => th.textContent?.includes('log_mbh'));
+        const row = [...table.querySelectorAll('tbody tr')].find((r) => r.textContent?.includes(id))!;
+        return row.querySelectorAll('td')[col]?.textContent ?? '';
+      }, most.id);
+      expect(most.flags).toContain('mbh_upper_limit');
+      expect(massCell).toMatch(/^< \d+\.\d\d$/);
       for (const r of list) {
         expect(r.flagLines, `object list: ${JSON.stringify(list)}`).toEqual([1]);
         expect(r.mostLines, `object list: ${JSON.stringify(list)}`).toBe(1);

@@ -8,6 +8,7 @@
 import { CensusDbError, queryCensus } from '../db/duckdb.ts';
 import { bindDbStatus } from '../db/statusView.ts';
 import { objectHrefHere } from '../objectLink.ts';
+import { limitMark } from '../text/limitMark.ts';
 import { formatValue, isNumericType } from '../text/formatValue.ts';
 import { listSql, PAGE_SIZE, sortColumn, type ListSchema, type ListState } from './listQuery.ts';
 import { listStateFromSearch, listStateSearch } from './listState.ts';
@@ -101,6 +102,9 @@ export function mountObjectList(root: HTMLElement): void {
       const body = el('tbody');
       for (let r = 0; r < rows.numRows; r++) {
         const tr = el('tr');
+        // The row by name, for the bounds: an upper-limit mass is shown '< 6.28', as everywhere else.
+        const rec: Record<string, unknown> = {};
+        rows.names.forEach((name, c) => (rec[name] = rows.columns[c]![r]));
         rows.names.forEach((name, c) => {
           const v = rows.columns[c]![r];
           const td = el('td', undefined, isNumericType(rows.types[c] ?? '') ? 'num' : name === 'flags' ? 'flags-cell' : undefined);
@@ -108,7 +112,10 @@ export function mountObjectList(root: HTMLElement): void {
             const a = el('a', String(v));
             a.href = objectHrefHere(String(v));
             td.append(a);
-          } else td.textContent = formatValue(name, v);
+          } else {
+            const mark = v === null || v === undefined ? '' : limitMark(name, rec);
+            td.textContent = `${mark ? `${mark} ` : ''}${formatValue(name, v)}`;
+          }
           tr.append(td);
         });
         body.append(tr);
