@@ -71,7 +71,7 @@ export async function checkTarget(target: string, input: RunInput | null, rule: 
 }
 
 /** The real path of `target` when it exists, else of its nearest existing folder joined with the rest. */
-async function realTarget(target: string): Promise<string> {
+export async function realTarget(target: string): Promise<string> {
   let head = target;
   const rest: string[] = [];
   for (;;) {

@@ -1,6 +1,7 @@
 import { randomBytes } from 'node:crypto';
-import { lstat, readdir, realpath, rename, rm, writeFile } from 'node:fs/promises';
+import { lstat, readdir, rename, rm, writeFile } from 'node:fs/promises';
 import path from 'node:path';
+import { realTarget } from './checkTarget.ts';
 import { OutputRefused } from './OutputRefused.ts';
 
 /**
@@ -27,31 +28,15 @@ function within(inner: string, outer: string): boolean {
   return rel === '' || (!rel.startsWith('..') && !path.isAbsolute(rel));
 }
 
-/** The path with symbolic links resolved as far as it exists. */
-async function resolved(p: string): Promise<string> {
-  let head = path.resolve(p);
-  const tail: string[] = [];
-  for (;;) {
-    try {
-      return path.join(await realpath(head), ...tail);
-    } catch {
-      const parent = path.dirname(head);
-      if (parent === head) return path.join(head, ...tail);
-      tail.unshift(path.basename(head));
-      head = parent;
-    }
-  }
-}
-
 /**
  * Refuses `out` as a site folder unless it is new, an empty folder, or a folder holding
  * {@link SITE_MARKER}; and in every case when it is or contains one of `keep` (the config, the
  * catalog, its input). Throws OutputRefused (exit 64) with one line naming the folder.
  */
 export async function checkSiteOut(out: string, keep: readonly string[], shown: string): Promise<void> {
-  const real = await resolved(out);
+  const real = await realTarget(path.resolve(out));
   for (const k of keep) {
-    if (within(await resolved(k), real)) throw new OutputRefused(`--out ${shown} holds ${path.basename(k)}, and a site build replaces its whole folder: choose a new folder for the site`);
+    if (within(await realTarget(path.resolve(k)), real)) throw new OutputRefused(`--out ${shown} holds ${path.basename(k)}, and a site build replaces its whole folder: choose a new folder for the site`);
   }
   let st;
   try {

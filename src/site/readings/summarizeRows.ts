@@ -6,6 +6,7 @@
  */
 import { SUMMARY_INTERVAL_Z, type ReadingSummary, type SummaryFraction } from '../../core/readings/readingSummary.ts';
 import type { RederivedRow } from './rederiveBatch.ts';
+import { splitFlags } from '../text/flagText.ts';
 
 /** k of n with its Wilson interval (nulls when n = 0). */
 export function wilsonFraction(k: number, n: number): SummaryFraction {
@@ -24,7 +25,7 @@ function median(values: number[]): number | null {
 }
 
 /** True when the row's flags (comma-separated) include `flag`. */
-const hasFlag = (r: RederivedRow, flag: string): boolean => r.flags.split(',').some((f) => f.trim() === flag);
+const hasFlag = (r: RederivedRow, flag: string): boolean => splitFlags(r.flags).includes(flag);
 const massBound = (r: RederivedRow): boolean => hasFlag(r, 'mbh_upper_limit');
 const eddBound = (r: RederivedRow): boolean => hasFlag(r, 'edd_ratio_upper_limit') || hasFlag(r, 'edd_ratio_lower_limit');
 
